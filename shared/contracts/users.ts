@@ -1,0 +1,50 @@
+import { z } from 'zod';
+import { roleSchema } from './common';
+
+export const unitsSchema = z.object({
+  temperature: z.enum(['C', 'F'], { message: 'Temperature unit must be C or F.' }),
+  height: z.enum(['m', 'ft'], { message: 'Height unit must be m or ft.' }),
+  speed: z.enum(['kt', 'ms', 'mph'], { message: 'Speed unit must be kt, ms or mph.' }),
+});
+export type Units = z.infer<typeof unitsSchema>;
+export const defaultUnits: Units = { temperature: 'C', height: 'm', speed: 'kt' };
+
+export const preferencesSchema = z.object({ units: unitsSchema });
+export type Preferences = z.infer<typeof preferencesSchema>;
+
+export const userSummarySchema = z.object({
+  id: z.string(),
+  name: z.string(),
+  email: z.string(),
+  role: roleSchema,
+  disabled: z.boolean(),
+  createdAt: z.string(),
+});
+export type UserSummary = z.infer<typeof userSummarySchema>;
+
+export const meSchema = z.object({
+  user: z.object({ id: z.string(), name: z.string(), email: z.string(), role: roleSchema }),
+  preferences: preferencesSchema,
+});
+export type Me = z.infer<typeof meSchema>;
+
+const password = z
+  .string()
+  .min(10, { message: 'Use at least 10 characters for the password.' })
+  .max(128, { message: 'Keep the password under 128 characters.' });
+
+export const createUserInputSchema = z.object({
+  name: z.string().trim().min(1, { message: 'A name is required.' }).max(100, { message: 'Keep the name under 100 characters.' }),
+  email: z.string().trim().toLowerCase().email({ message: 'Enter a valid e-mail address.' }),
+  password,
+  role: roleSchema,
+});
+export type CreateUserInput = z.infer<typeof createUserInputSchema>;
+
+export const updateUserInputSchema = z
+  .object({
+    role: roleSchema.optional(),
+    disabled: z.boolean().optional(),
+  })
+  .refine((v) => v.role !== undefined || v.disabled !== undefined, { message: 'Change the role or the disabled flag.' });
+export type UpdateUserInput = z.infer<typeof updateUserInputSchema>;

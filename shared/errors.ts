@@ -1,0 +1,32 @@
+/**
+ * Operational error codes shared by server and client, each with the HTTP status the server
+ * answers with and a message written for the person using the product.
+ */
+export const errorCodes = {
+  VALIDATION_FAILED: { status: 400, message: 'Some fields need attention.' },
+  UNAUTHENTICATED: { status: 401, message: 'Please sign in to continue.' },
+  FORBIDDEN: { status: 403, message: 'Your role does not allow this action.' },
+  NOT_FOUND: { status: 404, message: 'We could not find that.' },
+  CONFLICT: { status: 409, message: 'This was changed by someone else since you opened it.' },
+  ALREADY_EXISTS: { status: 409, message: 'That already exists.' },
+  PAYLOAD_TOO_LARGE: { status: 413, message: 'The upload is larger than allowed.' },
+  INTERNAL: { status: 500, message: 'Something went wrong on our side. Please try again.' },
+} as const;
+
+export type ErrorCode = keyof typeof errorCodes;
+
+/** One field problem: `path` is the dotted field name, e.g. `riskLadder.2.colour`. */
+export interface FieldIssue {
+  path: string;
+  message: string;
+}
+
+/** The JSON body of every error response. */
+export interface ApiErrorBody {
+  error: {
+    code: ErrorCode;
+    message: string;
+    issues?: FieldIssue[];
+    details?: Record<string, unknown>;
+  };
+}
