@@ -30,3 +30,16 @@ export interface ApiErrorBody {
     details?: Record<string, unknown>;
   };
 }
+
+/** An expected (operational) failure: a code from the table above, a user message, optional field issues. */
+export interface AppError {
+  code: ErrorCode;
+  message: string;
+  issues?: FieldIssue[];
+  details?: Record<string, unknown>;
+}
+
+/** Builds an AppError; the message defaults to the code's user message. */
+export function appError(code: ErrorCode, message?: string, extra: Pick<AppError, 'issues' | 'details'> = {}): AppError {
+  return { code, message: message ?? errorCodes[code].message, ...extra };
+}

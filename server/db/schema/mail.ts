@@ -1,0 +1,44 @@
+import { index, integer, jsonb, pgEnum, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+
+export const outboxStatusEnum = pgEnum('outbox_status', ['queued', 'sending', 'sent', 'failed']);
+
+/**
+ * Durable outbox: a message is written in the same transaction as the event that causes it,
+ * then a worker sends it with retries. `dedupeKey` makes queueing idempotent.
+ */
+export const mailOutbox = pgTable(
+  'mail_outbox',
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    dedupeKey: text().notNull().unique(),
+    toAddress: text().notNull(),
+    subject: text().notNull(),
+    html: text().notNull(),
+    text: text().notNull(),
+    headers: jsonb().$type<Record<string, string>>().notNull().default({}),
+    attachments: jsonb().$type<{ filename: string; cid: string; contentBase64: string; contentType: string }[]>().notNull().default([]),
+    status: outboxStatusEnum().notNull().default('queued'),
+    attempts: integer().notNull().default(0),
+    nextAttemptAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    lastError: text(),
+    sentAt: timestamp({ withTimezone: true }),
+    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index().on(t.status, t.nextAttemptAt)],
+);
+
+/** Messages received by the local SMTP catcher (development, demo and tests). */
+export const caughtMail = pgTable(
+  'caught_mail',
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    fromAddress: text().notNull(),
+    toAddress: text().notNull(),
+    subject: text().notNull(),
+    html: text(),
+    text: text(),
+    headers: jsonb().$type<Record<string, string>>().notNull().default({}),
+    receivedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index().on(t.receivedAt)],
+);

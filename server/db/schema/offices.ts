@@ -1,0 +1,31 @@
+import { boolean, integer, jsonb, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import type { Region, RiskLadder } from '../../../shared/contracts/office';
+
+/** Guidance thresholds per risk level (filled by the authoring work; keyed by ladder key). */
+export type GuidanceThresholds = Record<string, Record<string, number>>;
+
+/** Mail settings an admin may set in the app (the SMTP URL itself comes from the environment). */
+export interface OfficeMailSettings {
+  fromAddress: string;
+  replyTo?: string;
+}
+
+/**
+ * One forecast office and its settings. The risk ladder is read from here by the whole app.
+ * `version` gives optimistic concurrency for the settings page.
+ */
+export const offices = pgTable('offices', {
+  id: uuid().primaryKey().defaultRandom(),
+  slug: text().notNull().unique(),
+  name: text().notNull(),
+  region: jsonb().$type<Region>().notNull(),
+  timeZone: text().notNull(),
+  riskLadder: jsonb().$type<RiskLadder>().notNull(),
+  guidanceThresholds: jsonb().$type<GuidanceThresholds>().notNull().default({}),
+  mailSettings: jsonb().$type<OfficeMailSettings>().notNull().default({ fromAddress: 'outlooks@stormdraft.test' }),
+  /** Four-eyes rule relaxed (one-person night shift); every use is written to the audit trail. */
+  allowSelfApproval: boolean().notNull().default(false),
+  version: integer().notNull().default(0),
+  createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+});

@@ -1,0 +1,9 @@
+import { healthRoutes } from './health.routes';
+import { mailMessagesRoutes } from './mail-messages.routes';
+import { meRoutes } from './me.routes';
+import { officeRoutes } from './office.routes';
+import type { RouteDefinition } from './route-definition';
+import { usersRoutes } from './users.routes';
+
+/** Every API route of the app (better-auth's own routes under /api/auth are separate). */
+export const apiRoutes: RouteDefinition[] = [...healthRoutes, ...meRoutes, ...officeRoutes, ...usersRoutes, ...mailMessagesRoutes];

@@ -1,0 +1,55 @@
+import { eq } from 'drizzle-orm';
+import type { OfficeSettings, OfficeSettingsInput } from '../../shared/contracts/office';
+import { appError, type AppError } from '../../shared/errors';
+import { err, ok, type Result } from '../../shared/result';
+import type { DatabaseOrTransaction } from '../db/client';
+import { offices } from '../db/schema';
+
+type OfficeRow = typeof offices.$inferSelect;
+
+function toSettings(row: OfficeRow): OfficeSettings {
+  return {
+    id: row.id,
+    name: row.name,
+    region: row.region,
+    timeZone: row.timeZone,
+    riskLadder: row.riskLadder,
+    version: row.version,
+    updatedAt: row.updatedAt.toISOString(),
+  };
+}
+
+/** The office this installation serves (one office per installation for now: the first one). */
+export async function findOffice(db: DatabaseOrTransaction): Promise<OfficeRow | undefined> {
+  const [row] = await db.select().from(offices).orderBy(offices.createdAt).limit(1);
+  return row;
+}
+
+export async function getOfficeSettings(db: DatabaseOrTransaction): Promise<Result<OfficeSettings, AppError>> {
+  const row = await findOffice(db);
+  if (!row) return err(appError('NOT_FOUND', 'No office is set up yet. Start the app once to create it.'));
+  return ok(toSettings(row));
+}
+
+/**
+ * Saves the office settings when `input.version` is still the stored version; otherwise a
+ * CONFLICT that says someone else saved first (nothing is overwritten).
+ */
+export async function updateOfficeSettings(db: DatabaseOrTransaction, input: OfficeSettingsInput): Promise<Result<OfficeSettings, AppError>> {
+  const current = await findOffice(db);
+  if (!current) return err(appError('NOT_FOUND', 'No office is set up yet.'));
+  const { version, ...fields } = input;
+  const [row] = await db
+    .update(offices)
+    .set({ ...fields, version: version + 1, updatedAt: new Date() })
+    .where(eq(offices.version, version))
+    .returning();
+  if (!row) {
+    return err(
+      appError('CONFLICT', 'The office settings were changed by someone else since you opened them. Reload to see their changes, or keep yours.', {
+        details: { currentVersion: current.version },
+      }),
+    );
+  }
+  return ok(toSettings(row));
+}

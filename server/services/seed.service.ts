@@ -1,0 +1,46 @@
+import { eq } from 'drizzle-orm';
+import { defaultRiskLadder } from '../../shared/contracts/office';
+import type { Role } from '../../shared/contracts/common';
+import type { Auth } from '../auth/auth';
+import type { Database } from '../db/client';
+import { offices, users } from '../db/schema';
+import { createUser } from './users.service';
+
+export const demoPassword = 'stormdraft-demo';
+
+export const demoAccounts: { email: string; name: string; role: Role }[] = [
+  { email: 'admin@demo.stormdraft.test', name: 'Avery Admin', role: 'admin' },
+  { email: 'lead@demo.stormdraft.test', name: 'Lena Lead', role: 'lead' },
+  { email: 'forecaster@demo.stormdraft.test', name: 'Felix Forecaster', role: 'forecaster' },
+  { email: 'subscriber@demo.stormdraft.test', name: 'Sam Subscriber', role: 'subscriber' },
+];
+
+/** The invented demo office over the central United States' river valleys. */
+export const demoOffice = {
+  slug: 'meridian-valley',
+  name: 'Meridian Valley Weather Office',
+  region: { west: -96.5, south: 35.5, east: -87.5, north: 41.5 },
+  timeZone: 'America/Chicago',
+};
+
+/** Makes sure the office exists (every installation has one); creates it from the demo values. */
+export async function ensureOffice(db: Database): Promise<void> {
+  await db
+    .insert(offices)
+    .values({ ...demoOffice, riskLadder: defaultRiskLadder })
+    .onConflictDoNothing({ target: offices.slug });
+}
+
+/**
+ * Seeds the demo office and accounts. Idempotent: what exists is left alone, so a restart never
+ * duplicates or resets data. Never called in production (config.seedDemo).
+ */
+export async function seedDemo(db: Database, auth: Auth): Promise<void> {
+  await ensureOffice(db);
+  for (const account of demoAccounts) {
+    const [existing] = await db.select({ id: users.id }).from(users).where(eq(users.email, account.email));
+    if (existing) continue;
+    const created = await createUser(db, auth, { ...account, password: demoPassword });
+    if (!created.ok) throw new Error(`demo account ${account.email}: ${created.error.message}`);
+  }
+}
