@@ -1,0 +1,71 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type TestAgent from 'supertest/lib/agent';
+import { apiRoutes } from '../../server/routes';
+import type { Stormdraft } from '../../server/start';
+import { agentFor, signedInAgent, startTestApp } from './helpers/test-app';
+
+type Caller = 'anonymous' | 'subscriber' | 'forecaster' | 'lead' | 'admin';
+const callers: Caller[] = ['anonymous', 'subscriber', 'forecaster', 'lead', 'admin'];
+
+interface MatrixRow {
+  method: 'get' | 'post' | 'put' | 'patch' | 'delete';
+  /** The route as declared; `:params` are filled from `sample`. */
+  route: string;
+  url: string;
+  body?: unknown;
+  expect: Record<Caller, number>;
+}
+
+const missingId = '00000000-0000-4000-8000-000000000000';
+const staffOnly = (allowed: number): Record<Caller, number> => ({ anonymous: 401, subscriber: 403, forecaster: 403, lead: 403, admin: allowed });
+const anyone = (status: number): Record<Caller, number> => ({ anonymous: status, subscriber: status, forecaster: status, lead: status, admin: status });
+const signedIn = (status: number): Record<Caller, number> => ({ anonymous: 401, subscriber: status, forecaster: status, lead: status, admin: status });
+
+/**
+ * Every API route × every caller → the expected status. Bodies are deliberately empty or
+ * invalid, so an allowed caller gets 400 (validation) and nothing is changed by the matrix.
+ * New routes must be added here: the first test fails until they are.
+ */
+const matrix: MatrixRow[] = [
+  { method: 'get', route: '/api/health', url: '/api/health', expect: anyone(200) },
+  { method: 'get', route: '/api/me', url: '/api/me', expect: signedIn(200) },
+  { method: 'put', route: '/api/me/preferences', url: '/api/me/preferences', body: {}, expect: signedIn(400) },
+  { method: 'get', route: '/api/office', url: '/api/office', expect: anyone(200) },
+  { method: 'put', route: '/api/office', url: '/api/office', body: {}, expect: staffOnly(400) },
+  { method: 'get', route: '/api/users', url: '/api/users', expect: staffOnly(200) },
+  { method: 'post', route: '/api/users', url: '/api/users', body: {}, expect: staffOnly(400) },
+  { method: 'patch', route: '/api/users/:userId', url: `/api/users/${missingId}`, body: {}, expect: staffOnly(400) },
+  { method: 'get', route: '/api/mail-messages', url: '/api/mail-messages', expect: staffOnly(200) },
+  { method: 'get', route: '/api/mail-messages/:messageId', url: `/api/mail-messages/${missingId}`, expect: staffOnly(404) },
+];
+
+let sd: Stormdraft;
+const agents = {} as Record<Caller, TestAgent>;
+
+beforeAll(async () => {
+  sd = await startTestApp();
+  agents.anonymous = agentFor(sd.app);
+  for (const role of ['subscriber', 'forecaster', 'lead', 'admin'] as const) agents[role] = await signedInAgent(sd.app, role);
+});
+afterAll(async () => {
+  await sd?.close();
+});
+
+describe('role matrix', () => {
+  it('When a route is declared in server/routes, then the matrix lists it (and nothing else)', () => {
+    const declared = apiRoutes.map((r) => `${r.method.toUpperCase()} ${r.path}`).sort();
+    const listed = matrix.map((r) => `${r.method.toUpperCase()} ${r.route}`).sort();
+    expect(listed).toEqual(declared);
+  });
+
+  const cases = matrix.flatMap((row) => callers.map((caller) => ({ row, caller })));
+  it.each(cases.map((c) => [`${c.row.method.toUpperCase()} ${c.row.route}`, c.caller, c.row.expect[c.caller], c] as const))(
+    'When %s is called by %s, then the status is %i',
+    async (_name, caller, expected, { row }) => {
+      let req = agents[caller][row.method](row.url);
+      if (row.body !== undefined) req = req.send(row.body as object);
+      const res = await req;
+      expect(res.status, JSON.stringify(res.body)).toBe(expected);
+    },
+  );
+});
