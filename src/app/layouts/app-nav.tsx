@@ -1,0 +1,66 @@
+import { clsx } from 'clsx';
+import { Bell, CircleUserRound, ClipboardCheck, Inbox, LogOut, Newspaper, PencilRuler, Settings2, Users, type LucideIcon } from 'lucide-react';
+import { NavLink } from 'react-router';
+import type { Me } from '../../../shared/contracts/users';
+import { roleName } from '../../utils/roles';
+import { navigationFor, type NavigationIcon } from '../navigation';
+
+const icons: Record<NavigationIcon, LucideIcon> = {
+  desk: PencilRuler,
+  review: ClipboardCheck,
+  alerts: Bell,
+  users: Users,
+  settings: Settings2,
+  mail: Inbox,
+  bulletin: Newspaper,
+  account: CircleUserRound,
+};
+
+interface AppNavProps {
+  user: Me['user'];
+  onSignOut: () => void;
+  signingOut: boolean;
+}
+
+/** The slim left navigation: the role's pages, who is signed in, and sign-out. */
+export function AppNav({ user, onSignOut, signingOut }: AppNavProps) {
+  const items = navigationFor(user.role);
+  return (
+    <nav aria-label="Main" className="flex w-full shrink-0 flex-col border-r border-line bg-panel md:w-52">
+      <ul className="flex flex-1 flex-row flex-wrap gap-0.5 p-2 md:flex-col">
+        {items.map((item) => {
+          const Icon = icons[item.icon];
+          return (
+            <li key={item.to}>
+              <NavLink
+                to={item.to}
+                className={({ isActive }) =>
+                  clsx(
+                    'flex items-center gap-2.5 rounded-md px-2.5 py-1.5 text-sm',
+                    isActive ? 'bg-accent-soft font-semibold text-accent-strong' : 'text-ink-muted hover:bg-sunken hover:text-ink',
+                  )
+                }
+              >
+                <Icon aria-hidden className="size-4 shrink-0" />
+                {item.label}
+              </NavLink>
+            </li>
+          );
+        })}
+      </ul>
+      <div className="border-t border-line p-3">
+        <p className="truncate text-sm font-semibold text-ink">{user.name}</p>
+        <p className="truncate text-[13px] text-ink-muted">{roleName(user.role)}</p>
+        <button
+          type="button"
+          onClick={onSignOut}
+          disabled={signingOut}
+          className="mt-2 flex items-center gap-1.5 rounded px-1 py-0.5 text-[13px] font-medium text-ink-muted hover:text-ink disabled:opacity-60"
+        >
+          <LogOut aria-hidden className="size-3.5" />
+          {signingOut ? 'Signing out…' : 'Sign out'}
+        </button>
+      </div>
+    </nav>
+  );
+}

@@ -1,0 +1,32 @@
+import type { Role } from '../../shared/contracts/common';
+
+export type NavigationIcon = 'desk' | 'review' | 'alerts' | 'users' | 'settings' | 'mail' | 'bulletin' | 'account';
+
+export interface NavigationItem {
+  label: string;
+  to: string;
+  icon: NavigationIcon;
+}
+
+const desk: NavigationItem = { label: 'Forecast desk', to: '/desk', icon: 'desk' };
+const review: NavigationItem = { label: 'Review queue', to: '/review', icon: 'review' };
+const alerts: NavigationItem = { label: 'My alerts', to: '/alerts', icon: 'alerts' };
+const users: NavigationItem = { label: 'Users', to: '/admin/users', icon: 'users' };
+const settings: NavigationItem = { label: 'Office settings', to: '/admin/settings', icon: 'settings' };
+const mail: NavigationItem = { label: 'Mail catcher', to: '/admin/mail', icon: 'mail' };
+const bulletin: NavigationItem = { label: 'Public bulletin', to: '/bulletin', icon: 'bulletin' };
+const account: NavigationItem = { label: 'Account', to: '/account', icon: 'account' };
+
+/** The left navigation for a role, home first. Route guards use the same roles (router.tsx). */
+export function navigationFor(role: Role): NavigationItem[] {
+  switch (role) {
+    case 'forecaster':
+      return [desk, bulletin, account];
+    case 'lead':
+      return [review, desk, bulletin, account];
+    case 'subscriber':
+      return [alerts, bulletin, account];
+    case 'admin':
+      return [users, settings, mail, bulletin, account];
+  }
+}

@@ -1,0 +1,166 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { createBrowserRouter, redirect, type LoaderFunctionArgs, type RouteObject } from 'react-router';
+import { Loading } from '../components/ui/loading';
+import { meQueryOptions } from '../hooks/use-me';
+import { officeQueryOptions } from '../hooks/use-office';
+import type { Role } from '../../shared/contracts/common';
+import { homePathFor, roleAllowed } from '../utils/roles';
+import { NotFoundPage } from './not-found';
+import { RoleGate } from './layouts/role-gate';
+import { RouteErrorPage } from './route-error';
+
+type PageLoader = () => Promise<unknown>;
+
+/**
+ * Warms a page's queries only when the signed-in role may open it, so a refused visit does not
+ * fire requests the server would refuse anyway. The page itself shows the refusal (RoleGate).
+ */
+function loaderForRoles(queryClient: QueryClient, roles: readonly Role[], load?: PageLoader) {
+  return async () => {
+    const me = await queryClient.ensureQueryData(meQueryOptions());
+    if (me && roleAllowed(me.user.role, roles) && load) await load();
+    return null;
+  };
+}
+
+function InitialLoading() {
+  return (
+    <div className="flex min-h-dvh items-center justify-center">
+      <Loading label="Opening Stormdraft…" />
+    </div>
+  );
+}
+
+const staff = ['forecaster', 'lead'] as const satisfies readonly Role[];
+const leads = ['lead'] as const satisfies readonly Role[];
+const subscribers = ['subscriber'] as const satisfies readonly Role[];
+const admins = ['admin'] as const satisfies readonly Role[];
+
+/** Every page, lazy-loaded so the public bulletin never downloads staff pages. */
+export function createRoutes(queryClient: QueryClient): RouteObject[] {
+  return [
+    {
+      path: '/',
+      errorElement: <RouteErrorPage />,
+      HydrateFallback: InitialLoading,
+      children: [
+        {
+          index: true,
+          loader: async () => {
+            const me = await queryClient.ensureQueryData(meQueryOptions());
+            return redirect(me ? homePathFor(me.user.role) : '/bulletin');
+          },
+        },
+        {
+          lazy: async () => ({ Component: (await import('./layouts/public-layout')).PublicLayout }),
+          loader: () => {
+            void queryClient.prefetchQuery(officeQueryOptions());
+            void queryClient.prefetchQuery(meQueryOptions());
+            return null;
+          },
+          children: [
+            { path: 'bulletin', lazy: async () => ({ Component: (await import('../features/bulletin/routes/bulletin')).BulletinPage }) },
+            {
+              path: 'sign-in',
+              loader: async () => {
+                const me = await queryClient.ensureQueryData(meQueryOptions());
+                return me ? redirect(homePathFor(me.user.role)) : null;
+              },
+              lazy: async () => ({ Component: (await import('../features/auth/routes/sign-in')).SignInPage }),
+            },
+            { path: 'register', lazy: async () => ({ Component: (await import('../features/auth/routes/register')).RegisterPage }) },
+            {
+              path: 'forgot-password',
+              lazy: async () => ({ Component: (await import('../features/auth/routes/forgot-password')).ForgotPasswordPage }),
+            },
+            {
+              path: 'reset-password',
+              lazy: async () => ({ Component: (await import('../features/auth/routes/reset-password')).ResetPasswordPage }),
+            },
+          ],
+        },
+        {
+          lazy: async () => ({ Component: (await import('./layouts/app-layout')).AppLayout }),
+          loader: async ({ request }: LoaderFunctionArgs) => {
+            void queryClient.prefetchQuery(officeQueryOptions());
+            const me = await queryClient.ensureQueryData(meQueryOptions());
+            if (me === null) {
+              const url = new URL(request.url);
+              return redirect(`/sign-in?next=${encodeURIComponent(`${url.pathname}${url.search}`)}`);
+            }
+            return null;
+          },
+          children: [
+            {
+              element: <RoleGate roles={staff} />,
+              children: [
+                {
+                  path: 'desk',
+                  loader: loaderForRoles(queryClient, staff),
+                  lazy: async () => ({ Component: (await import('../features/outlooks/routes/desk')).DeskPage }),
+                },
+              ],
+            },
+            {
+              element: <RoleGate roles={leads} />,
+              children: [
+                {
+                  path: 'review',
+                  loader: loaderForRoles(queryClient, leads),
+                  lazy: async () => ({ Component: (await import('../features/review/routes/review-queue')).ReviewQueuePage }),
+                },
+              ],
+            },
+            {
+              element: <RoleGate roles={subscribers} />,
+              children: [
+                {
+                  path: 'alerts',
+                  loader: loaderForRoles(queryClient, subscribers),
+                  lazy: async () => ({ Component: (await import('../features/subscriptions/routes/my-alerts')).MyAlertsPage }),
+                },
+              ],
+            },
+            {
+              path: 'admin',
+              element: <RoleGate roles={admins} />,
+              children: [
+                { index: true, loader: () => redirect('/admin/users') },
+                {
+                  path: 'users',
+                  lazy: async () => {
+                    const page = await import('../features/admin/routes/users');
+                    return { Component: page.UsersPage, loader: loaderForRoles(queryClient, admins, page.usersLoader(queryClient)) };
+                  },
+                },
+                {
+                  path: 'settings',
+                  lazy: async () => {
+                    const page = await import('../features/admin/routes/office-settings');
+                    return {
+                      Component: page.OfficeSettingsPage,
+                      loader: loaderForRoles(queryClient, admins, page.officeSettingsLoader(queryClient)),
+                    };
+                  },
+                },
+                {
+                  path: 'mail',
+                  lazy: async () => {
+                    const page = await import('../features/admin/routes/mail');
+                    return { Component: page.MailPage, loader: loaderForRoles(queryClient, admins, page.mailLoader(queryClient)) };
+                  },
+                },
+              ],
+            },
+            { path: 'account', lazy: async () => ({ Component: (await import('../features/account/routes/account')).AccountPage }) },
+          ],
+        },
+        { path: '*', Component: NotFoundPage },
+      ],
+    },
+  ];
+}
+
+export function createAppRouter(queryClient: QueryClient) {
+  return createBrowserRouter(createRoutes(queryClient));
+}

@@ -1,0 +1,89 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { clsx } from 'clsx';
+import { Inbox, RefreshCw } from 'lucide-react';
+import { Link, useSearchParams } from 'react-router';
+import { Button } from '../../../components/ui/button';
+import { EmptyState } from '../../../components/ui/empty-state';
+import { Loading } from '../../../components/ui/loading';
+import { Notice } from '../../../components/ui/notice';
+import { PageHeader } from '../../../components/ui/page-header';
+import { formatTimestampUtc } from '../../../utils/time';
+import { mailMessagesQueryOptions, useMailMessages } from '../api/get-mail-messages';
+import { MailReader } from '../components/mail-reader';
+
+export const mailLoader = (queryClient: QueryClient) => () => queryClient.prefetchQuery(mailMessagesQueryOptions());
+
+/** The local mail catcher: every e-mail the app sent while no SMTP relay is configured. */
+export function MailPage() {
+  const messages = useMailMessages();
+  const [searchParams] = useSearchParams();
+  const selected = searchParams.get('message');
+
+  return (
+    <>
+      <PageHeader
+        title="Mail catcher"
+        description="With no SMTP relay configured, Stormdraft keeps every e-mail it sends here instead of delivering it. Newest first."
+        actions={
+          <Button variant="secondary" size="sm" onClick={() => void messages.refetch()} busy={messages.isFetching}>
+            <RefreshCw aria-hidden className="size-3.5" />
+            Refresh
+          </Button>
+        }
+      />
+      {messages.isPending ? <Loading label="Loading messages…" /> : null}
+      {messages.isError ? (
+        <Notice tone="error" title="We could not load the caught mail">
+          {messages.error.message}
+        </Notice>
+      ) : null}
+      {messages.data && messages.data.messages.length === 0 ? (
+        <EmptyState icon={<Inbox aria-hidden className="size-5" />} title="No mail caught yet.">
+          Messages appear here as soon as the app sends one — for example, ask for a password reset from the sign-in page.
+        </EmptyState>
+      ) : null}
+      {messages.data && messages.data.messages.length > 0 ? (
+        <div className="grid items-start gap-5 xl:grid-cols-[minmax(0,26rem)_minmax(0,1fr)]">
+          <div className="overflow-hidden rounded-lg border border-line bg-panel">
+            <table className="w-full text-left text-sm">
+              <caption className="sr-only">Caught messages</caption>
+              <thead className="border-b border-line bg-sunken text-[12px] font-semibold tracking-wide text-ink-muted uppercase">
+                <tr>
+                  <th scope="col" className="px-3 py-2">Subject</th>
+                  <th scope="col" className="px-3 py-2">Received</th>
+                </tr>
+              </thead>
+              <tbody className="divide-y divide-line">
+                {messages.data.messages.map((message) => {
+                  const isSelected = message.id === selected;
+                  return (
+                    <tr key={message.id} className={clsx(isSelected && 'bg-accent-soft')}>
+                      <td className="px-3 py-2">
+                        <Link
+                          to={`?message=${encodeURIComponent(message.id)}`}
+                          aria-current={isSelected ? 'true' : undefined}
+                          className="block font-medium text-ink hover:text-accent"
+                        >
+                          {message.subject || '(no subject)'}
+                        </Link>
+                        <span className="block truncate text-[12px] text-ink-muted">
+                          {message.from} → {message.to}
+                        </span>
+                      </td>
+                      <td className="px-3 py-2 align-top text-[12px] whitespace-nowrap text-ink-muted">{formatTimestampUtc(message.receivedAt)}</td>
+                    </tr>
+                  );
+                })}
+              </tbody>
+            </table>
+          </div>
+          {selected ? (
+            <MailReader messageId={selected} />
+          ) : (
+            <p className="rounded-lg border border-dashed border-line-strong p-6 text-sm text-ink-muted">Choose a message to read it.</p>
+          )}
+        </div>
+      ) : null}
+    </>
+  );
+}
