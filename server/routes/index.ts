@@ -3,7 +3,8 @@ import { mailMessagesRoutes } from './mail-messages.routes';
 import { meRoutes } from './me.routes';
 import { officeRoutes } from './office.routes';
 import type { RouteDefinition } from './route-definition';
+import { soundingsRoutes } from './soundings.routes';
 import { usersRoutes } from './users.routes';
 
 /** Every API route of the app (better-auth's own routes under /api/auth are separate). */
-export const apiRoutes: RouteDefinition[] = [...healthRoutes, ...meRoutes, ...officeRoutes, ...usersRoutes, ...mailMessagesRoutes];
+export const apiRoutes: RouteDefinition[] = [...healthRoutes, ...meRoutes, ...officeRoutes, ...usersRoutes, ...mailMessagesRoutes, ...soundingsRoutes];

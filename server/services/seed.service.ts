@@ -4,6 +4,8 @@ import type { Role } from '../../shared/contracts/common';
 import type { Auth } from '../auth/auth';
 import type { Database } from '../db/client';
 import { offices, users } from '../db/schema';
+import { generateDemoSoundings } from '../seed/demo-soundings';
+import { seedSoundings } from './soundings.service';
 import { createUser } from './users.service';
 
 export const demoPassword = 'stormdraft-demo';
@@ -43,4 +45,6 @@ export async function seedDemo(db: Database, auth: Auth): Promise<void> {
     const created = await createUser(db, auth, { ...account, password: demoPassword });
     if (!created.ok) throw new Error(`demo account ${account.email}: ${created.error.message}`);
   }
+  // The demo day is the day of the first start, so the demo looks current; later starts keep it.
+  await seedSoundings(db, generateDemoSoundings(new Date()));
 }

@@ -19,6 +19,8 @@ interface MatrixRow {
 const missingId = '00000000-0000-4000-8000-000000000000';
 const staffOnly = (allowed: number): Record<Caller, number> => ({ anonymous: 401, subscriber: 403, forecaster: 403, lead: 403, admin: allowed });
 const anyone = (status: number): Record<Caller, number> => ({ anonymous: status, subscriber: status, forecaster: status, lead: status, admin: status });
+const readers = (status: number): Record<Caller, number> => ({ anonymous: 401, subscriber: 403, forecaster: status, lead: status, admin: status });
+const authors = (status: number): Record<Caller, number> => ({ anonymous: 401, subscriber: 403, forecaster: status, lead: status, admin: 403 });
 const signedIn = (status: number): Record<Caller, number> => ({ anonymous: 401, subscriber: status, forecaster: status, lead: status, admin: status });
 
 /**
@@ -37,6 +39,13 @@ const matrix: MatrixRow[] = [
   { method: 'patch', route: '/api/users/:userId', url: `/api/users/${missingId}`, body: {}, expect: staffOnly(400) },
   { method: 'get', route: '/api/mail-messages', url: '/api/mail-messages', expect: staffOnly(200) },
   { method: 'get', route: '/api/mail-messages/:messageId', url: `/api/mail-messages/${missingId}`, expect: staffOnly(404) },
+  { method: 'get', route: '/api/soundings', url: '/api/soundings', expect: readers(200) },
+  { method: 'post', route: '/api/soundings', url: '/api/soundings', body: {}, expect: authors(400) },
+  { method: 'post', route: '/api/soundings/batch', url: '/api/soundings/batch', body: {}, expect: authors(400) },
+  { method: 'post', route: '/api/soundings/uploads', url: '/api/soundings/uploads', expect: authors(400) },
+  { method: 'get', route: '/api/soundings/:soundingId', url: `/api/soundings/${missingId}`, expect: readers(404) },
+  { method: 'delete', route: '/api/soundings/:soundingId', url: `/api/soundings/${missingId}`, expect: authors(404) },
+  { method: 'post', route: '/api/soundings/:soundingId/modified', url: `/api/soundings/${missingId}/modified`, body: {}, expect: authors(400) },
 ];
 
 let sd: Stormdraft;
