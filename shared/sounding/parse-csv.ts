@@ -1,0 +1,246 @@
+import { err, type Result } from '../result';
+import type { ParsedSounding, SoundingIssue } from './types';
+import {
+  fahrenheitToCelsius,
+  feetToMeters,
+  kilometersPerHourToMetersPerSecond,
+  knotsToMetersPerSecond,
+  milesPerHourToMetersPerSecond,
+  pascalToHectopascal,
+  windComponents,
+} from './units';
+import { checkSounding, IssueList, MAX_FILE_BYTES, type LevelField, type RawLevel, type RawMetadata } from './validate';
+
+type Quantity =
+  | 'pressure'
+  | 'height'
+  | 'temperature'
+  | 'dewpoint'
+  | 'relativeHumidity'
+  | 'windDirection'
+  | 'windSpeed'
+  | 'u'
+  | 'v';
+
+/** Accepted header names: quantity prefix → unit suffix → conversion to engine units. */
+const COLUMN_UNITS: Record<string, { quantity: Quantity; units: Record<string, (value: number) => number> }> = {
+  pressure: { quantity: 'pressure', units: { hpa: (x) => x, mb: (x) => x, pa: pascalToHectopascal } },
+  height: { quantity: 'height', units: { m: (x) => x, ft: feetToMeters } },
+  temperature: { quantity: 'temperature', units: { c: (x) => x, k: (x) => x - 273.15, f: fahrenheitToCelsius } },
+  dewpoint: { quantity: 'dewpoint', units: { c: (x) => x, k: (x) => x - 273.15, f: fahrenheitToCelsius } },
+  rh: { quantity: 'relativeHumidity', units: { pct: (x) => x } },
+  wind_direction: { quantity: 'windDirection', units: { deg: (x) => x } },
+  wind_speed: {
+    quantity: 'windSpeed',
+    units: { kt: knotsToMetersPerSecond, ms: (x) => x, kmh: kilometersPerHourToMetersPerSecond, mph: milesPerHourToMetersPerSecond },
+  },
+  u: { quantity: 'u', units: { ms: (x) => x, kt: knotsToMetersPerSecond } },
+  v: { quantity: 'v', units: { ms: (x) => x, kt: knotsToMetersPerSecond } },
+};
+
+/** Metadata keys of the exchange format and the field each fills. */
+const METADATA_KEYS: Record<string, { field: keyof RawMetadata; convert?: (value: string) => string }> = {
+  station: { field: 'station' },
+  name: { field: 'name' },
+  latitude: { field: 'latitude' },
+  longitude: { field: 'longitude' },
+  elevation_m: { field: 'elevationM' },
+  elevation_ft: { field: 'elevationM', convert: (v) => (v.trim() === '' || Number.isNaN(Number(v)) ? v : String(feetToMeters(Number(v)))) },
+  valid: { field: 'validTime' },
+  source: { field: 'source' },
+};
+
+interface Column {
+  header: string;
+  index: number;
+  convert: (value: number) => number;
+}
+
+/** True for the exchange format's missing-value markers: empty, NA, −9999. */
+function isMissing(cell: string): boolean {
+  return cell === '' || cell.toUpperCase() === 'NA' || Number(cell) === -9999;
+}
+
+/**
+ * Parse a sounding in the exchange CSV format of SCIENCE.md.
+ *
+ * Reads `# key: value` metadata lines, finds columns by header name in any order, converts
+ * units by suffix to hPa, m, °C and m s⁻¹ (winds to u/v), accepts the missing markers
+ * (empty, NA, −9999), sorts levels by decreasing pressure and fills missing heights with the
+ * hypsometric equation. Every problem is reported with the file, line and column; nothing throws.
+ * @param text - the file contents
+ * @param fileName - name used in messages (default "sounding.csv")
+ * @returns the sounding with its warnings, or every issue found when any is an error
+ * @example parseSoundingCsv('# station: MV07\n...', 'mv07.csv')
+ */
+export function parseSoundingCsv(text: string, fileName = 'sounding.csv'): Result<ParsedSounding, SoundingIssue[]> {
+  const issues = new IssueList();
+  if (text.length > MAX_FILE_BYTES) {
+    issues.error('FILE_TOO_LARGE', `${fileName}: the file is larger than 2 MB. Split it or thin the levels.`);
+    return err(issues.issues);
+  }
+  const lines = text.replace(/^\uFEFF/, '').split(/\r\n|\n|\r/);
+  const metadata: RawMetadata = {};
+  const metadataLines: Partial<Record<keyof RawMetadata, number>> = {};
+  const metadataKeys: Partial<Record<keyof RawMetadata, string>> = {};
+  let headerLine = -1;
+  let headerCells: string[] = [];
+  const rows: { line: number; cells: string[] }[] = [];
+
+  for (let i = 0; i < lines.length; i++) {
+    const raw = (lines[i] as string).trim();
+    if (raw === '') continue;
+    if (raw.startsWith('#')) {
+      const match = /^#\s*([A-Za-z_]+)\s*:\s*(.*)$/.exec(raw);
+      if (match) {
+        const key = (match[1] as string).toLowerCase();
+        const known = METADATA_KEYS[key];
+        if (known) {
+          const value = (match[2] as string).trim();
+          metadata[known.field] = known.convert ? known.convert(value) : value;
+          metadataLines[known.field] = i + 1;
+          metadataKeys[known.field] = key;
+        }
+      }
+      continue;
+    }
+    if (headerLine < 0) {
+      headerLine = i + 1;
+      headerCells = raw.split(',').map((cell) => cell.trim());
+    } else {
+      rows.push({ line: i + 1, cells: raw.split(',').map((cell) => cell.trim()) });
+    }
+  }
+  if (headerLine < 0) {
+    issues.error('EMPTY_FILE', `${fileName}: no header row found. The first line that is not a "#" line must name the columns, e.g. pressure_hPa,height_m,temperature_C,dewpoint_C.`);
+    return err(issues.issues);
+  }
+
+  const columns: Partial<Record<Quantity, Column>> = {};
+  headerCells.forEach((header, index) => {
+    const lower = header.toLowerCase();
+    const split = lower.lastIndexOf('_');
+    const prefix = split > 0 ? lower.slice(0, split) : lower;
+    const unit = split > 0 ? lower.slice(split + 1) : '';
+    const spec = COLUMN_UNITS[prefix];
+    const at = { line: headerLine, column: header };
+    if (!spec) {
+      issues.warning('UNKNOWN_COLUMN', `${fileName}, line ${headerLine}: column "${header}" is not part of the format and is ignored.`, at);
+      return;
+    }
+    const convert = spec.units[unit];
+    if (!convert) {
+      issues.error('UNSUPPORTED_UNIT', `${fileName}, line ${headerLine}: column "${header}" has unit "${unit}"; accepted: ${Object.keys(spec.units).map((u) => `${prefix}_${u}`).join(', ')}.`, at);
+      return;
+    }
+    if (columns[spec.quantity]) {
+      issues.error('DUPLICATE_COLUMN', `${fileName}, line ${headerLine}: columns "${columns[spec.quantity]?.header}" and "${header}" give the same quantity. Keep one.`, at);
+      return;
+    }
+    columns[spec.quantity] = { header, index, convert };
+  });
+  const headerAt = { line: headerLine };
+  if (!columns.pressure) issues.error('MISSING_COLUMN', `${fileName}, line ${headerLine}: no pressure column (pressure_hPa or pressure_Pa).`, headerAt);
+  if (!columns.temperature) issues.error('MISSING_COLUMN', `${fileName}, line ${headerLine}: no temperature column (temperature_C, _K or _F).`, headerAt);
+  if (!columns.dewpoint && !columns.relativeHumidity) {
+    issues.error('MISSING_COLUMN', `${fileName}, line ${headerLine}: no moisture column (dewpoint_C, _K, _F or rh_pct).`, headerAt);
+  }
+  const hasDirectionSpeed = columns.windDirection !== undefined || columns.windSpeed !== undefined;
+  if (hasDirectionSpeed && (!columns.windDirection || !columns.windSpeed)) {
+    issues.error('MISSING_COLUMN', `${fileName}, line ${headerLine}: wind needs both wind_direction_deg and a wind_speed_ column.`, headerAt);
+  }
+  if ((columns.u !== undefined || columns.v !== undefined) && (!columns.u || !columns.v)) {
+    issues.error('MISSING_COLUMN', `${fileName}, line ${headerLine}: wind components need both u_ and v_ columns.`, headerAt);
+  }
+  if (hasDirectionSpeed && (columns.u || columns.v)) {
+    issues.error('DUPLICATE_COLUMN', `${fileName}, line ${headerLine}: give wind either as direction and speed or as u and v, not both.`, headerAt);
+  }
+  if (!hasDirectionSpeed && !columns.u && !columns.v) {
+    issues.warning('NO_WIND_COLUMNS', `${fileName}, line ${headerLine}: no wind columns; kinematic results will be null.`, headerAt);
+  }
+  if (issues.hasErrors) return err(issues.issues);
+
+  const rawLevels: RawLevel[] = [];
+  const rowLines: number[] = [];
+  for (const row of rows) {
+    if (row.cells.length !== headerCells.length) {
+      issues.error('FIELD_COUNT', `${fileName}, line ${row.line}: ${row.cells.length} cells, but the header has ${headerCells.length}.`, { line: row.line });
+      continue;
+    }
+    let bad = false;
+    const read = (quantity: Quantity): number | null => {
+      const column = columns[quantity];
+      if (!column) return null;
+      const cell = row.cells[column.index] as string;
+      if (isMissing(cell)) return null;
+      const value = Number(cell);
+      if (!Number.isFinite(value)) {
+        issues.error('NOT_A_NUMBER', `${fileName}, line ${row.line}, column ${column.header}: "${cell}" is not a number (use an empty cell, NA or -9999 for a missing value).`, { line: row.line, column: column.header });
+        bad = true;
+        return null;
+      }
+      return column.convert(value);
+    };
+    const pressureHpa = read('pressure');
+    const heightM = read('height');
+    const temperatureC = read('temperature');
+    const dewpointC = read('dewpoint');
+    const relativeHumidityPercent = read('relativeHumidity');
+    let uMs: number | null = null;
+    let vMs: number | null = null;
+    if (hasDirectionSpeed) {
+      const direction = read('windDirection');
+      const speed = read('windSpeed');
+      if (direction !== null && speed !== null) {
+        if (direction < 0 || direction > 360 || speed < 0) {
+          const column = direction < 0 || direction > 360 ? columns.windDirection : columns.windSpeed;
+          issues.error('WIND_OUT_OF_RANGE', `${fileName}, line ${row.line}, column ${column?.header}: wind direction must be 0–360° and speed not negative.`, { line: row.line, column: column?.header });
+          bad = true;
+        } else {
+          const components = windComponents(direction, speed);
+          uMs = components.u;
+          vMs = components.v;
+        }
+      } else if (direction !== null || speed !== null) {
+        const column = direction === null ? columns.windDirection : columns.windSpeed;
+        issues.warning('WIND_INCOMPLETE', `${fileName}, line ${row.line}, column ${column?.header}: wind ${direction === null ? 'direction' : 'speed'} is missing; the wind of this level is treated as missing.`, { line: row.line, column: column?.header });
+      }
+    } else if (columns.u && columns.v) {
+      uMs = read('u');
+      vMs = read('v');
+      if ((uMs === null) !== (vMs === null)) {
+        issues.warning('WIND_INCOMPLETE', `${fileName}, line ${row.line}: only one wind component is given; the wind of this level is treated as missing.`, { line: row.line });
+        uMs = null;
+        vMs = null;
+      }
+    }
+    if (bad) continue;
+    rawLevels.push({ pressureHpa, heightM, temperatureC, dewpointC, relativeHumidityPercent, uMs, vMs });
+    rowLines.push(row.line);
+  }
+  if (issues.hasErrors) return err(issues.issues);
+
+  const columnOf = (field: LevelField): string | undefined => {
+    switch (field) {
+      case 'dewpoint':
+        return (columns.dewpoint ?? columns.relativeHumidity)?.header;
+      case 'wind':
+        return (columns.windDirection ?? columns.u)?.header;
+      default:
+        return columns[field]?.header;
+    }
+  };
+  return checkSounding(rawLevels, metadata, {
+    inputName: fileName,
+    level: (index, field) => {
+      const line = rowLines[index];
+      const column = columnOf(field);
+      return { ...(line !== undefined ? { line } : {}), ...(column !== undefined ? { column } : {}) };
+    },
+    metadata: (key) => {
+      const line = metadataLines[key];
+      const metadataKey = metadataKeys[key] ?? { elevationM: 'elevation_m', validTime: 'valid' }[key as string] ?? key;
+      return { ...(line !== undefined ? { line } : {}), column: `# ${metadataKey}` };
+    },
+  }, issues);
+}
