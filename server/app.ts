@@ -66,7 +66,8 @@ export async function createApp(ctx: AppContext, clientMode: ClientMode): Promis
     app.use(vite.middlewares);
   } else if (clientMode === 'dist' && existsSync(distDir)) {
     app.use(express.static(distDir, { index: false, maxAge: '1h' }));
-    app.get('/*splat', (_req, res) => res.sendFile(path.join(distDir, 'index.html')));
+    // '/{*splat}' also matches '/' itself (Express 5 path syntax).
+    app.get('/{*splat}', (_req, res) => res.sendFile(path.join(distDir, 'index.html')));
   }
 
   app.use(errorHandler);

@@ -45,6 +45,8 @@ export async function startBrowserJourney(): Promise<BrowserJourney> {
     args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
     viewport: { width: 1280, height: 800 },
   });
+  // Fail fast with a readable locator error instead of hanging until the test timeout.
+  browser.setDefaultTimeout(15_000);
   return {
     baseUrl,
     browser,
