@@ -1,0 +1,73 @@
+import { analyzeComposites, type CompositesAnalysis } from './composites';
+import { analyzeEnvironment, type EnvironmentAnalysis } from './environment';
+import { analyzeKinematics, type KinematicsAnalysis, type WindVector } from './kinematics';
+import {
+  levelStart,
+  liftParcelOnProfile,
+  mixedLayerStart,
+  mostUnstableLevelIndex,
+  surfaceBasedStart,
+  type ParcelOptions,
+  type ParcelResult,
+} from './parcel';
+import { buildProfile } from './profile';
+import type { SoundingLevel } from './types';
+import { ENGINE_VERSION } from './version';
+
+/** The full analysis of a sounding. The first keys are the contract of SCIENCE.md. */
+export interface SoundingAnalysis {
+  surfaceBased: ParcelResult;
+  mixedLayer: ParcelResult;
+  mostUnstable: ParcelResult;
+  /** Precipitable water, mm. */
+  precipitableWater: number;
+  /** 0–6 km bulk wind difference, m s⁻¹. */
+  bulkShear0to6km: number | null;
+  /** Bunkers right-mover motion, m s⁻¹. */
+  stormMotionRight: WindVector | null;
+  /** Storm-relative helicity, m² s⁻² (right mover). */
+  srh0to1km: number | null;
+  srh0to3km: number | null;
+  environment: EnvironmentAnalysis;
+  kinematics: KinematicsAnalysis;
+  composites: CompositesAnalysis;
+  /** Version of the engine that made this analysis (cache key). */
+  engineVersion: string;
+}
+
+/** Options of {@link analyzeSounding}. */
+export type AnalysisOptions = ParcelOptions;
+
+/**
+ * Analyse a sounding: three parcels, environment, kinematics and composites.
+ *
+ * @param levels - validated sounding levels (any order; see parseSoundingCsv / validateSounding)
+ * @param options - `{trace: true}` adds parcel traces; `moistAscent: 'reference'` uses the
+ *   slow RK4 integration instead of the table
+ * @returns {@link SoundingAnalysis}: numbers or null, never NaN
+ * @example analyzeSounding(parsed.levels).mostUnstable.cape // → J kg⁻¹
+ * Notes: methods and sources per quantity in shared/sounding/README.md.
+ */
+export function analyzeSounding(levels: readonly SoundingLevel[], options: AnalysisOptions = {}): SoundingAnalysis {
+  const profile = buildProfile(levels);
+  const surfaceBased = liftParcelOnProfile(profile, surfaceBasedStart(profile), options);
+  const mixedLayer = liftParcelOnProfile(profile, mixedLayerStart(profile, 100), options);
+  const mostUnstable = liftParcelOnProfile(profile, levelStart(profile, mostUnstableLevelIndex(profile, 300)), options);
+  const environment = analyzeEnvironment(profile);
+  const kinematics = analyzeKinematics(profile, mostUnstable);
+  const composites = analyzeComposites({ surfaceBased, mixedLayer, mostUnstable }, kinematics);
+  return {
+    surfaceBased,
+    mixedLayer,
+    mostUnstable,
+    precipitableWater: environment.precipitableWater,
+    bulkShear0to6km: kinematics.bulkShear0to6km,
+    stormMotionRight: kinematics.stormMotionRight,
+    srh0to1km: kinematics.srh0to1km,
+    srh0to3km: kinematics.srh0to3km,
+    environment,
+    kinematics,
+    composites,
+    engineVersion: ENGINE_VERSION,
+  };
+}

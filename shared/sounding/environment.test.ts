@@ -1,0 +1,61 @@
+import { describe, expect, it } from 'vitest';
+import { analyzeEnvironment, precipitableWater } from './environment';
+import { dewpointFromMixingRatio } from './mixing-ratio';
+import { buildProfile } from './profile';
+import type { SoundingLevel } from './types';
+
+/** Levels every 50 hPa from 1000 to 500 hPa with T and w given as functions of pressure. */
+function levelsOf(temperatureC: (p: number) => number, mixing: (p: number) => number, topHpa = 300): SoundingLevel[] {
+  const levels: SoundingLevel[] = [];
+  let height = 0;
+  for (let p = 1000; p >= topHpa; p -= 50) {
+    if (levels.length > 0) {
+      const below = levels[levels.length - 1] as SoundingLevel;
+      height += ((287.04 * (0.5 * (below.temperatureC + temperatureC(p)) + 273.15)) / 9.80665) * Math.log(below.pressureHpa / p);
+    }
+    const t = temperatureC(p);
+    levels.push({ pressureHpa: p, heightM: height, temperatureC: t, dewpointC: Math.min(t, dewpointFromMixingRatio(mixing(p), p) - 273.15), uMs: null, vMs: null });
+  }
+  return levels;
+}
+
+describe('precipitableWater ((1/ρw g) ∫ w dp, standard texts)', () => {
+  it('is w·Δp/g for a constant mixing ratio: 0.001 · 50000 Pa / 9.80665 = 5.10 mm', () => {
+    const profile = buildProfile(levelsOf((p) => 20 - (1000 - p) * 0.08, () => 0.001, 500));
+    expect(precipitableWater(profile)).toBeCloseTo((0.001 * 50000) / 9.80665, 2);
+  });
+
+  it('stops at the top of the moisture data', () => {
+    const levels = levelsOf((p) => 20 - (1000 - p) * 0.08, () => 0.001, 500).map((level) => (level.pressureHpa < 600 ? { ...level, dewpointC: null } : level));
+    expect(precipitableWater(buildProfile(levels))).toBeCloseTo((0.001 * 40000) / 9.80665, 2);
+  });
+});
+
+describe('analyzeEnvironment', () => {
+  const levels = levelsOf((p) => 25 - (1000 - p) * 0.08, (p) => 0.012 * (p / 1000) ** 3);
+  const environment = analyzeEnvironment(buildProfile(levels));
+
+  it('reports the surface mixing ratio and its dewpoint at 1000 hPa (same pressure, so the same dewpoint)', () => {
+    expect(environment.surfaceMixingRatio).toBeCloseTo(12, 6);
+    expect(environment.surfaceDewpointAt1000hPaC).toBeCloseTo(environment.surfaceDewpointC, 6);
+  });
+
+  it('finds the freezing level where the temperature crosses 0 °C (linear interpolation)', () => {
+    // T = 25 − 0.08 (1000 − p): 0 °C at 687.5 hPa.
+    const z650 = levels.find((l) => l.pressureHpa === 650)?.heightM ?? 0;
+    const z700 = levels.find((l) => l.pressureHpa === 700)?.heightM ?? 0;
+    expect(environment.freezingLevelHeight).toBeGreaterThan(z700);
+    expect(environment.freezingLevelHeight).toBeLessThan(z650);
+  });
+
+  it('puts the wet-bulb zero below the freezing level in unsaturated air (wet bulb ≤ temperature)', () => {
+    expect(environment.wetBulbZeroHeight).toBeLessThan(environment.freezingLevelHeight ?? 0);
+  });
+
+  it('gives lapse rates in K/km and a non-negative downdraft CAPE (GilmoreWicker1998)', () => {
+    expect(environment.lapseRate0to3km).toBeGreaterThan(3);
+    expect(environment.lapseRate0to3km).toBeLessThan(9.8);
+    expect(environment.lapseRate700to500hPa).toBeGreaterThan(3);
+    expect(environment.downdraftCape).toBeGreaterThanOrEqual(0);
+  });
+});

@@ -1,0 +1,234 @@
+import { RD } from './constants';
+import { finiteOrNull, meetsEffectiveInflowCriteria, type ParcelResult } from './parcel';
+import type { Profile } from './profile';
+
+/** A wind vector, m s⁻¹ (u toward east, v toward north). */
+export interface WindVector {
+  u: number;
+  v: number;
+}
+
+/** The effective inflow layer (Thompson2007): heights above ground, m; pressures, hPa. */
+export interface EffectiveInflowLayer {
+  bottomPressure: number;
+  topPressure: number;
+  bottomHeight: number;
+  topHeight: number;
+}
+
+/** Wind-profile results. Shear and motion m s⁻¹, helicity m² s⁻²; null where winds do not reach. */
+export interface KinematicsAnalysis {
+  bulkShear0to1km: number | null;
+  bulkShear0to3km: number | null;
+  bulkShear0to6km: number | null;
+  /** 0–6 km non-pressure-weighted mean wind. */
+  meanWind0to6km: WindVector | null;
+  stormMotionRight: WindVector | null;
+  stormMotionLeft: WindVector | null;
+  /** Storm-relative helicity for the right-moving storm, m² s⁻². */
+  srh0to1km: number | null;
+  srh0to3km: number | null;
+  effectiveInflowLayer: EffectiveInflowLayer | null;
+  /** SRH of the effective inflow layer (right mover), m² s⁻²; 0 when there is no effective layer. */
+  effectiveSrh: number | null;
+  /** Bulk shear from the effective inflow base to half the MU equilibrium-level height, m s⁻¹. */
+  effectiveBulkShear: number | null;
+  /** Bulk Richardson number shear (½ΔV², ΔV = 0–6 km minus 0–0.5 km density-weighted mean wind), m² s⁻². */
+  brnShear: number | null;
+}
+
+/** Winds of the levels that report one, by height above ground. */
+interface WindProfile {
+  height: number[];
+  u: number[];
+  v: number[];
+  density: number[];
+}
+
+function windProfile(profile: Profile): WindProfile {
+  const result: WindProfile = { height: [], u: [], v: [], density: [] };
+  for (let k = 0; k < profile.count; k++) {
+    const u = profile.uMs[k] as number;
+    const v = profile.vMs[k] as number;
+    if (Number.isNaN(u) || Number.isNaN(v)) continue;
+    result.height.push(profile.heightAglM[k] as number);
+    result.u.push(u);
+    result.v.push(v);
+    result.density.push(((profile.pressureHpa[k] as number) * 100) / (RD * (profile.virtualTemperatureK[k] as number)));
+  }
+  return result;
+}
+
+/** Interpolate a wind-profile array at a height (linear); NaN outside the reported winds. */
+function at(winds: WindProfile, values: number[], height: number): number {
+  const h = winds.height;
+  const n = h.length;
+  if (n === 0 || height < (h[0] as number) || height > (h[n - 1] as number)) return NaN;
+  let low = 0;
+  let high = n - 1;
+  while (high - low > 1) {
+    const middle = (low + high) >> 1;
+    if ((h[middle] as number) <= height) low = middle;
+    else high = middle;
+  }
+  const h0 = h[low] as number;
+  const h1 = h[high] as number;
+  const fraction = h1 === h0 ? 0 : (height - h0) / (h1 - h0);
+  return (values[low] as number) + fraction * ((values[high] as number) - (values[low] as number));
+}
+
+/** Sample points of a layer: its bottom, the reported levels inside it, its top. */
+function layerPoints(winds: WindProfile, bottom: number, top: number): { height: number; u: number; v: number; density: number }[] | null {
+  const bottomU = at(winds, winds.u, bottom);
+  const topU = at(winds, winds.u, top);
+  if (Number.isNaN(bottomU) || Number.isNaN(topU)) return null;
+  const points = [{ height: bottom, u: bottomU, v: at(winds, winds.v, bottom), density: at(winds, winds.density, bottom) }];
+  for (let i = 0; i < winds.height.length; i++) {
+    const h = winds.height[i] as number;
+    if (h > bottom && h < top) points.push({ height: h, u: winds.u[i] as number, v: winds.v[i] as number, density: winds.density[i] as number });
+  }
+  points.push({ height: top, u: topU, v: at(winds, winds.v, top), density: at(winds, winds.density, top) });
+  return points;
+}
+
+/**
+ * Bulk wind difference (shear magnitude) between two heights.
+ * Notes: |V(top) − V(bottom)| (common practice; Thompson2003 "BWD").
+ */
+function bulkShear(winds: WindProfile, bottom: number, top: number): number {
+  const du = at(winds, winds.u, top) - at(winds, winds.u, bottom);
+  const dv = at(winds, winds.v, top) - at(winds, winds.v, bottom);
+  return Math.hypot(du, dv);
+}
+
+/**
+ * Mean wind of a layer, height-weighted (or density-weighted), trapezoid rule.
+ * Notes: Bunkers2000 pg. 66 uses the non-pressure-weighted 0–6 km mean.
+ */
+function meanWind(winds: WindProfile, bottom: number, top: number, densityWeighted = false): WindVector | null {
+  const points = layerPoints(winds, bottom, top);
+  if (!points) return null;
+  let su = 0;
+  let sv = 0;
+  let sw = 0;
+  for (let i = 1; i < points.length; i++) {
+    const a = points[i - 1] as (typeof points)[number];
+    const b = points[i] as (typeof points)[number];
+    const dz = b.height - a.height;
+    const wa = densityWeighted ? a.density : 1;
+    const wb = densityWeighted ? b.density : 1;
+    su += 0.5 * (wa * a.u + wb * b.u) * dz;
+    sv += 0.5 * (wa * a.v + wb * b.v) * dz;
+    sw += 0.5 * (wa + wb) * dz;
+  }
+  return sw > 0 ? { u: su / sw, v: sv / sw } : null;
+}
+
+/**
+ * Bunkers storm motion: right- and left-moving supercells.
+ * Notes: V = V_mean ± D (k̂ × S)/|S| with V_mean the 0–6 km non-pressure-weighted mean wind,
+ * S the shear from the 0–0.5 km mean wind to the 5.5–6 km mean wind, D = 7.5 m s⁻¹; the
+ * right mover deviates to the right of S. Source: Bunkers2000 eq. 1 and pg. 66.
+ */
+function bunkersMotion(winds: WindProfile): { right: WindVector; left: WindVector; mean: WindVector } | null {
+  const mean = meanWind(winds, 0, 6000);
+  const low = meanWind(winds, 0, 500);
+  const high = meanWind(winds, 5500, 6000);
+  if (!mean || !low || !high) return null;
+  const su = high.u - low.u;
+  const sv = high.v - low.v;
+  const magnitude = Math.hypot(su, sv);
+  if (magnitude === 0) return { right: mean, left: mean, mean };
+  const deviation = 7.5 / magnitude;
+  return {
+    right: { u: mean.u + deviation * sv, v: mean.v - deviation * su },
+    left: { u: mean.u - deviation * sv, v: mean.v + deviation * su },
+    mean,
+  };
+}
+
+/**
+ * Storm-relative helicity of a layer.
+ * Notes: SRH = Σ [(u_{n+1} − c_x)(v_n − c_y) − (u_n − c_x)(v_{n+1} − c_y)] over the layer's
+ * hodograph points (DaviesJones1990; the discrete form of −∫ k̂·(V − C) × ∂V/∂z dz).
+ * Positive for a hodograph turning clockwise relative to the storm.
+ */
+function stormRelativeHelicity(winds: WindProfile, bottom: number, top: number, storm: WindVector): number {
+  const points = layerPoints(winds, bottom, top);
+  if (!points) return NaN;
+  let sum = 0;
+  for (let i = 1; i < points.length; i++) {
+    const a = points[i - 1] as (typeof points)[number];
+    const b = points[i] as (typeof points)[number];
+    sum += (b.u - storm.u) * (a.v - storm.v) - (a.u - storm.u) * (b.v - storm.v);
+  }
+  return sum;
+}
+
+/**
+ * The effective inflow layer: the lowest contiguous layer of levels whose parcels have
+ * CAPE ≥ 100 J kg⁻¹ and CIN ≥ −250 J kg⁻¹ (Thompson2007 pg. 104).
+ * The search for its base covers the lowest 300 hPa (the most-unstable layer); once a base
+ * is found the layer extends up to the last level before one that fails.
+ */
+export function effectiveInflowLayer(profile: Profile): EffectiveInflowLayer | null {
+  const limit = (profile.pressureHpa[0] as number) - 300;
+  let bottom = -1;
+  for (let k = 0; k <= profile.moistureTopIndex; k++) {
+    if (bottom < 0 && (profile.pressureHpa[k] as number) < limit) break;
+    const meets = meetsEffectiveInflowCriteria(profile, k);
+    if (bottom < 0) {
+      if (meets) bottom = k;
+    } else if (!meets) {
+      return layerOf(profile, bottom, k - 1);
+    }
+  }
+  return bottom < 0 ? null : layerOf(profile, bottom, profile.moistureTopIndex);
+}
+
+function layerOf(profile: Profile, bottom: number, top: number): EffectiveInflowLayer {
+  return {
+    bottomPressure: profile.pressureHpa[bottom] as number,
+    topPressure: profile.pressureHpa[top] as number,
+    bottomHeight: profile.heightAglM[bottom] as number,
+    topHeight: profile.heightAglM[top] as number,
+  };
+}
+
+/**
+ * Analyse the wind profile: shear, storm motion, helicity and the effective inflow layer.
+ * @param profile - the prepared environment
+ * @param mostUnstable - the most-unstable parcel (its EL sets the effective bulk shear depth)
+ * @returns {@link KinematicsAnalysis}
+ */
+export function analyzeKinematics(profile: Profile, mostUnstable: ParcelResult): KinematicsAnalysis {
+  const winds = windProfile(profile);
+  const motion = bunkersMotion(winds);
+  const layer = effectiveInflowLayer(profile);
+  let effectiveSrh: number | null = null;
+  let effectiveBulkShear: number | null = null;
+  if (motion) effectiveSrh = layer ? finiteOrNull(stormRelativeHelicity(winds, layer.bottomHeight, layer.topHeight, motion.right)) : 0;
+  if (layer && mostUnstable.elHeight !== null) {
+    const top = layer.bottomHeight + 0.5 * (mostUnstable.elHeight - layer.bottomHeight);
+    effectiveBulkShear = finiteOrNull(bulkShear(winds, layer.bottomHeight, top));
+  } else if (!layer && winds.height.length > 0) {
+    effectiveBulkShear = 0;
+  }
+  const deep = meanWind(winds, 0, 6000, true);
+  const shallow = meanWind(winds, 0, 500, true);
+  const brnShear = deep && shallow ? 0.5 * ((deep.u - shallow.u) ** 2 + (deep.v - shallow.v) ** 2) : null;
+  return {
+    bulkShear0to1km: finiteOrNull(bulkShear(winds, 0, 1000)),
+    bulkShear0to3km: finiteOrNull(bulkShear(winds, 0, 3000)),
+    bulkShear0to6km: finiteOrNull(bulkShear(winds, 0, 6000)),
+    meanWind0to6km: motion ? motion.mean : null,
+    stormMotionRight: motion ? motion.right : null,
+    stormMotionLeft: motion ? motion.left : null,
+    srh0to1km: motion ? finiteOrNull(stormRelativeHelicity(winds, 0, 1000, motion.right)) : null,
+    srh0to3km: motion ? finiteOrNull(stormRelativeHelicity(winds, 0, 3000, motion.right)) : null,
+    effectiveInflowLayer: layer,
+    effectiveSrh,
+    effectiveBulkShear,
+    brnShear,
+  };
+}

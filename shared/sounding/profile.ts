@@ -1,0 +1,190 @@
+import { EPSILON, ZERO_CELSIUS_K } from './constants';
+import { mixingRatio } from './mixing-ratio';
+import { saturationVaporPressure } from './saturation';
+import type { SoundingLevel } from './types';
+
+/**
+ * The environment prepared once per analysis: plain arrays in engine units, sorted by
+ * decreasing pressure, heights above ground level. Internal to the engine (not exported
+ * from index.ts); NaN marks a missing value here and never leaves the engine.
+ */
+export interface Profile {
+  count: number;
+  pressureHpa: Float64Array;
+  logPressure: Float64Array;
+  /** Height above the lowest level, m. */
+  heightAglM: Float64Array;
+  temperatureK: Float64Array;
+  /** Dewpoint, K; NaN above the top of the moisture data. Bracketed gaps are filled. */
+  dewpointK: Float64Array;
+  /** Mixing ratio, kg kg⁻¹; 0 above the top of the moisture data. */
+  mixingRatio: Float64Array;
+  /** Virtual temperature, K (equal to T where there is no moisture data). */
+  virtualTemperatureK: Float64Array;
+  /** Wind components, m s⁻¹; NaN where not reported. */
+  uMs: Float64Array;
+  vMs: Float64Array;
+  /** Index of the highest level with moisture data (−1: none). */
+  moistureTopIndex: number;
+  /** Elevation of the lowest level above mean sea level, m. */
+  groundElevationM: number;
+}
+
+/**
+ * Sort levels by decreasing pressure without copying when they already are.
+ * @param levels - sounding levels in any order
+ * @returns the same levels, highest pressure first
+ */
+export function sortByDecreasingPressure(levels: readonly SoundingLevel[]): readonly SoundingLevel[] {
+  for (let i = 1; i < levels.length; i++) {
+    if ((levels[i] as SoundingLevel).pressureHpa >= (levels[i - 1] as SoundingLevel).pressureHpa) {
+      return [...levels].sort((a, b) => b.pressureHpa - a.pressureHpa);
+    }
+  }
+  return levels;
+}
+
+/**
+ * Build the analysis profile from sounding levels.
+ *
+ * Missing dewpoints are interpolated linearly in ln p where a reported dewpoint lies both
+ * below and above them (SCIENCE.md); above the last reported dewpoint the moisture profile
+ * ends. A dewpoint above the temperature is capped at the temperature.
+ * @param levels - at least two levels with distinct pressures, in any order
+ * @returns the profile
+ * @throws RangeError for fewer than two levels (validate input first)
+ */
+export function buildProfile(levels: readonly SoundingLevel[]): Profile {
+  if (levels.length < 2) {
+    throw new RangeError('A sounding needs at least two levels; validate it with validateSounding first.');
+  }
+  const sorted = sortByDecreasingPressure(levels);
+  const count = sorted.length;
+  const pressureHpa = new Float64Array(count);
+  const logPressure = new Float64Array(count);
+  const heightAglM = new Float64Array(count);
+  const temperatureK = new Float64Array(count);
+  const dewpointK = new Float64Array(count);
+  const mixing = new Float64Array(count);
+  const virtualTemperatureK = new Float64Array(count);
+  const uMs = new Float64Array(count);
+  const vMs = new Float64Array(count);
+  const ground = (sorted[0] as SoundingLevel).heightM;
+  let moistureTopIndex = -1;
+  for (let i = 0; i < count; i++) {
+    const level = sorted[i] as SoundingLevel;
+    pressureHpa[i] = level.pressureHpa;
+    logPressure[i] = Math.log(level.pressureHpa);
+    heightAglM[i] = level.heightM - ground;
+    temperatureK[i] = level.temperatureC + ZERO_CELSIUS_K;
+    const dewpoint = level.dewpointC;
+    dewpointK[i] = dewpoint === null || !Number.isFinite(dewpoint) ? NaN : dewpoint + ZERO_CELSIUS_K;
+    if (!Number.isNaN(dewpointK[i] as number)) moistureTopIndex = i;
+    const hasWind = level.uMs !== null && level.vMs !== null && Number.isFinite(level.uMs) && Number.isFinite(level.vMs);
+    uMs[i] = hasWind ? (level.uMs as number) : NaN;
+    vMs[i] = hasWind ? (level.vMs as number) : NaN;
+  }
+  // Fill bracketed dewpoint gaps (linear in ln p).
+  let lastKnown = -1;
+  for (let i = 0; i <= moistureTopIndex; i++) {
+    if (Number.isNaN(dewpointK[i] as number)) continue;
+    if (lastKnown >= 0 && i - lastKnown > 1) {
+      const lowerDewpoint = dewpointK[lastKnown] as number;
+      const upperDewpoint = dewpointK[i] as number;
+      const span = (logPressure[i] as number) - (logPressure[lastKnown] as number);
+      for (let k = lastKnown + 1; k < i; k++) {
+        const fraction = ((logPressure[k] as number) - (logPressure[lastKnown] as number)) / span;
+        dewpointK[k] = lowerDewpoint + fraction * (upperDewpoint - lowerDewpoint);
+      }
+    }
+    lastKnown = i;
+  }
+  for (let i = 0; i < count; i++) {
+    const temperature = temperatureK[i] as number;
+    let dewpoint = dewpointK[i] as number;
+    if (dewpoint > temperature) {
+      dewpoint = temperature;
+      dewpointK[i] = dewpoint;
+    }
+    const w = Number.isNaN(dewpoint) ? 0 : mixingRatio(saturationVaporPressure(dewpoint), pressureHpa[i] as number);
+    mixing[i] = w;
+    virtualTemperatureK[i] = (temperature * (w + EPSILON)) / (EPSILON * (1 + w));
+  }
+  return {
+    count,
+    pressureHpa,
+    logPressure,
+    heightAglM,
+    temperatureK,
+    dewpointK,
+    mixingRatio: mixing,
+    virtualTemperatureK,
+    uMs,
+    vMs,
+    moistureTopIndex,
+    groundElevationM: ground,
+  };
+}
+
+/**
+ * Index i such that p[i] ≥ pressure > p[i+1] (the layer holding a pressure), or −1 when the
+ * pressure lies outside the profile.
+ */
+export function layerIndexAtPressure(profile: Profile, pressureHpa: number): number {
+  const p = profile.pressureHpa;
+  const n = profile.count;
+  if (!(pressureHpa <= (p[0] as number) && pressureHpa >= (p[n - 1] as number))) return -1;
+  let low = 0;
+  let high = n - 1;
+  while (high - low > 1) {
+    const middle = (low + high) >> 1;
+    if ((p[middle] as number) >= pressureHpa) low = middle;
+    else high = middle;
+  }
+  return low;
+}
+
+/**
+ * Value of a profile array at a pressure, linear in ln p; NaN outside the profile.
+ */
+export function valueAtPressure(profile: Profile, values: Float64Array, pressureHpa: number): number {
+  const i = layerIndexAtPressure(profile, pressureHpa);
+  if (i < 0) return NaN;
+  const lnp = Math.log(pressureHpa);
+  const lower = profile.logPressure[i] as number;
+  const upper = profile.logPressure[i + 1] as number;
+  const fraction = upper === lower ? 0 : (lnp - lower) / (upper - lower);
+  const a = values[i] as number;
+  return a + fraction * ((values[i + 1] as number) - a);
+}
+
+/**
+ * Value of a profile array at a height above ground, linear in height; NaN outside.
+ */
+export function valueAtHeight(profile: Profile, values: Float64Array, heightAglM: number): number {
+  const z = profile.heightAglM;
+  const n = profile.count;
+  if (!(heightAglM >= (z[0] as number) && heightAglM <= (z[n - 1] as number))) return NaN;
+  let low = 0;
+  let high = n - 1;
+  while (high - low > 1) {
+    const middle = (low + high) >> 1;
+    if ((z[middle] as number) <= heightAglM) low = middle;
+    else high = middle;
+  }
+  const z0 = z[low] as number;
+  const z1 = z[high] as number;
+  const fraction = z1 === z0 ? 0 : (heightAglM - z0) / (z1 - z0);
+  const a = values[low] as number;
+  return a + fraction * ((values[high] as number) - a);
+}
+
+/** Pressure at a height above ground (ln p linear in height); NaN outside the profile. */
+export function pressureAtHeight(profile: Profile, heightAglM: number): number {
+  return Math.exp(valueAtHeight(profile, profile.logPressure, heightAglM));
+}
+
+/** Height above ground at a pressure (linear in ln p); NaN outside the profile. */
+export function heightAtPressure(profile: Profile, pressureHpa: number): number {
+  return valueAtPressure(profile, profile.heightAglM, pressureHpa);
+}
