@@ -46,6 +46,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
       children: [
         {
           index: true,
+          Component: InitialLoading,
           loader: async () => {
             const me = await queryClient.ensureQueryData(meQueryOptions());
             return redirect(me ? homePathFor(me.user.role) : '/bulletin');
@@ -125,7 +126,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               path: 'admin',
               element: <RoleGate roles={admins} />,
               children: [
-                { index: true, loader: () => redirect('/admin/users') },
+                { index: true, Component: InitialLoading, loader: () => redirect('/admin/users') },
                 {
                   path: 'users',
                   lazy: async () => {

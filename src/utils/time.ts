@@ -14,12 +14,14 @@ export function readClock(instant: Date, timeZone: string): ClockReading {
     weekday: 'short',
     day: 'numeric',
     month: 'short',
-    timeZoneName: 'short',
   }).formatToParts(instant);
   const part = (type: Intl.DateTimeFormatPartTypes) => parts.find((p) => p.type === type)?.value ?? '';
+  // en-US knows the familiar abbreviations (CDT, EST); en-GB would say GMT-5.
+  const zoneName =
+    new Intl.DateTimeFormat('en-US', { timeZone, timeZoneName: 'short' }).formatToParts(instant).find((p) => p.type === 'timeZoneName')?.value ?? timeZone;
   return {
     time: `${part('hour')}:${part('minute')}`,
-    zone: timeZone === 'UTC' ? 'UTC' : part('timeZoneName'),
+    zone: timeZone === 'UTC' ? 'UTC' : zoneName,
     date: `${part('weekday')} ${part('day')} ${part('month')}`,
   };
 }

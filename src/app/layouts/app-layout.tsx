@@ -37,7 +37,7 @@ export function AppLayout() {
   };
 
   return (
-    <div className="flex min-h-dvh flex-col">
+    <div className="flex h-dvh flex-col">
       <a
         href="#main"
         className="sr-only focus:not-sr-only focus:absolute focus:top-2 focus:left-2 focus:z-50 focus:rounded focus:bg-panel focus:px-3 focus:py-2 focus:text-sm"
@@ -47,9 +47,10 @@ export function AppLayout() {
       <StatusStrip officeName={office.data?.name} timeZone={office.data?.timeZone} onSlot={setSlot} />
       <div className="flex min-h-0 flex-1 flex-col md:flex-row">
         <AppNav user={me.data.user} onSignOut={handleSignOut} signingOut={signOut.isPending} />
-        <main id="main" tabIndex={-1} className="min-w-0 flex-1 px-6 py-5 focus:outline-none">
+        <main id="main" tabIndex={-1} className="min-w-0 flex-1 overflow-y-auto px-6 pt-5 focus:outline-none">
           <StatusStripSlotProvider slot={slot}>
             <Outlet />
+            <div className="h-6" aria-hidden />
           </StatusStripSlotProvider>
         </main>
       </div>

@@ -1,4 +1,4 @@
-import { Link, Outlet } from 'react-router';
+import { Link, Outlet, useLocation } from 'react-router';
 import { Caution } from '../../components/ui/caution';
 import { useMe } from '../../hooks/use-me';
 import { useOffice } from '../../hooks/use-office';
@@ -9,6 +9,8 @@ export function PublicLayout() {
   const office = useOffice();
   const me = useMe();
   const user = me.data?.user;
+  // The bulletin shows the caution right under its heading; every other public page in the footer.
+  const cautionInPage = useLocation().pathname === '/bulletin';
   return (
     <div className="flex min-h-dvh flex-col">
       <header className="border-b border-line bg-panel">
@@ -41,11 +43,13 @@ export function PublicLayout() {
       <main id="main" className="mx-auto w-full max-w-5xl flex-1 px-5 py-8">
         <Outlet />
       </main>
-      <footer className="border-t border-line bg-panel">
-        <div className="mx-auto max-w-5xl px-5 py-4">
-          <Caution />
-        </div>
-      </footer>
+      {cautionInPage ? null : (
+        <footer className="border-t border-line bg-panel">
+          <div className="mx-auto max-w-5xl px-5 py-4">
+            <Caution />
+          </div>
+        </footer>
+      )}
     </div>
   );
 }

@@ -2,7 +2,7 @@ import { clsx } from 'clsx';
 import { useId, type InputHTMLAttributes, type ReactNode, type SelectHTMLAttributes } from 'react';
 
 export const inputClasses =
-  'block w-full rounded-md border border-line-strong bg-panel px-2.5 py-1.5 text-sm text-ink placeholder:text-ink-faint aria-[invalid=true]:border-danger';
+  'block w-full rounded-md border border-line-strong bg-panel px-2.5 py-1.5 text-sm text-ink placeholder:text-ink-faint aria-[invalid=true]:border-danger disabled:bg-sunken disabled:text-ink-muted';
 
 export function FieldError({ id, children }: { id?: string; children: ReactNode }) {
   return (

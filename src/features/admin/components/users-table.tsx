@@ -45,7 +45,6 @@ export function UsersTable({ users, currentUserId }: UsersTableProps) {
               <th scope="col" className="px-3 py-2">E-mail</th>
               <th scope="col" className="px-3 py-2">Role</th>
               <th scope="col" className="px-3 py-2">Status</th>
-              <th scope="col" className="px-3 py-2">Created</th>
               <th scope="col" className="px-3 py-2 text-right">Access</th>
             </tr>
           </thead>
@@ -59,7 +58,10 @@ export function UsersTable({ users, currentUserId }: UsersTableProps) {
                     {user.name}
                     {isSelf ? <span className="ml-1.5 rounded bg-accent-soft px-1.5 py-0.5 text-[11px] font-semibold text-accent-strong">you</span> : null}
                   </th>
-                  <td className="px-3 py-2">{user.email}</td>
+                  <td className="px-3 py-2">
+                    <span className="break-all">{user.email}</span>
+                    <span className="block text-[12px] text-ink-faint">Since {formatTimestampUtc(user.createdAt)}</span>
+                  </td>
                   <td className="px-3 py-1.5">
                     <SelectField
                       label={`Role of ${user.name}`}
@@ -67,7 +69,7 @@ export function UsersTable({ users, currentUserId }: UsersTableProps) {
                       value={user.role}
                       options={roleOptions}
                       disabled={busy || isSelf}
-                      className="w-40"
+                      className="w-36"
                       onChange={(event) => {
                         const role = roles.find((r) => r === event.target.value);
                         if (role && role !== user.role) change(user, { role });
@@ -81,7 +83,6 @@ export function UsersTable({ users, currentUserId }: UsersTableProps) {
                       <span className="rounded bg-ok-soft px-1.5 py-0.5 text-[12px] font-semibold text-ok">Active</span>
                     )}
                   </td>
-                  <td className="px-3 py-2 whitespace-nowrap text-ink-muted">{formatTimestampUtc(user.createdAt)}</td>
                   <td className="px-3 py-2 text-right whitespace-nowrap">
                     {isSelf ? (
                       <span className="text-[13px] text-ink-faint">—</span>

@@ -17,7 +17,7 @@ export function UsersPage() {
   return (
     <>
       <PageHeader title="Users" description="Everyone who can sign in to this office: staff and alert subscribers." />
-      <div className="grid items-start gap-5 xl:grid-cols-[minmax(0,1fr)_20rem]">
+      <div className="grid items-start gap-5 2xl:grid-cols-[minmax(0,1fr)_20rem]">
         <div>
           {users.isPending ? <Loading label="Loading users…" /> : null}
           {users.isError ? (
@@ -27,7 +27,7 @@ export function UsersPage() {
           ) : null}
           {users.data ? <UsersTable users={users.data.users} currentUserId={me.data?.user.id ?? ''} /> : null}
         </div>
-        <Panel title="Create staff user" description="Forecasters, lead forecasters and administrators. Subscribers register themselves.">
+        <Panel className="max-w-xl" title="Create staff user" description="Forecasters, lead forecasters and administrators. Subscribers register themselves.">
           <CreateUserForm />
         </Panel>
       </div>

@@ -1,0 +1,66 @@
+import { cleanup, screen, within } from '@testing-library/react';
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { fakeServer, renderApp } from '../test/render-app';
+
+afterEach(() => {
+  cleanup();
+  vi.unstubAllGlobals();
+});
+
+const navLinks = async () => {
+  const nav = await screen.findByRole('navigation', { name: 'Main' });
+  return within(nav)
+    .getAllByRole('link')
+    .map((link) => link.textContent);
+};
+
+describe('app shell by role', () => {
+  it('when a lead opens the forecast desk, the navigation offers review and the desk but no admin pages', async () => {
+    fakeServer({ role: 'lead' });
+    renderApp('/desk');
+    expect(await screen.findByRole('heading', { level: 1, name: 'Forecast desk' })).toBeDefined();
+    expect(await navLinks()).toEqual(['Review queue', 'Forecast desk', 'Public bulletin', 'Account']);
+  });
+
+  it('when an admin is signed in, the navigation lists users, settings and mail', async () => {
+    fakeServer({ role: 'admin', routes: [({ path }) => (path === '/api/users' ? { status: 200, body: { users: [] } } : undefined)] });
+    renderApp('/admin/users');
+    expect(await screen.findByRole('heading', { level: 1, name: 'Users' })).toBeDefined();
+    expect(await navLinks()).toEqual(['Users', 'Office settings', 'Mail catcher', 'Public bulletin', 'Account']);
+  });
+
+  it('when a subscriber opens an admin page, a panel names their role and no admin data is requested', async () => {
+    const server = fakeServer({ role: 'subscriber' });
+    renderApp('/admin/users');
+    expect(await screen.findByRole('heading', { name: 'Your role (subscriber) cannot open this page' })).toBeDefined();
+    expect(server.requests.some((request) => request.path === '/api/users')).toBe(false);
+  });
+
+  it('when nobody is signed in, / opens the public bulletin with the caution', async () => {
+    fakeServer({ role: null });
+    renderApp('/');
+    expect(await screen.findByRole('heading', { level: 1, name: 'Severe-thunderstorm outlook' })).toBeDefined();
+    expect(screen.getByText('No outlook has been published yet')).toBeDefined();
+    expect(screen.getByRole('complementary', { name: 'Caution' }).textContent).toContain('planning guidance, not a warning');
+  });
+
+  it('when a signed-in forecaster opens /, they land on the forecast desk', async () => {
+    fakeServer({ role: 'forecaster' });
+    const { router } = renderApp('/');
+    expect(await screen.findByRole('heading', { level: 1, name: 'Forecast desk' })).toBeDefined();
+    expect(router.state.location.pathname).toBe('/desk');
+  });
+
+  it('when nobody is signed in, a staff page sends them to sign in and remembers where they were going', async () => {
+    fakeServer({ role: null });
+    const { router } = renderApp('/review');
+    expect(await screen.findByRole('heading', { level: 1, name: 'Sign in to Stormdraft' })).toBeDefined();
+    expect(router.state.location.search).toBe('?next=%2Freview');
+  });
+
+  it('when the path is unknown, the 404 page says so', async () => {
+    fakeServer({ role: null });
+    renderApp('/no/such/page');
+    expect(await screen.findByRole('heading', { level: 1, name: 'We could not find that page' })).toBeDefined();
+  });
+});
