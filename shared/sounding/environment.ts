@@ -1,4 +1,4 @@
-import { EPSILON, GRAVITY, ZERO_CELSIUS_K } from './constants';
+import * as constants from './constants';
 import { dewpointFromMixingRatio } from './mixing-ratio';
 import { pseudoAdiabatTable } from './moist-adiabat';
 import { finiteOrNull, mixedLayerStart } from './parcel';
@@ -7,6 +7,9 @@ import { saturationVaporPressure } from './saturation';
 import { equivalentPotentialTemperatureFromMixingRatio } from './thermo';
 import { lclTemperature } from './lcl';
 import { wetBulbTemperature } from './wet-bulb';
+
+// Constants copied once at load (fast access in hot loops).
+const { EPSILON, GRAVITY, ZERO_CELSIUS_K } = constants;
 
 /** Moisture and temperature structure of the environment. Units in the names and docs. */
 export interface EnvironmentAnalysis {

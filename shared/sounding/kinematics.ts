@@ -1,6 +1,9 @@
-import { RD } from './constants';
+import * as constants from './constants';
 import { finiteOrNull, meetsEffectiveInflowCriteria, type ParcelResult } from './parcel';
 import type { Profile } from './profile';
+
+// Constants copied once at load (fast access in hot loops).
+const { RD } = constants;
 
 /** A wind vector, m s⁻¹ (u toward east, v toward north). */
 export interface WindVector {

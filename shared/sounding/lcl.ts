@@ -1,4 +1,7 @@
-import { KAPPA } from './constants';
+import * as constants from './constants';
+
+// Constants copied once at load (fast access in hot loops).
+const { KAPPA } = constants;
 
 /**
  * Temperature at the lifted condensation level (LCL).

@@ -1,5 +1,8 @@
-import { EPSILON } from './constants';
+import * as constants from './constants';
 import { dewpointFromVaporPressure, saturationVaporPressure } from './saturation';
+
+// Constants copied once at load (fast access in hot loops).
+const { EPSILON } = constants;
 
 /**
  * Mixing ratio of water vapour from its partial pressure.

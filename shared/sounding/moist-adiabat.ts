@@ -1,4 +1,7 @@
-import { CP_DRY, CP_LIQUID, EPSILON, LV_0C, LV_SLOPE, RD, ZERO_CELSIUS_K } from './constants';
+import * as constants from './constants';
+
+// Constants copied once at load (fast access in hot loops).
+const { CP_DRY, CP_LIQUID, EPSILON, LV_0C, LV_SLOPE, RD, ZERO_CELSIUS_K } = constants;
 
 /**
  * Pseudo-adiabatic lapse rate in pressure coordinates: how fast saturated air cools as it rises
@@ -74,7 +77,7 @@ export function moistAdiabatTemperature(
 
 const TABLE_BOTTOM_HPA = 1100;
 const TABLE_LOG_STEP = 0.01;
-const TABLE_PRESSURE_NODES = 471; // 1100 hPa up to 1100·e^(−4.70) ≈ 9.99 hPa
+const TABLE_PRESSURE_NODES = 472; // 1100 hPa up to 1100·e^(−4.71) ≈ 9.9 hPa
 const TABLE_THETA_W_MIN_K = ZERO_CELSIUS_K - 70;
 const TABLE_THETA_W_STEP_K = 0.5;
 const TABLE_THETA_W_NODES = 241; // −70 °C to +50 °C
@@ -157,6 +160,13 @@ export class PseudoAdiabatTable {
     return lower + fy * (upper - lower);
   }
 
+  /** Temperature of curve i between pressure nodes j and j+1 (fraction fx). */
+  private atNode(i: number, j: number, fx: number): number {
+    const t = this.temperatures;
+    const a = i * TABLE_PRESSURE_NODES + j;
+    return (t[a] as number) + fx * ((t[a + 1] as number) - (t[a] as number));
+  }
+
   /**
    * Label θ_w of the pseudo-adiabat through a saturated point (the inverse lookup).
    * @param temperatureK - temperature of saturated air, K
@@ -170,25 +180,20 @@ export class PseudoAdiabatTable {
     }
     const j = Math.min(Math.floor(x), TABLE_PRESSURE_NODES - 2);
     const fx = x - j;
-    const t = this.temperatures;
-    const at = (i: number): number => {
-      const a = i * TABLE_PRESSURE_NODES + j;
-      return (t[a] as number) + fx * ((t[a + 1] as number) - (t[a] as number));
-    };
-    let low = 0;
+        let low = 0;
     let high = TABLE_THETA_W_NODES - 1;
-    const lowTemperature = at(low);
-    const highTemperature = at(high);
+    const lowTemperature = this.atNode(low, j, fx);
+    const highTemperature = this.atNode(high, j, fx);
     if (temperatureK < lowTemperature || temperatureK > highTemperature) {
       return moistAdiabatTemperature(Math.exp(logPressure), temperatureK, 1000);
     }
     while (high - low > 1) {
       const middle = (low + high) >> 1;
-      if (at(middle) <= temperatureK) low = middle;
+      if (this.atNode(middle, j, fx) <= temperatureK) low = middle;
       else high = middle;
     }
-    const tLow = at(low);
-    const tHigh = at(high);
+    const tLow = this.atNode(low, j, fx);
+    const tHigh = this.atNode(high, j, fx);
     const fraction = tHigh > tLow ? (temperatureK - tLow) / (tHigh - tLow) : 0;
     return TABLE_THETA_W_MIN_K + (low + fraction) * TABLE_THETA_W_STEP_K;
   }

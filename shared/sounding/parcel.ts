@@ -65,6 +65,11 @@ export interface ParcelStart {
   mixingRatio: number;
 }
 
+// Module-level copies of the constants used in the hot loop (read once, not per level).
+const EPS = EPSILON;
+const G = GRAVITY;
+const K = KAPPA;
+const ZERO_C = ZERO_CELSIUS_K;
 const LOG_1000 = Math.log(1000);
 const LOG_500 = Math.log(500);
 const THREE_KM = 3000;
@@ -93,8 +98,7 @@ export const EFFECTIVE_CIN_MIN = -250;
  * When `effectiveCheck` is set, it stops as soon as the Thompson2007 criteria are decided.
  */
 function ascend(profile: Profile, start: ParcelStart, options: ParcelOptions, effectiveCheck: boolean): AscentOutcome {
-  const method = options.moistAscent ?? 'table';
-  const table = method === 'table' ? pseudoAdiabatTable() : undefined;
+  const table = (options.moistAscent ?? 'table') === 'table' ? pseudoAdiabatTable() : undefined;
   const trace: ParcelTracePoint[] | undefined = options.trace ? [] : undefined;
   const p = profile.pressureHpa;
   const lnps = profile.logPressure;
@@ -106,27 +110,15 @@ function ascend(profile: Profile, start: ParcelStart, options: ParcelOptions, ef
   const startLogPressure = Math.log(startPressure);
   const startTemperature = start.temperatureK;
   const w0 = Math.max(start.mixingRatio, MIN_MIXING_RATIO);
-  const theta = startTemperature * Math.exp(KAPPA * (LOG_1000 - startLogPressure));
-  const vaporFactor = (w0 + EPSILON) / (EPSILON * (1 + w0));
+  const theta = startTemperature * Math.exp(K * (LOG_1000 - startLogPressure));
+  const vaporFactor = (w0 + EPS) / (EPS * (1 + w0));
   const startDewpoint = Math.min(dewpointFromMixingRatio(w0, startPressure), startTemperature);
   const temperatureLcl = lclTemperature(startTemperature, startDewpoint);
-  const logPressureLcl = startLogPressure + Math.log(temperatureLcl / startTemperature) / KAPPA;
+  const logPressureLcl = startLogPressure + Math.log(temperatureLcl / startTemperature) / K;
   const pressureLcl = Math.exp(logPressureLcl);
   const thetaW = table ? table.thetaW(temperatureLcl, logPressureLcl) : NaN;
   let referencePressure = pressureLcl;
   let referenceTemperature = temperatureLcl;
-
-  const moistTemperature = (logPressure: number, pressure: number): number => {
-    if (table) return table.temperature(thetaW, logPressure);
-    referenceTemperature = moistAdiabatTemperature(referencePressure, referenceTemperature, pressure, 1);
-    referencePressure = pressure;
-    return referenceTemperature;
-  };
-  const saturatedVirtual = (temperature: number, pressure: number): number => {
-    const es = saturationVaporPressure(temperature);
-    const ws = (EPSILON * es) / (pressure - es);
-    return (temperature * (ws + EPSILON)) / (EPSILON * (1 + ws));
-  };
 
   // Environment at the start (linear in ln p between the levels around it).
   const layer = layerIndexAtPressure(profile, startPressure);
@@ -137,124 +129,51 @@ function ascend(profile: Profile, start: ParcelStart, options: ParcelOptions, ef
   const startHeight = (z[layer] as number) + startFraction * ((z[layer + 1] as number) - (z[layer] as number));
   const startEnvVirtual = (tve[layer] as number) + startFraction * ((tve[layer + 1] as number) - (tve[layer] as number));
 
-  let cape = 0;
-  let cin = 0;
-  let cape3 = 0;
-  let lfcFound = false;
-  let lfcHeight = NaN;
-  let lfcLogPressure = NaN;
-  let elHeight = NaN;
-  let elLogPressure = NaN;
-  let lclHeight = NaN;
-  let decided = false;
-  let meets = false;
-
-  const addPositive = (za: number, ba: number, zb: number, bb: number): void => {
-    cape += positiveArea(za, ba, zb, bb);
-    if (za < THREE_KM) {
-      if (zb <= THREE_KM) cape3 += positiveArea(za, ba, zb, bb);
-      else cape3 += positiveArea(za, ba, THREE_KM, ba + ((THREE_KM - za) / (zb - za)) * (bb - ba));
-    }
-  };
-
-  // Previous point of the path.
-  let prevZ = startHeight;
-  let prevLog = startLogPressure;
-  let prevB = (GRAVITY * (startTemperature * vaporFactor - startEnvVirtual)) / startEnvVirtual;
+  const areas = new BuoyancyAreas(effectiveCheck);
+  const startBuoyancy = (G * (startTemperature * vaporFactor - startEnvVirtual)) / startEnvVirtual;
+  const startsSaturated = logPressureLcl >= startLogPressure;
+  areas.begin(startHeight, startLogPressure, startBuoyancy, startsSaturated);
+  let lclHeight = startsSaturated ? startHeight : NaN;
   let prevEnvVirtual = startEnvVirtual;
-  let prevAboveLcl = logPressureLcl >= startLogPressure;
-  if (prevAboveLcl) {
-    lclHeight = startHeight;
-    if (prevB > 0) {
-      lfcFound = true;
-      lfcHeight = startHeight;
-      lfcLogPressure = startLogPressure;
-    }
-  }
-  if (trace) {
-    trace.push(tracePoint(startPressure, startTemperature, startTemperature * vaporFactor));
-  }
+  if (trace) trace.push(tracePoint(startPressure, startTemperature, startTemperature * vaporFactor));
 
-  /** Process the segment from the previous point to (zc, lnpc, bc). */
-  const segment = (zc: number, lnpc: number, bc: number): void => {
-    if (!prevAboveLcl) {
-      cin += negativeArea(prevZ, prevB, zc, bc);
-    } else if (!lfcFound) {
-      if (bc > 0) {
-        const fraction = prevB / (prevB - bc);
-        const zx = prevZ + fraction * (zc - prevZ);
-        cin += negativeArea(prevZ, prevB, zx, 0);
-        lfcFound = true;
-        lfcHeight = zx;
-        lfcLogPressure = prevLog + fraction * (lnpc - prevLog);
-        addPositive(zx, 0, zc, bc);
-        elHeight = NaN;
-      } else {
-        cin += negativeArea(prevZ, prevB, zc, bc);
-      }
-    } else {
-      addPositive(prevZ, prevB, zc, bc);
-      if (bc > 0) {
-        elHeight = NaN;
-        elLogPressure = NaN;
-      } else if (prevB > 0) {
-        const fraction = prevB / (prevB - bc);
-        elHeight = prevZ + fraction * (zc - prevZ);
-        elLogPressure = prevLog + fraction * (lnpc - prevLog);
-      }
-    }
-    if (effectiveCheck && !decided) {
-      if (!lfcFound && cin < EFFECTIVE_CIN_MIN) {
-        decided = true;
-        meets = false;
-      } else if (lfcFound && cape >= EFFECTIVE_CAPE_MIN) {
-        decided = true;
-        meets = cin >= EFFECTIVE_CIN_MIN;
-      }
-    }
-  };
-
-  for (let k = layer + 1; k < count && !decided; k++) {
+  for (let k = layer + 1; k < count && !areas.decided; k++) {
     const pk = p[k] as number;
     if (pk >= startPressure) continue;
     const lnpk = lnps[k] as number;
     const zk = z[k] as number;
     const envVirtual = tve[k] as number;
-    if (!prevAboveLcl && lnpk < logPressureLcl) {
+    if (!areas.aboveLcl && lnpk < logPressureLcl) {
       // Insert the LCL as a point of the path.
-      const fraction = (logPressureLcl - prevLog) / (lnpk - prevLog);
-      const zl = prevZ + fraction * (zk - prevZ);
+      const fraction = (logPressureLcl - areas.prevLog) / (lnpk - areas.prevLog);
+      const zl = areas.prevZ + fraction * (zk - areas.prevZ);
       const envAtLcl = prevEnvVirtual + fraction * (envVirtual - prevEnvVirtual);
       const parcelVirtual = temperatureLcl * vaporFactor;
-      const bl = (GRAVITY * (parcelVirtual - envAtLcl)) / envAtLcl;
-      segment(zl, logPressureLcl, bl);
+      areas.reachLcl(zl, logPressureLcl, (G * (parcelVirtual - envAtLcl)) / envAtLcl);
       lclHeight = zl;
-      prevZ = zl;
-      prevLog = logPressureLcl;
-      prevB = bl;
-      prevAboveLcl = true;
-      if (bl > 0 && !lfcFound) {
-        lfcFound = true;
-        lfcHeight = zl;
-        lfcLogPressure = logPressureLcl;
-      }
       if (trace) trace.push(tracePoint(pressureLcl, temperatureLcl, parcelVirtual));
-      if (decided) break;
+      if (areas.decided) break;
     }
     let parcelTemperature: number;
     let parcelVirtual: number;
-    if (prevAboveLcl) {
-      parcelTemperature = moistTemperature(lnpk, pk);
-      parcelVirtual = saturatedVirtual(parcelTemperature, pk);
+    if (areas.aboveLcl) {
+      if (table) {
+        parcelTemperature = table.temperature(thetaW, lnpk);
+      } else {
+        referenceTemperature = moistAdiabatTemperature(referencePressure, referenceTemperature, pk, 1);
+        referencePressure = pk;
+        parcelTemperature = referenceTemperature;
+      }
+      // Saturated: wₛ from eₛ of Bolton1980 eq. 10 (written out: hot loop).
+      const temperatureC = parcelTemperature - ZERO_C;
+      const es = 6.112 * Math.exp((17.67 * temperatureC) / (temperatureC + 243.5));
+      const ws = (EPS * es) / (pk - es);
+      parcelVirtual = (parcelTemperature * (ws + EPS)) / (EPS * (1 + ws));
     } else {
-      parcelTemperature = theta * Math.exp(KAPPA * (lnpk - LOG_1000));
+      parcelTemperature = theta * Math.exp(K * (lnpk - LOG_1000));
       parcelVirtual = parcelTemperature * vaporFactor;
     }
-    const bk = (GRAVITY * (parcelVirtual - envVirtual)) / envVirtual;
-    segment(zk, lnpk, bk);
-    prevZ = zk;
-    prevLog = lnpk;
-    prevB = bk;
+    areas.add(zk, lnpk, (G * (parcelVirtual - envVirtual)) / envVirtual);
     prevEnvVirtual = envVirtual;
     if (trace) trace.push(tracePoint(pk, parcelTemperature, parcelVirtual));
   }
@@ -262,38 +181,135 @@ function ascend(profile: Profile, start: ParcelStart, options: ParcelOptions, ef
   // Lifted index at 500 hPa (Galway1956), from temperatures (no virtual correction).
   let liftedIndex = NaN;
   const top = p[count - 1] as number;
-  if (startPressure >= 500 && top <= 500) {
+  if (!effectiveCheck && startPressure >= 500 && top <= 500) {
     const environment500 = valueAtPressure(profile, profile.temperatureK, 500);
     let parcel500: number;
-    if (pressureLcl <= 500) parcel500 = theta * Math.exp(KAPPA * (LOG_500 - LOG_1000));
+    if (pressureLcl <= 500) parcel500 = theta * Math.exp(K * (LOG_500 - LOG_1000));
     else if (table) parcel500 = table.temperature(thetaW, LOG_500);
     else parcel500 = moistAdiabatTemperature(pressureLcl, temperatureLcl, 500, 1);
     liftedIndex = environment500 - parcel500;
   }
 
-  if (!lfcFound) {
-    cape = 0;
-    cin = 0;
-    cape3 = 0;
-  }
+  const found = areas.lfcFound;
+  const hasEl = found && Number.isFinite(areas.elHeight);
   return {
     parcelPressure: startPressure,
-    parcelTemperatureC: startTemperature - ZERO_CELSIUS_K,
-    parcelDewpointC: startDewpoint - ZERO_CELSIUS_K,
-    cape,
-    cin: Math.min(0, cin),
+    parcelTemperatureC: startTemperature - ZERO_C,
+    parcelDewpointC: startDewpoint - ZERO_C,
+    cape: found ? areas.cape : 0,
+    cin: found ? Math.min(0, areas.cin) : 0,
     lclPressure: pressureLcl,
     lclHeight: finiteOrNull(lclHeight),
-    lclTemperature: temperatureLcl - ZERO_CELSIUS_K,
-    lfcPressure: lfcFound ? Math.exp(lfcLogPressure) : null,
-    lfcHeight: lfcFound ? lfcHeight : null,
-    elPressure: lfcFound && Number.isFinite(elHeight) ? Math.exp(elLogPressure) : null,
-    elHeight: lfcFound && Number.isFinite(elHeight) ? elHeight : null,
+    lclTemperature: temperatureLcl - ZERO_C,
+    lfcPressure: found ? Math.exp(areas.lfcLogPressure) : null,
+    lfcHeight: found ? areas.lfcHeight : null,
+    elPressure: hasEl ? Math.exp(areas.elLogPressure) : null,
+    elHeight: hasEl ? areas.elHeight : null,
     liftedIndex: finiteOrNull(liftedIndex),
-    cape0to3km: cape3,
+    cape0to3km: found ? areas.cape0to3km : 0,
     ...(trace ? { trace } : {}),
-    meetsEffectiveCriteria: effectiveCheck ? meets : cape >= EFFECTIVE_CAPE_MIN && cin >= EFFECTIVE_CIN_MIN,
+    meetsEffectiveCriteria: effectiveCheck
+      ? areas.meetsEffectiveCriteria
+      : found && areas.cape >= EFFECTIVE_CAPE_MIN && areas.cin >= EFFECTIVE_CIN_MIN,
   };
+}
+
+/**
+ * Accumulates the areas of a piecewise-linear buoyancy profile B(z) point by point, with the
+ * conventions of SCIENCE.md: CAPE = positive area above the LCL (between the lowest LFC and
+ * the highest EL), CIN = negative area from the start to the LFC, negative layers between
+ * positive areas in neither, positive area below the LCL in neither.
+ */
+class BuoyancyAreas {
+  cape = 0;
+  cin = 0;
+  cape0to3km = 0;
+  lfcFound = false;
+  lfcHeight = NaN;
+  lfcLogPressure = NaN;
+  elHeight = NaN;
+  elLogPressure = NaN;
+  prevZ = 0;
+  prevLog = 0;
+  prevB = 0;
+  aboveLcl = false;
+  decided = false;
+  meetsEffectiveCriteria = false;
+
+  constructor(private readonly effectiveCheck: boolean) {}
+
+  /** The starting point; `atLcl` when the parcel starts saturated. */
+  begin(z: number, logPressure: number, buoyancy: number, atLcl: boolean): void {
+    this.prevZ = z;
+    this.prevLog = logPressure;
+    this.prevB = buoyancy;
+    if (atLcl) this.markLcl(z, logPressure, buoyancy);
+  }
+
+  /** The LCL point: the segment below it counts for CIN only. */
+  reachLcl(z: number, logPressure: number, buoyancy: number): void {
+    this.add(z, logPressure, buoyancy);
+    this.markLcl(z, logPressure, buoyancy);
+  }
+
+  private markLcl(z: number, logPressure: number, buoyancy: number): void {
+    this.aboveLcl = true;
+    if (buoyancy > 0 && !this.lfcFound) {
+      this.lfcFound = true;
+      this.lfcHeight = z;
+      this.lfcLogPressure = logPressure;
+    }
+  }
+
+  /** The segment from the previous point to (z, ln p, B). */
+  add(z: number, logPressure: number, buoyancy: number): void {
+    const za = this.prevZ;
+    const ba = this.prevB;
+    if (!this.aboveLcl) {
+      this.cin += negativeArea(za, ba, z, buoyancy);
+    } else if (!this.lfcFound) {
+      if (buoyancy > 0) {
+        const fraction = ba / (ba - buoyancy);
+        const zx = za + fraction * (z - za);
+        this.cin += negativeArea(za, ba, zx, 0);
+        this.lfcFound = true;
+        this.lfcHeight = zx;
+        this.lfcLogPressure = this.prevLog + fraction * (logPressure - this.prevLog);
+        this.addPositive(zx, 0, z, buoyancy);
+      } else {
+        this.cin += negativeArea(za, ba, z, buoyancy);
+      }
+    } else {
+      this.addPositive(za, ba, z, buoyancy);
+      if (buoyancy > 0) {
+        this.elHeight = NaN;
+        this.elLogPressure = NaN;
+      } else if (ba > 0) {
+        const fraction = ba / (ba - buoyancy);
+        this.elHeight = za + fraction * (z - za);
+        this.elLogPressure = this.prevLog + fraction * (logPressure - this.prevLog);
+      }
+    }
+    this.prevZ = z;
+    this.prevLog = logPressure;
+    this.prevB = buoyancy;
+    if (this.effectiveCheck && !this.decided) {
+      if (!this.lfcFound && this.cin < EFFECTIVE_CIN_MIN) {
+        this.decided = true;
+      } else if (this.lfcFound && this.cape >= EFFECTIVE_CAPE_MIN) {
+        this.decided = true;
+        this.meetsEffectiveCriteria = this.cin >= EFFECTIVE_CIN_MIN;
+      }
+    }
+  }
+
+  private addPositive(za: number, ba: number, zb: number, bb: number): void {
+    this.cape += positiveArea(za, ba, zb, bb);
+    if (za < THREE_KM) {
+      if (zb <= THREE_KM) this.cape0to3km += positiveArea(za, ba, zb, bb);
+      else this.cape0to3km += positiveArea(za, ba, THREE_KM, ba + ((THREE_KM - za) / (zb - za)) * (bb - ba));
+    }
+  }
 }
 
 function tracePoint(pressureHpa: number, temperatureK: number, virtualTemperatureK: number): ParcelTracePoint {

@@ -58,7 +58,36 @@ interface Column {
 
 /** True for the exchange format's missing-value markers: empty, NA, −9999. */
 function isMissing(cell: string): boolean {
-  return cell === '' || cell.toUpperCase() === 'NA' || Number(cell) === -9999;
+  return cell === '' || cell === 'NA' || cell === 'na' || cell === 'Na' || cell === '-9999' || (cell.startsWith('-9999') && Number(cell) === -9999);
+}
+
+/** {@link readCell}, reporting a cell that is not a number as NOT_A_NUMBER (then null). */
+function readReported(
+  cells: string[],
+  columns: Partial<Record<Quantity, Column>>,
+  quantity: Quantity,
+  line: number,
+  fileName: string,
+  issues: IssueList,
+): number | null {
+  const column = columns[quantity];
+  const value = readCell(cells, column);
+  if (value !== undefined) return value;
+  const header = (column as Column).header;
+  issues.error('NOT_A_NUMBER', `${fileName}, line ${line}, column ${header}: "${cells[(column as Column).index]}" is not a number (use an empty cell, NA or -9999 for a missing value).`, { line, column: header });
+  return null;
+}
+
+/**
+ * The value of a column in a row in engine units: null when the column is absent or the cell
+ * holds a missing marker, undefined when the cell is not a number.
+ */
+function readCell(cells: string[], column: Column | undefined): number | null | undefined {
+  if (!column) return null;
+  const cell = cells[column.index] as string;
+  if (isMissing(cell)) return null;
+  const value = Number(cell);
+  return Number.isFinite(value) ? column.convert(value) : undefined;
 }
 
 /**
@@ -167,35 +196,22 @@ export function parseSoundingCsv(text: string, fileName = 'sounding.csv'): Resul
       issues.error('FIELD_COUNT', `${fileName}, line ${row.line}: ${row.cells.length} cells, but the header has ${headerCells.length}.`, { line: row.line });
       continue;
     }
-    let bad = false;
-    const read = (quantity: Quantity): number | null => {
-      const column = columns[quantity];
-      if (!column) return null;
-      const cell = row.cells[column.index] as string;
-      if (isMissing(cell)) return null;
-      const value = Number(cell);
-      if (!Number.isFinite(value)) {
-        issues.error('NOT_A_NUMBER', `${fileName}, line ${row.line}, column ${column.header}: "${cell}" is not a number (use an empty cell, NA or -9999 for a missing value).`, { line: row.line, column: column.header });
-        bad = true;
-        return null;
-      }
-      return column.convert(value);
-    };
-    const pressureHpa = read('pressure');
-    const heightM = read('height');
-    const temperatureC = read('temperature');
-    const dewpointC = read('dewpoint');
-    const relativeHumidityPercent = read('relativeHumidity');
+    const cells = row.cells;
+    const before = issues.issues.length;
+    const pressureHpa = readReported(cells, columns, 'pressure', row.line, fileName, issues);
+    const heightM = readReported(cells, columns, 'height', row.line, fileName, issues);
+    const temperatureC = readReported(cells, columns, 'temperature', row.line, fileName, issues);
+    const dewpointC = readReported(cells, columns, 'dewpoint', row.line, fileName, issues);
+    const relativeHumidityPercent = readReported(cells, columns, 'relativeHumidity', row.line, fileName, issues);
     let uMs: number | null = null;
     let vMs: number | null = null;
     if (hasDirectionSpeed) {
-      const direction = read('windDirection');
-      const speed = read('windSpeed');
+      const direction = readReported(cells, columns, 'windDirection', row.line, fileName, issues);
+      const speed = readReported(cells, columns, 'windSpeed', row.line, fileName, issues);
       if (direction !== null && speed !== null) {
         if (direction < 0 || direction > 360 || speed < 0) {
           const column = direction < 0 || direction > 360 ? columns.windDirection : columns.windSpeed;
           issues.error('WIND_OUT_OF_RANGE', `${fileName}, line ${row.line}, column ${column?.header}: wind direction must be 0–360° and speed not negative.`, { line: row.line, column: column?.header });
-          bad = true;
         } else {
           const components = windComponents(direction, speed);
           uMs = components.u;
@@ -206,15 +222,15 @@ export function parseSoundingCsv(text: string, fileName = 'sounding.csv'): Resul
         issues.warning('WIND_INCOMPLETE', `${fileName}, line ${row.line}, column ${column?.header}: wind ${direction === null ? 'direction' : 'speed'} is missing; the wind of this level is treated as missing.`, { line: row.line, column: column?.header });
       }
     } else if (columns.u && columns.v) {
-      uMs = read('u');
-      vMs = read('v');
+      uMs = readReported(cells, columns, 'u', row.line, fileName, issues);
+      vMs = readReported(cells, columns, 'v', row.line, fileName, issues);
       if ((uMs === null) !== (vMs === null)) {
         issues.warning('WIND_INCOMPLETE', `${fileName}, line ${row.line}: only one wind component is given; the wind of this level is treated as missing.`, { line: row.line });
         uMs = null;
         vMs = null;
       }
     }
-    if (bad) continue;
+    if (issues.issues.length > before && issues.hasErrors) continue;
     rawLevels.push({ pressureHpa, heightM, temperatureC, dewpointC, relativeHumidityPercent, uMs, vMs });
     rowLines.push(row.line);
   }

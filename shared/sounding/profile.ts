@@ -1,7 +1,8 @@
-import { EPSILON, ZERO_CELSIUS_K } from './constants';
-import { mixingRatio } from './mixing-ratio';
-import { saturationVaporPressure } from './saturation';
+import * as constants from './constants';
 import type { SoundingLevel } from './types';
+
+// Constants copied once at load (fast access in hot loops).
+const { EPSILON, ZERO_CELSIUS_K } = constants;
 
 /**
  * The environment prepared once per analysis: plain arrays in engine units, sorted by
@@ -106,7 +107,13 @@ export function buildProfile(levels: readonly SoundingLevel[]): Profile {
       dewpoint = temperature;
       dewpointK[i] = dewpoint;
     }
-    const w = Number.isNaN(dewpoint) ? 0 : mixingRatio(saturationVaporPressure(dewpoint), pressureHpa[i] as number);
+    // w = ε e/(p − e) with e = eₛ(T_d) of Bolton1980 eq. 10, written out (hot path).
+    let w = 0;
+    if (!Number.isNaN(dewpoint)) {
+      const dewpointC = dewpoint - ZERO_CELSIUS_K;
+      const vaporPressure = 6.112 * Math.exp((17.67 * dewpointC) / (dewpointC + 243.5));
+      w = (EPSILON * vaporPressure) / ((pressureHpa[i] as number) - vaporPressure);
+    }
     mixing[i] = w;
     virtualTemperatureK[i] = (temperature * (w + EPSILON)) / (EPSILON * (1 + w));
   }

@@ -1,4 +1,7 @@
-import { ZERO_CELSIUS_K } from './constants';
+import * as constants from './constants';
+
+// Constants copied once at load (fast access in hot loops).
+const { ZERO_CELSIUS_K } = constants;
 
 /**
  * Saturation vapour pressure over liquid water.

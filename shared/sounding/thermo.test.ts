@@ -95,25 +95,27 @@ describe('lclTemperature (Bolton1980 eq. 15)', () => {
 });
 
 describe('equivalentPotentialTemperature (Bolton1980 eq. 39)', () => {
-  it('agrees with its definition (pseudo-adiabatic ascent until the vapour is gone, then dry descent to 1000 hPa) within 0.05 K', () => {
-    // Reference: integrate the pseudo-adiabat from the LCL to 20 hPa (RK4, 0.5 hPa steps), then
-    // θ there is θₑ. Bolton1980 states eq. 39 reproduces his numerically computed θₑ to
-    // about 0.02 K (from memory); 0.05 K leaves room for the small difference in constants
-    // (c_l, L_v(T)) between his integration and ours and for the LCL formula (0.1 K in T_L).
-    fc.assert(
-      fc.property(fc.double({ min: -30, max: 35, noNaN: true }), fc.double({ min: 0, max: 20, noNaN: true }), fc.double({ min: 600, max: 1050, noNaN: true }), (tC, depression, p) => {
-        const t = tC + 273.15;
-        const td = t - depression;
-        // Same domain as moist-adiabat.test.ts: θₑ up to ≈ 368 K (θ_w ≤ 27 °C).
-        fc.pre(equivalentPotentialTemperature(p, t, td) <= 368);
-        const tl = lclTemperature(t, td);
-        const pl = lclPressure(p, t, td);
-        const top = moistAdiabatTemperature(pl, tl, 20, 0.5);
-        const reference = potentialTemperature(20, top);
-        expect(Math.abs(equivalentPotentialTemperature(p, t, td) - reference)).toBeLessThan(0.05);
-      }),
-      { numRuns: 25 },
-    );
+  it('agrees with its definition (ascent to the LCL, pseudo-adiabat until the vapour is gone, dry descent to 1000 hPa) within 0.2 K', () => {
+    // Reference: from the LCL, integrate the pseudo-adiabat to 20 hPa (RK4, 1 hPa steps); θ
+    // there is θₑ. For saturated air the two agree to 0.025 K (moist-adiabat.test.ts), the
+    // accuracy Bolton1980 states for eq. 39 (about 0.02 K, from memory). For unsaturated air
+    // Bolton's θ_DL (eq. 24) lets the vapour change κ below the LCL (κ(1 − 0.28 r)), while
+    // our parcels use the dry-air κ there (SCIENCE.md); that moves the LCL by up to about
+    // 1 hPa and θₑ by up to 0.15 K, hence 0.2 K. Domain: θₑ ≤ 368 K as in moist-adiabat.test.ts.
+    let worst = 0;
+    for (let tC = -30; tC <= 35; tC += 5) {
+      for (let depression = 0; depression <= 20; depression += 4) {
+        for (let p = 600; p <= 1050; p += 75) {
+          const t = tC + 273.15;
+          const td = t - depression;
+          const thetaE = equivalentPotentialTemperature(p, t, td);
+          if (thetaE > 368) continue;
+          const top = moistAdiabatTemperature(lclPressure(p, t, td), lclTemperature(t, td), 20, 1);
+          worst = Math.max(worst, Math.abs(thetaE - potentialTemperature(20, top)));
+        }
+      }
+    }
+    expect(worst).toBeLessThan(0.2);
   });
 
   it('is close to θ for very dry cold air (Bolton1980 eq. 39 with r → 0)', () => {

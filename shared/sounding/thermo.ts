@@ -1,6 +1,9 @@
-import { EPSILON, KAPPA, REFERENCE_PRESSURE_HPA } from './constants';
+import * as constants from './constants';
 import { lclTemperature } from './lcl';
 import { vaporPressureFromMixingRatio } from './mixing-ratio';
+
+// Constants copied once at load (fast access in hot loops).
+const { EPSILON, KAPPA, REFERENCE_PRESSURE_HPA } = constants;
 
 /**
  * Potential temperature: the temperature air would have if brought dry-adiabatically to 1000 hPa.

@@ -203,35 +203,34 @@ export function checkSounding(
   let firstDroppedAbove10: Location | undefined;
   for (let index = 0; index < rawLevels.length; index++) {
     const level = rawLevels[index] as RawLevel;
-    const at = (field: LevelField): Location => locator.level(index, field);
     const pressure = level.pressureHpa;
     if (pressure === null) {
-      issues.error('MISSING_VALUE', `a level has no pressure. Every level needs one.`, at('pressure'));
+      issues.error('MISSING_VALUE', `a level has no pressure. Every level needs one.`, locator.level(index, 'pressure'));
       continue;
     }
     if (pressure <= 0 || pressure > MAX_PRESSURE_HPA) {
-      issues.error('PRESSURE_OUT_OF_RANGE', `pressure ${pressure} hPa is outside ${MIN_PRESSURE_HPA}–${MAX_PRESSURE_HPA} hPa. Check the unit (hPa or Pa) in the header.`, at('pressure'));
+      issues.error('PRESSURE_OUT_OF_RANGE', `pressure ${pressure} hPa is outside ${MIN_PRESSURE_HPA}–${MAX_PRESSURE_HPA} hPa. Check the unit (hPa or Pa) in the header.`, locator.level(index, 'pressure'));
       continue;
     }
     if (pressure < MIN_PRESSURE_HPA) {
       droppedAbove10++;
-      firstDroppedAbove10 ??= at('pressure');
+      firstDroppedAbove10 ??= locator.level(index, 'pressure');
       continue;
     }
     const temperature = level.temperatureC;
     if (temperature === null) {
-      issues.warning('MISSING_TEMPERATURE', `the level at ${pressure} hPa has no temperature and is left out.`, at('temperature'));
+      issues.warning('MISSING_TEMPERATURE', `the level at ${pressure} hPa has no temperature and is left out.`, locator.level(index, 'temperature'));
       continue;
     }
     if (temperature < MIN_TEMPERATURE_C || temperature > MAX_TEMPERATURE_C) {
-      issues.error('TEMPERATURE_OUT_OF_RANGE', `temperature ${temperature} °C at ${pressure} hPa is outside ${MIN_TEMPERATURE_C} to ${MAX_TEMPERATURE_C} °C. Check the unit (C, K or F) in the header.`, at('temperature'));
+      issues.error('TEMPERATURE_OUT_OF_RANGE', `temperature ${temperature} °C at ${pressure} hPa is outside ${MIN_TEMPERATURE_C} to ${MAX_TEMPERATURE_C} °C. Check the unit (C, K or F) in the header.`, locator.level(index, 'temperature'));
       continue;
     }
     let dewpoint = level.dewpointC;
     if (dewpoint === null && level.relativeHumidityPercent !== null) {
       const rh = level.relativeHumidityPercent;
       if (!(rh > 0 && rh <= 100)) {
-        issues.error('RELATIVE_HUMIDITY_OUT_OF_RANGE', `relative humidity ${rh} % at ${pressure} hPa is outside 0–100 %.`, at('relativeHumidity'));
+        issues.error('RELATIVE_HUMIDITY_OUT_OF_RANGE', `relative humidity ${rh} % at ${pressure} hPa is outside 0–100 %.`, locator.level(index, 'relativeHumidity'));
         continue;
       }
       const vaporPressure = (rh / 100) * saturationVaporPressure(temperature + ZERO_CELSIUS_K);
@@ -240,15 +239,15 @@ export function checkSounding(
     }
     if (dewpoint !== null) {
       if (dewpoint < MIN_DEWPOINT_C || dewpoint > MAX_TEMPERATURE_C) {
-        issues.error('DEWPOINT_OUT_OF_RANGE', `dewpoint ${dewpoint} °C at ${pressure} hPa is outside ${MIN_DEWPOINT_C} to ${MAX_TEMPERATURE_C} °C.`, at('dewpoint'));
+        issues.error('DEWPOINT_OUT_OF_RANGE', `dewpoint ${dewpoint} °C at ${pressure} hPa is outside ${MIN_DEWPOINT_C} to ${MAX_TEMPERATURE_C} °C.`, locator.level(index, 'dewpoint'));
         continue;
       }
       if (dewpoint > temperature + DEWPOINT_EXCESS_TOLERANCE_K) {
-        issues.error('DEWPOINT_ABOVE_TEMPERATURE', `dewpoint ${dewpoint} °C is above the temperature ${temperature} °C at ${pressure} hPa by more than ${DEWPOINT_EXCESS_TOLERANCE_K} K. Check that the columns are not swapped.`, at('dewpoint'));
+        issues.error('DEWPOINT_ABOVE_TEMPERATURE', `dewpoint ${dewpoint} °C is above the temperature ${temperature} °C at ${pressure} hPa by more than ${DEWPOINT_EXCESS_TOLERANCE_K} K. Check that the columns are not swapped.`, locator.level(index, 'dewpoint'));
         continue;
       }
       if (dewpoint > temperature) {
-        issues.warning('DEWPOINT_ABOVE_TEMPERATURE', `dewpoint ${dewpoint} °C is slightly above the temperature ${temperature} °C at ${pressure} hPa; it is set equal to the temperature.`, at('dewpoint'));
+        issues.warning('DEWPOINT_ABOVE_TEMPERATURE', `dewpoint ${dewpoint} °C is slightly above the temperature ${temperature} °C at ${pressure} hPa; it is set equal to the temperature.`, locator.level(index, 'dewpoint'));
         dewpoint = temperature;
       }
     }
