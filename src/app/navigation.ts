@@ -1,6 +1,6 @@
 import type { Role } from '../../shared/contracts/common';
 
-export type NavigationIcon = 'desk' | 'review' | 'alerts' | 'users' | 'settings' | 'mail' | 'bulletin' | 'account';
+export type NavigationIcon = 'desk' | 'soundings' | 'review' | 'alerts' | 'users' | 'settings' | 'mail' | 'bulletin' | 'account';
 
 export interface NavigationItem {
   label: string;
@@ -9,6 +9,7 @@ export interface NavigationItem {
 }
 
 const desk: NavigationItem = { label: 'Forecast desk', to: '/desk', icon: 'desk' };
+const soundings: NavigationItem = { label: 'Soundings', to: '/soundings', icon: 'soundings' };
 const review: NavigationItem = { label: 'Review queue', to: '/review', icon: 'review' };
 const alerts: NavigationItem = { label: 'My alerts', to: '/alerts', icon: 'alerts' };
 const users: NavigationItem = { label: 'Users', to: '/admin/users', icon: 'users' };
@@ -21,12 +22,12 @@ const account: NavigationItem = { label: 'Account', to: '/account', icon: 'accou
 export function navigationFor(role: Role): NavigationItem[] {
   switch (role) {
     case 'forecaster':
-      return [desk, bulletin, account];
+      return [desk, soundings, bulletin, account];
     case 'lead':
-      return [review, desk, bulletin, account];
+      return [review, desk, soundings, bulletin, account];
     case 'subscriber':
       return [alerts, bulletin, account];
     case 'admin':
-      return [users, settings, mail, bulletin, account];
+      return [users, settings, mail, soundings, bulletin, account];
   }
 }

@@ -35,6 +35,7 @@ const staff = ['forecaster', 'lead'] as const satisfies readonly Role[];
 const leads = ['lead'] as const satisfies readonly Role[];
 const subscribers = ['subscriber'] as const satisfies readonly Role[];
 const admins = ['admin'] as const satisfies readonly Role[];
+const soundingReaders = ['forecaster', 'lead', 'admin'] as const satisfies readonly Role[];
 
 /** Every page, lazy-loaded so the public bulletin never downloads staff pages. */
 export function createRoutes(queryClient: QueryClient): RouteObject[] {
@@ -99,6 +100,40 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
                   path: 'desk',
                   loader: loaderForRoles(queryClient, staff),
                   lazy: async () => ({ Component: (await import('../features/outlooks/routes/desk')).DeskPage }),
+                },
+              ],
+            },
+            {
+              element: <RoleGate roles={staff} />,
+              children: [
+                {
+                  path: 'soundings/upload',
+                  loader: loaderForRoles(queryClient, staff),
+                  lazy: async () => ({ Component: (await import('../features/soundings/routes/upload')).SoundingUploadPage }),
+                },
+              ],
+            },
+            {
+              element: <RoleGate roles={soundingReaders} />,
+              children: [
+                {
+                  path: 'soundings',
+                  lazy: async () => {
+                    const page = await import('../features/soundings/routes/library');
+                    return { Component: page.SoundingLibraryPage, loader: (args: LoaderFunctionArgs) => loaderForRoles(queryClient, soundingReaders, () => page.soundingLibraryLoader(queryClient)(args))() };
+                  },
+                },
+                {
+                  path: 'soundings/map',
+                  loader: loaderForRoles(queryClient, soundingReaders),
+                  lazy: async () => ({ Component: (await import('../features/soundings/routes/map')).SoundingMapPage }),
+                },
+                {
+                  path: 'soundings/:soundingId',
+                  lazy: async () => {
+                    const page = await import('../features/soundings/routes/sounding');
+                    return { Component: page.SoundingPage, loader: (args: LoaderFunctionArgs) => loaderForRoles(queryClient, soundingReaders, () => page.soundingLoader(queryClient)(args))() };
+                  },
                 },
               ],
             },

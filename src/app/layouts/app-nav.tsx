@@ -1,5 +1,5 @@
 import { clsx } from 'clsx';
-import { Bell, CircleUserRound, ClipboardCheck, Inbox, LogOut, Newspaper, PencilRuler, Settings2, Users, type LucideIcon } from 'lucide-react';
+import { Bell, ChartSpline, CircleUserRound, ClipboardCheck, Inbox, LogOut, Newspaper, PencilRuler, Settings2, Users, type LucideIcon } from 'lucide-react';
 import { NavLink } from 'react-router';
 import type { Me } from '../../../shared/contracts/users';
 import { roleName } from '../../utils/roles';
@@ -7,6 +7,7 @@ import { navigationFor, type NavigationIcon } from '../navigation';
 
 const icons: Record<NavigationIcon, LucideIcon> = {
   desk: PencilRuler,
+  soundings: ChartSpline,
   review: ClipboardCheck,
   alerts: Bell,
   users: Users,

@@ -1,0 +1,22 @@
+import { describe, expect, it } from 'vitest';
+import { soundingLimits } from '../../../../shared/contracts/soundings';
+import { batchCount, planUpload } from './upload-checks';
+
+describe('checks before upload', () => {
+  it('when a file is empty or over 2 MB, refuses that file and sends the others', () => {
+    const plan = planUpload([
+      { name: 'a.csv', size: 1200 },
+      { name: 'empty.csv', size: 0 },
+      { name: 'huge.csv', size: soundingLimits.maxFileBytes + 1 },
+    ]);
+    expect(plan.send.map((f) => f.name)).toEqual(['a.csv']);
+    expect(plan.refused.map((f) => f.fileName)).toEqual(['empty.csv', 'huge.csv']);
+    expect(plan.refused[1]?.message).toContain('limit is 2.0 MB');
+  });
+
+  it('when there are more files than one batch allows, sends them in several batches', () => {
+    expect(batchCount(1)).toBe(1);
+    expect(batchCount(soundingLimits.maxFilesPerBatch)).toBe(1);
+    expect(batchCount(soundingLimits.maxFilesPerBatch + 1)).toBe(2);
+  });
+});
