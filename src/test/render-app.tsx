@@ -1,4 +1,4 @@
-import { render } from '@testing-library/react';
+import { configure, render } from '@testing-library/react';
 import { createMemoryRouter, RouterProvider } from 'react-router';
 import { vi } from 'vitest';
 import { AppProviders } from '../app/providers';
@@ -7,6 +7,9 @@ import { createQueryClient } from '../lib/query-client';
 import { defaultRiskLadder, type OfficeSettings } from '../../shared/contracts/office';
 import type { Me } from '../../shared/contracts/users';
 import type { Role } from '../../shared/contracts/common';
+
+// Route modules are lazy imports; the first one in a test run can take over a second to transform.
+configure({ asyncUtilTimeout: 5000 });
 
 /** Test doubles for the server. Only the answers a test needs; anything else is a 404. */
 export type FakeRoute = (request: { method: string; path: string; body: unknown }) => { status: number; body?: unknown } | undefined;

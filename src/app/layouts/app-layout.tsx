@@ -28,6 +28,8 @@ export function AppLayout() {
     );
   }
   if (me.data === null) {
+    // Signing out empties the cache first; that is not a page to come back to after signing in.
+    if (!signOut.isIdle) return <Navigate to="/sign-in" replace />;
     const next = `${location.pathname}${location.search}`;
     return <Navigate to={`/sign-in?next=${encodeURIComponent(next)}`} replace />;
   }

@@ -23,8 +23,8 @@ export function PublicLayout() {
             </span>
             Stormdraft
           </Link>
-          {office.data ? <span className="truncate text-sm text-ink-muted">· {office.data.name}</span> : null}
-          <nav aria-label="Site" className="ml-auto flex items-center gap-4 text-sm">
+          {office.data ? <span className="hidden truncate text-sm text-ink-muted sm:inline">· {office.data.name}</span> : null}
+          <nav aria-label="Site" className="ml-auto flex items-center gap-4 text-sm whitespace-nowrap">
             <Link to="/bulletin" className="text-ink-muted hover:text-ink">
               Bulletin
             </Link>

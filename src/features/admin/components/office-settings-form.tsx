@@ -237,7 +237,7 @@ export function OfficeSettingsForm({ office, onReset }: OfficeSettingsFormProps)
         />
       </Panel>
 
-      <div className="sticky bottom-0 flex items-center gap-3 border-t border-line bg-canvas/95 py-3">
+      <div className="sticky bottom-0 flex items-center gap-3 border-t border-line bg-canvas py-3">
         <Button type="submit" busy={updateOffice.isPending}>
           {updateOffice.isPending ? 'Saving…' : 'Save settings'}
         </Button>

@@ -69,7 +69,7 @@ export function UsersTable({ users, currentUserId }: UsersTableProps) {
                       value={user.role}
                       options={roleOptions}
                       disabled={busy || isSelf}
-                      className="w-36"
+                      className="w-44"
                       onChange={(event) => {
                         const role = roles.find((r) => r === event.target.value);
                         if (role && role !== user.role) change(user, { role });

@@ -44,39 +44,34 @@ export function MailPage() {
       ) : null}
       {messages.data && messages.data.messages.length > 0 ? (
         <div className="grid items-start gap-5 xl:grid-cols-[minmax(0,26rem)_minmax(0,1fr)]">
-          <div className="overflow-hidden rounded-lg border border-line bg-panel">
-            <table className="w-full text-left text-sm">
-              <caption className="sr-only">Caught messages</caption>
-              <thead className="border-b border-line bg-sunken text-[12px] font-semibold tracking-wide text-ink-muted uppercase">
-                <tr>
-                  <th scope="col" className="px-3 py-2">Subject</th>
-                  <th scope="col" className="px-3 py-2">Received</th>
-                </tr>
-              </thead>
-              <tbody className="divide-y divide-line">
-                {messages.data.messages.map((message) => {
-                  const isSelected = message.id === selected;
-                  return (
-                    <tr key={message.id} className={clsx(isSelected && 'bg-accent-soft')}>
-                      <td className="px-3 py-2">
-                        <Link
-                          to={`?message=${encodeURIComponent(message.id)}`}
-                          aria-current={isSelected ? 'true' : undefined}
-                          className="block font-medium text-ink hover:text-accent"
-                        >
-                          {message.subject || '(no subject)'}
-                        </Link>
-                        <span className="block truncate text-[12px] text-ink-muted">
-                          {message.from} → {message.to}
-                        </span>
-                      </td>
-                      <td className="px-3 py-2 align-top text-[12px] whitespace-nowrap text-ink-muted">{formatTimestampUtc(message.receivedAt)}</td>
-                    </tr>
-                  );
-                })}
-              </tbody>
-            </table>
-          </div>
+          <nav aria-label="Caught messages" className="overflow-hidden rounded-lg border border-line bg-panel">
+            <ul className="divide-y divide-line">
+              {messages.data.messages.map((message) => {
+                const isSelected = message.id === selected;
+                return (
+                  <li key={message.id}>
+                    <Link
+                      to={`?message=${encodeURIComponent(message.id)}`}
+                      aria-current={isSelected ? 'true' : undefined}
+                      className={clsx('block px-3 py-2.5 hover:bg-sunken', isSelected && 'bg-accent-soft hover:bg-accent-soft')}
+                    >
+                      <span className="flex items-baseline justify-between gap-3">
+                        <span className="truncate text-sm font-medium text-ink">{message.subject || '(no subject)'}</span>
+                        <span className="shrink-0 text-[12px] text-ink-muted">{formatTimestampUtc(message.receivedAt)}</span>
+                      </span>
+                      <span className="mt-0.5 block truncate text-[12px] text-ink-muted">
+                        <span className="sr-only">From </span>
+                        {message.from}
+                        <span aria-hidden> → </span>
+                        <span className="sr-only"> to </span>
+                        {message.to}
+                      </span>
+                    </Link>
+                  </li>
+                );
+              })}
+            </ul>
+          </nav>
           {selected ? (
             <MailReader messageId={selected} />
           ) : (

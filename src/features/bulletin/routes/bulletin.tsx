@@ -45,9 +45,9 @@ export function BulletinPage() {
           <h2 id="ladder-title" className="text-sm font-semibold">
             How to read the risk levels
           </h2>
-          <ol className="mt-3 space-y-1.5">
+          <ol className="mt-3 grid grid-cols-[auto_minmax(0,1fr)] items-center gap-x-3 gap-y-1.5">
             {office.data.riskLadder.map((level) => (
-              <li key={level.key} className="flex flex-wrap items-center gap-3 text-sm">
+              <li key={level.key} className="col-span-2 grid grid-cols-subgrid items-center text-sm">
                 <RiskSwatch label={level.label} colour={level.colour} />
                 <span className="text-ink-muted">{level.meaning}</span>
               </li>
