@@ -41,7 +41,7 @@ export function DeleteSoundingDialog({ sounding, busy, problem, onConfirm, onCan
           <p className="text-sm text-ink-muted">
             {sounding.modificationName !== null
               ? `This deletes the modified sounding “${sounding.modificationName}”. The original stays.`
-              : 'This deletes the sounding and every modified sounding made from it. Outlooks that cited it keep their own copy of the figures.'}{' '}
+              : 'This deletes the sounding and every modified sounding made from it.'}{' '}
             It cannot be undone.
           </p>
           {problem ? <Notice tone="error">{problem}</Notice> : null}

@@ -1,5 +1,6 @@
 import { TriangleAlert } from 'lucide-react';
 import type { SoundingIssueDto } from '../../../../shared/contracts/soundings';
+import { storedIssueMessage } from '../utils/upload-checks';
 
 /** Warnings found when the sounding was checked; it was stored, but the forecaster should know. */
 export function SoundingWarnings({ warnings }: { warnings: readonly SoundingIssueDto[] }) {
@@ -14,7 +15,7 @@ export function SoundingWarnings({ warnings }: { warnings: readonly SoundingIssu
         {warnings.map((warning, index) => (
           <li key={index}>
             {warning.line !== undefined ? <span className="font-medium text-ink">Line {warning.line}: </span> : null}
-            {warning.message}
+            {storedIssueMessage(warning.message)}
           </li>
         ))}
       </ul>

@@ -44,7 +44,7 @@ export function SoundingsTable({ soundings, sort, order, onSortChange, units, ti
         cell: ({ row }) => {
           const sounding = row.original;
           return (
-            <div className="min-w-36">
+            <div className="min-w-28">
               <Link to={`/soundings/${sounding.id}`} className="font-semibold text-accent hover:underline">
                 {sounding.stationId}
               </Link>
@@ -80,9 +80,17 @@ export function SoundingsTable({ soundings, sort, order, onSortChange, units, ti
       ...libraryFigureKeys.map((key) =>
         column.accessor((sounding) => sounding.figures[key], {
           id: key,
-          header: figureDefinitions[key].label,
+          header: () => {
+            const unit = figureDefinitions[key].unit(units);
+            return (
+              <span className="flex flex-col items-end leading-tight">
+                <span>{figureDefinitions[key].label}</span>
+                {unit ? <span className="font-normal normal-case text-ink-faint">{unit}</span> : null}
+              </span>
+            );
+          },
           meta: { numeric: true, title: figureDefinitions[key].name },
-          cell: ({ getValue }) => figureDefinitions[key].format(getValue(), units),
+          cell: ({ getValue }) => figureDefinitions[key].value(getValue(), units),
         }),
       ),
       column.display({
@@ -137,7 +145,7 @@ export function SoundingsTable({ soundings, sort, order, onSortChange, units, ti
                     scope="col"
                     title={meta?.title}
                     aria-sort={active ? (order === 'asc' ? 'ascending' : 'descending') : undefined}
-                    className={clsx('px-3 py-2 whitespace-nowrap', numeric && 'text-right')}
+                    className={clsx('px-2.5 py-2 whitespace-nowrap align-bottom', numeric && 'text-right')}
                   >
                     {sortable ? (
                       <button
@@ -169,7 +177,7 @@ export function SoundingsTable({ soundings, sort, order, onSortChange, units, ti
           {table.getRowModel().rows.map((row) => (
             <tr key={row.id} className={clsx('align-top hover:bg-sunken/50', row.original.modificationName !== null && 'bg-warning-soft/30')}>
               {row.getVisibleCells().map((cell) => (
-                <td key={cell.id} className={clsx('px-3 py-2', cell.column.columnDef.meta?.numeric === true && 'text-right whitespace-nowrap')}>
+                <td key={cell.id} className={clsx('px-2.5 py-2', cell.column.columnDef.meta?.numeric === true && 'text-right whitespace-nowrap')}>
                   {flexRender(cell.column.columnDef.cell, cell.getContext())}
                 </td>
               ))}

@@ -2,7 +2,7 @@ import { clsx } from 'clsx';
 import { CircleAlert, CircleCheck, TriangleAlert } from 'lucide-react';
 import { Link } from 'react-router';
 import type { UploadResult } from '../../../../shared/contracts/soundings';
-import type { RefusedFile } from '../utils/upload-checks';
+import { issueMessageWithoutPlace, type RefusedFile } from '../utils/upload-checks';
 
 interface UploadResultsProps {
   results: readonly UploadResult[];
@@ -79,7 +79,7 @@ export function UploadResults({ results, refused }: UploadResultsProps) {
                     </span>
                     <span className="text-ink-muted">
                       {place ? <span className="font-medium text-ink">{place}: </span> : null}
-                      {issue.message}
+                      {issueMessageWithoutPlace(issue.message, result.fileName)}
                     </span>
                   </li>
                 );

@@ -41,3 +41,21 @@ export function planUpload<F extends { name: string; size: number }>(files: read
 export function batchCount(fileCount: number): number {
   return Math.ceil(fileCount / soundingLimits.maxFilesPerBatch);
 }
+
+function escapeRegExp(text: string): string {
+  return text.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
+}
+
+/**
+ * The server's issue messages start with the file name and place ("a.csv, line 12, column
+ * temperature_C: …"); the result list already shows both, so that lead-in is dropped.
+ */
+export function issueMessageWithoutPlace(message: string, fileName: string): string {
+  const leadIn = new RegExp(`^${escapeRegExp(fileName)}(, line \\d+)?(, column [^:]+)?: `);
+  return message.replace(leadIn, '');
+}
+
+/** The same for stored warnings, where the original file name is no longer known. */
+export function storedIssueMessage(message: string): string {
+  return message.replace(/^[^:]*?\.csv(, line \d+)?(, column [^:]+)?: /i, '');
+}
