@@ -23,7 +23,7 @@ export function mixingRatio(vaporPressureHpa: number, pressureHpa: number): numb
  * @param pressureHpa - air pressure, hPa
  * @param temperatureK - air temperature, K
  * @returns saturation mixing ratio wₛ, kg kg⁻¹
- * @example saturationMixingRatio(1000, 293.15) // → 0.01489 kg/kg
+ * @example saturationMixingRatio(1000, 293.15) // → 0.01488 kg/kg
  * Notes: wₛ = ε eₛ(T) / (p − eₛ(T)) with eₛ from Bolton1980 eq. 10 (WallaceHobbs2006 eq. 3.63).
  */
 export function saturationMixingRatio(pressureHpa: number, temperatureK: number): number {
@@ -65,7 +65,7 @@ export function dewpointFromMixingRatio(mixingRatioKgKg: number, pressureHpa: nu
  * @param temperatureK - air temperature, K
  * @param relativeHumidityPercent - relative humidity e/eₛ, % (0 < RH ≤ 100)
  * @returns dewpoint, K
- * @example dewpointFromRelativeHumidity(293.15, 50) // → 282.3 K
+ * @example dewpointFromRelativeHumidity(293.15, 50) // → 282.4 K
  * Notes: e = RH/100 · eₛ(T) (WMO definition via vapour pressure; WMO2018 Annex 4.B),
  * then Bolton1980 eq. 11.
  */

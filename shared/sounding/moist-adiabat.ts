@@ -10,7 +10,7 @@ const { CP_DRY, CP_LIQUID, EPSILON, LV_0C, LV_SLOPE, RD, ZERO_CELSIUS_K } = cons
  * @param pressureHpa - pressure, hPa
  * @param temperatureK - temperature of the saturated air, K
  * @returns dT/dp, K hPa⁻¹ (positive: temperature falls as pressure falls)
- * @example pseudoAdiabaticLapseRate(1000, 293.15) // → 0.0436 K hPa⁻¹
+ * @example pseudoAdiabaticLapseRate(1000, 293.15) // → 0.0369 K hPa⁻¹
  * Notes: from the pseudo-adiabatic entropy equation (Emanuel1994 §4.7)
  * (c_pd + rₛ c_l) d ln T − R_d d ln p_d + d(L_v rₛ / T) = 0, with p_d = p − eₛ,
  * rₛ = ε eₛ/p_d, eₛ from Bolton1980 eq. 10 and L_v(T) = 2.501×10⁶ − 2370 (T − 273.15)
@@ -48,7 +48,7 @@ export function pseudoAdiabaticLapseRate(pressureHpa: number, temperatureK: numb
  * @param endPressureHpa - pressure to follow the curve to (above or below), hPa
  * @param maxStepHpa - largest RK4 step, hPa (default 1 hPa; SCIENCE.md asks ≤ 5 hPa)
  * @returns temperature at endPressureHpa, K
- * @example moistAdiabatTemperature(1000, 293.15, 500) // → ≈ 267.9 K
+ * @example moistAdiabatTemperature(1000, 293.15, 500) // → 264.4 K
  * Notes: integrates {@link pseudoAdiabaticLapseRate} with the classic RK4 scheme
  * (PressEtAl2007 eq. 17.1.3). Slow but exact to ≪ 0.01 K; the fast path is
  * {@link PseudoAdiabatTable}.
@@ -102,7 +102,7 @@ function rk4LogPressureStep(logPressure: number, temperatureK: number, step: num
  *
  * Each curve is labelled by its wet-bulb potential temperature θ_w (its temperature at
  * 1000 hPa), from −70 °C to +50 °C every 0.5 K, and tabulated every 0.01 in ln p from
- * 1100 hPa to 10 hPa by RK4 integration of {@link pseudoAdiabaticLapseRate}. Lookups
+ * 1100 hPa to 9.9 hPa by RK4 integration of {@link pseudoAdiabaticLapseRate}. Lookups
  * interpolate bilinearly in (θ_w, ln p). The test `moist-adiabat.test.ts` keeps table
  * temperatures within 0.02 K, and parcel.test.ts keeps CAPE within 1 % of the
  * reference integration. Outside the table the reference integration is used.
@@ -202,7 +202,7 @@ export class PseudoAdiabatTable {
 let sharedTable: PseudoAdiabatTable | undefined;
 
 /**
- * The engine's shared pseudo-adiabat table, built on first use (about 50 ms) and reused.
+ * The engine's shared pseudo-adiabat table, built on first use (0.1–0.4 s) and reused.
  * Building it is deterministic; it holds no state that changes afterwards.
  */
 export function pseudoAdiabatTable(): PseudoAdiabatTable {
@@ -221,7 +221,7 @@ export type MoistAscentMethod = 'table' | 'reference';
  * @param temperatureK - temperature of the saturated air, K
  * @param method - 'table' (fast, default) or 'reference' (RK4, 1 hPa steps)
  * @returns θ_w, K
- * @example wetBulbPotentialTemperature(500, 253.15) // → ≈ 291.6 K
+ * @example wetBulbPotentialTemperature(500, 253.15) // → 286.6 K
  * Notes: definition in WallaceHobbs2006 pg. 85; computed along the pseudo-adiabat
  * ({@link pseudoAdiabaticLapseRate}).
  */

@@ -23,7 +23,7 @@ export function saturationVaporPressure(temperatureK: number): number {
  *
  * @param temperatureK - air temperature, K
  * @returns deₛ/dT, hPa K⁻¹
- * @example saturationVaporPressureSlope(293.15) // → 1.447 hPa K⁻¹
+ * @example saturationVaporPressureSlope(293.15) // → 1.448 hPa K⁻¹
  * Notes: analytic derivative of Bolton1980 eq. 10:
  * deₛ/dT = eₛ · 17.67 · 243.5 / (T + 243.5)², T in °C.
  */

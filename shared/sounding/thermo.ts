@@ -11,7 +11,7 @@ const { EPSILON, KAPPA, REFERENCE_PRESSURE_HPA } = constants;
  * @param pressureHpa - air pressure, hPa
  * @param temperatureK - air temperature, K
  * @returns potential temperature θ, K
- * @example potentialTemperature(800, 273.15) // → 290.97 K
+ * @example potentialTemperature(800, 273.15) // → 291.11 K
  * Notes: θ = T (1000/p)^κ, κ = Rd/cp = 0.2854. Source: WallaceHobbs2006 eq. 3.54 (Poisson's equation).
  */
 export function potentialTemperature(pressureHpa: number, temperatureK: number): number {
@@ -24,7 +24,7 @@ export function potentialTemperature(pressureHpa: number, temperatureK: number):
  * @param pressureHpa - air pressure, hPa
  * @param potentialTemperatureK - potential temperature θ, K
  * @returns temperature T, K
- * @example dryAdiabatTemperature(800, 290.97) // → 273.15 K
+ * @example dryAdiabatTemperature(800, 291.11) // → 273.15 K
  * Notes: T = θ (p/1000)^κ. Source: WallaceHobbs2006 eq. 3.54.
  */
 export function dryAdiabatTemperature(pressureHpa: number, potentialTemperatureK: number): number {
@@ -37,7 +37,7 @@ export function dryAdiabatTemperature(pressureHpa: number, potentialTemperatureK
  * @param temperatureK - air temperature, K
  * @param mixingRatioKgKg - water vapour mixing ratio w, kg kg⁻¹ (no condensate)
  * @returns virtual temperature Tᵥ, K
- * @example virtualTemperature(300, 0.015) // → 302.72 K
+ * @example virtualTemperature(300, 0.015) // → 302.69 K
  * Notes: Tᵥ = T (w + ε) / (ε (1 + w)). Source: WallaceHobbs2006 eq. 3.59–3.60
  * (≈ T (1 + 0.61 w)).
  */
@@ -52,7 +52,7 @@ export function virtualTemperature(temperatureK: number, mixingRatioKgKg: number
  * @param temperatureK - air temperature, K
  * @param dewpointK - dewpoint, K (≤ temperature)
  * @returns θₑ, K: conserved in dry and pseudo-adiabatic ascent
- * @example equivalentPotentialTemperature(850, 293.15, 291.15) // → 341.6 K
+ * @example equivalentPotentialTemperature(850, 293.15, 291.15) // → 353.9 K
  * Notes: θ_DL = T (1000/(p − e))^κ (T/T_L)^(0.28 r) (Bolton1980 eq. 24) and
  * θₑ = θ_DL exp[(3036/T_L − 1.78) r (1 + 0.448 r)] (Bolton1980 eq. 39), with r the mixing
  * ratio in kg kg⁻¹, e the vapour pressure, κ = 0.2854 and T_L the LCL temperature
@@ -102,7 +102,7 @@ function vaporPressureFromDewpoint(dewpointK: number): number {
  * @param pressureHpa - pressure, hPa
  * @param temperatureK - temperature, K
  * @returns θₑ*, K
- * @example saturationEquivalentPotentialTemperature(500, 253.15) // → ≈ 321 K
+ * @example saturationEquivalentPotentialTemperature(500, 253.15) // → 313.7 K
  * Notes: {@link equivalentPotentialTemperature} with T_d = T (Bolton1980 eq. 39 with T_L = T).
  */
 export function saturationEquivalentPotentialTemperature(pressureHpa: number, temperatureK: number): number {

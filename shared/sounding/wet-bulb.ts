@@ -10,7 +10,7 @@ import { pseudoAdiabatTable, moistAdiabatTemperature, type MoistAscentMethod } f
  * @param dewpointK - dewpoint, K (≤ temperature)
  * @param method - 'table' (fast, default) or 'reference' (RK4 integration)
  * @returns (pseudo-)wet-bulb temperature, K, between the dewpoint and the temperature
- * @example wetBulbTemperature(1000, 303.15, 293.15) // → ≈ 296.1 K (22.9 °C)
+ * @example wetBulbTemperature(1000, 303.15, 293.15) // → 296.0 K (22.9 °C)
  * Notes: Normand's rule (WallaceHobbs2006 pg. 85–86), with the LCL of Bolton1980 eq. 15 and
  * the pseudo-adiabat of moist-adiabat.ts. This is the adiabatic (pseudo) wet-bulb
  * temperature; it differs from the isobaric wet-bulb by a few tenths of a kelvin at most
