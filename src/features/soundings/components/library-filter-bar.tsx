@@ -81,7 +81,7 @@ export function LibraryFilterBar({ filters, onChange, onClear }: LibraryFilterBa
       />
       <SelectField
         label="Modified soundings"
-        className="w-52"
+        className="w-60"
         value={filters.modified}
         options={modifiedOptions}
         onChange={(event) => {

@@ -8,6 +8,7 @@ import { Notice } from '../../../components/ui/notice';
 import { PageHeader } from '../../../components/ui/page-header';
 import { PointMap, type PointProperties } from '../../../lib/map/point-map';
 import { soundingListQuerySchema, type SoundingSummary } from '../../../../shared/contracts/soundings';
+import { useMe } from '../../../hooks/use-me';
 import { useOffice } from '../../../hooks/use-office';
 import { useUnits } from '../../../hooks/use-units';
 import { useSoundings } from '../api/get-soundings';
@@ -15,6 +16,7 @@ import { FigureLegend } from '../components/figure-legend';
 import { SoundingPopup } from '../components/sounding-popup';
 import { colourFor, colourScales } from '../utils/map-colours';
 import { figureDefinitions, isMapFigureKey, mapFigureKeys, type MapFigureKey } from '../utils/sounding-figures';
+import { canWriteSoundings } from '../utils/sounding-permissions';
 import { formatValidTimeShort } from '../utils/valid-time';
 
 const MAX_ROWS = 500;
@@ -32,6 +34,8 @@ function distinctValidTimes(soundings: readonly SoundingSummary[]): string[] {
 
 export function SoundingMapPage() {
   const office = useOffice();
+  const me = useMe();
+  const mayWrite = me.data !== undefined && me.data !== null && canWriteSoundings(me.data.user.role);
   const units = useUnits();
   const [parameter, setParameter] = useState<MapFigureKey>('mlCape');
   const [chosenTime, setChosenTime] = useState<string | null>(null);
@@ -108,8 +112,8 @@ export function SoundingMapPage() {
         </Notice>
       ) : null}
       {recent.data && validTimes.length === 0 ? (
-        <EmptyState title="No soundings to map yet" actions={<ButtonLink to="/soundings/upload">Upload soundings</ButtonLink>}>
-          Upload observed or model soundings; each appears here at its station for its valid time.
+        <EmptyState title="No soundings to map yet" actions={mayWrite ? <ButtonLink to="/soundings/upload">Upload soundings</ButtonLink> : null}>
+          {mayWrite ? 'Upload observed or model soundings; each appears here at its station for its valid time.' : 'Once forecasters upload soundings, each appears here at its station for its valid time.'}
         </EmptyState>
       ) : null}
       {region === undefined ? (
