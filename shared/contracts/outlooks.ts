@@ -1,0 +1,102 @@
+import { z } from 'zod';
+
+export const outlookDays = [1, 2, 3] as const;
+export const outlookStates = ['draft', 'in_review', 'returned', 'approved', 'published'] as const;
+export type OutlookState = (typeof outlookStates)[number];
+
+export const hazardKinds = ['tornado', 'hail', 'wind', 'flood'] as const;
+export type HazardKind = (typeof hazardKinds)[number];
+export const hazardLabels: Record<HazardKind, string> = { tornado: 'Tornado', hail: 'Large hail', wind: 'Damaging wind', flood: 'Flash flooding' };
+
+export const hazardFlagSchema = z.object({
+  hazard: z.enum(hazardKinds, { message: 'Hazard must be tornado, hail, wind or flood.' }),
+  significant: z.boolean().default(false),
+});
+
+const position = z.tuple([z.number().min(-180).max(180), z.number().min(-90).max(90)], { message: 'A position is [longitude, latitude] in degrees.' });
+const ring = z.array(position).min(4, { message: 'A polygon ring needs at least 4 positions (the first repeated last).' }).refine(
+  (r) => {
+    const first = r[0];
+    const last = r[r.length - 1];
+    return !!first && !!last && first[0] === last[0] && first[1] === last[1];
+  },
+  { message: 'A polygon ring must end where it starts.' },
+);
+
+/** RFC 7946 Polygon or MultiPolygon in WGS 84 longitude/latitude. */
+export const areaGeometrySchema = z.discriminatedUnion('type', [
+  z.object({ type: z.literal('Polygon'), coordinates: z.array(ring).min(1, { message: 'A polygon needs an outer ring.' }) }),
+  z.object({ type: z.literal('MultiPolygon'), coordinates: z.array(z.array(ring).min(1)).min(1, { message: 'A multipolygon needs at least one polygon.' }) }),
+]);
+export type AreaGeometry = z.infer<typeof areaGeometrySchema>;
+
+export const riskAreaInputSchema = z.object({
+  id: z.string().uuid().optional(),
+  levelKey: z.string().min(1, { message: 'Choose a risk level.' }),
+  hazards: z.array(hazardFlagSchema).max(4).default([]),
+  geometry: areaGeometrySchema,
+  label: z.string().trim().max(80, { message: 'Keep the area label under 80 characters.' }).default(''),
+});
+export type RiskAreaInput = z.infer<typeof riskAreaInputSchema>;
+
+export const riskAreaSchema = riskAreaInputSchema.extend({ id: z.string(), sortOrder: z.number() });
+export type RiskArea = z.infer<typeof riskAreaSchema>;
+
+const isoTime = (label: string) => z.string().datetime({ offset: true, message: `${label} must be an ISO 8601 time, e.g. 2027-04-18T12:00:00Z.` });
+
+export const createOutlookInputSchema = z.object({
+  day: z.number({ message: 'Day must be 1, 2 or 3.' }).int().min(1, { message: 'Day must be 1, 2 or 3.' }).max(3, { message: 'Day must be 1, 2 or 3.' }),
+  /** When the outlook is issued; the valid period is computed from it (default: now). */
+  issuanceTime: isoTime('Issuance time').optional(),
+  headline: z.string().trim().max(200, { message: 'Keep the headline under 200 characters.' }).default(''),
+});
+export type CreateOutlookInput = z.infer<typeof createOutlookInputSchema>;
+
+/** A full save of the draft (autosave sends the whole document with the version it was loaded at). */
+export const saveOutlookInputSchema = z
+  .object({
+    version: z.number().int().nonnegative(),
+    headline: z.string().trim().max(200, { message: 'Keep the headline under 200 characters.' }),
+    discussion: z.string().max(20_000, { message: 'Keep the discussion under 20,000 characters.' }),
+    hazardNotes: z.partialRecord(z.enum(hazardKinds), z.string().max(2000, { message: 'Keep each hazard note under 2,000 characters.' })).default({}),
+    validFrom: isoTime('Valid from'),
+    validUntil: isoTime('Valid until'),
+    areas: z.array(riskAreaInputSchema).max(60, { message: 'At most 60 risk areas per outlook.' }),
+  })
+  .refine((v) => new Date(v.validUntil) > new Date(v.validFrom), { message: 'The valid period must end after it starts.', path: ['validUntil'] });
+export type SaveOutlookInput = z.infer<typeof saveOutlookInputSchema>;
+
+export const outlookSummarySchema = z.object({
+  id: z.string(),
+  day: z.number(),
+  state: z.enum(outlookStates),
+  validFrom: z.string(),
+  validUntil: z.string(),
+  headline: z.string(),
+  version: z.number(),
+  areaCount: z.number(),
+  highestLevelKey: z.string().nullable(),
+  createdBy: z.string().nullable(),
+  lastEditedBy: z.string().nullable(),
+  lastEditedByName: z.string().nullable(),
+  updatedAt: z.string(),
+});
+export type OutlookSummary = z.infer<typeof outlookSummarySchema>;
+
+export const outlookSchema = outlookSummarySchema.extend({
+  discussion: z.string(),
+  hazardNotes: z.record(z.string(), z.string()),
+  areas: z.array(riskAreaSchema),
+  amendsIssuanceId: z.string().nullable(),
+});
+export type Outlook = z.infer<typeof outlookSchema>;
+
+export const outlookListQuerySchema = z.object({
+  state: z.enum(outlookStates).optional(),
+  day: z.coerce.number().int().min(1).max(3).optional(),
+  date: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, { message: 'Date must be YYYY-MM-DD.' }).optional(),
+});
+export type OutlookListQuery = z.infer<typeof outlookListQuerySchema>;
+
+export const revisionSummarySchema = z.object({ revisionNumber: z.number(), authorId: z.string().nullable(), authorName: z.string().nullable(), createdAt: z.string() });
+export type RevisionSummary = z.infer<typeof revisionSummarySchema>;

@@ -1,0 +1,127 @@
+import { bbox, booleanPointInPolygon, point } from '@turf/turf';
+import type { AreaGeometry } from '../contracts/outlooks';
+import type { SoundingKeyFigures } from '../contracts/soundings';
+
+/** A sounding as the evidence panel needs it: where, when, and its key figures (SI units). */
+export interface EvidenceSounding {
+  id: string;
+  stationId: string;
+  latitude: number;
+  longitude: number;
+  validTime: string;
+  source: 'observed' | 'model';
+  modified: boolean;
+  figures: SoundingKeyFigures;
+}
+
+export type EvidenceParameterKey = Exclude<keyof SoundingKeyFigures, 'muCape' | 'scp'> | 'muCape' | 'scp';
+
+/** The parameters summarised for each area, in display order, with their SI units. */
+export const evidenceParameters: { key: EvidenceParameterKey; label: string; unit: string }[] = [
+  { key: 'mlCape', label: 'MLCAPE', unit: 'J/kg' },
+  { key: 'muCape', label: 'MUCAPE', unit: 'J/kg' },
+  { key: 'mlCin', label: 'MLCIN', unit: 'J/kg' },
+  { key: 'mlLclHeightM', label: 'LCL height', unit: 'm' },
+  { key: 'surfaceDewpointC', label: 'Surface dewpoint', unit: '°C' },
+  { key: 'surfaceMixingRatioGkg', label: 'Surface mixing ratio', unit: 'g/kg' },
+  { key: 'precipitableWaterMm', label: 'Precipitable water', unit: 'mm' },
+  { key: 'bulkShear0to6kmMs', label: '0–6 km shear', unit: 'm/s' },
+  { key: 'srh0to1km', label: '0–1 km SRH', unit: 'm²/s²' },
+  { key: 'stp', label: 'STP', unit: '' },
+  { key: 'scp', label: 'SCP', unit: '' },
+];
+
+export interface HistogramBin {
+  from: number;
+  to: number;
+  count: number;
+}
+
+export interface ParameterStats {
+  count: number;
+  min: number;
+  median: number;
+  p90: number;
+  max: number;
+  histogram: HistogramBin[];
+}
+
+export interface AreaEvidence {
+  areaId: string;
+  count: number;
+  soundingIds: string[];
+  stats: Partial<Record<EvidenceParameterKey, ParameterStats>>;
+}
+
+/**
+ * Quantile of sorted values by linear interpolation between closest ranks (Hyndman and Fan
+ * 1996, definition 7; the default of R and numpy — common practice).
+ */
+export function quantile(sorted: readonly number[], q: number): number {
+  if (sorted.length === 0) throw new Error('quantile of no values');
+  const position = (sorted.length - 1) * q;
+  const lower = Math.floor(position);
+  const upper = Math.ceil(position);
+  const a = sorted[lower] ?? 0;
+  const b = sorted[upper] ?? a;
+  return a + (b - a) * (position - lower);
+}
+
+/** Equal-width histogram with `bins` bins spanning min..max (one bin when all values are equal). */
+export function histogram(sorted: readonly number[], bins = 8): HistogramBin[] {
+  const min = sorted[0];
+  const max = sorted[sorted.length - 1];
+  if (min === undefined || max === undefined) return [];
+  if (max === min) return [{ from: min, to: max, count: sorted.length }];
+  const width = (max - min) / bins;
+  const result = Array.from({ length: bins }, (_, i) => ({ from: min + i * width, to: min + (i + 1) * width, count: 0 }));
+  for (const value of sorted) {
+    const index = Math.min(bins - 1, Math.floor((value - min) / width));
+    const bin = result[index];
+    if (bin) bin.count++;
+  }
+  return result;
+}
+
+export function summarise(values: number[]): ParameterStats | undefined {
+  if (values.length === 0) return undefined;
+  const sorted = [...values].sort((a, b) => a - b);
+  return {
+    count: sorted.length,
+    min: sorted[0] ?? 0,
+    median: quantile(sorted, 0.5),
+    p90: quantile(sorted, 0.9),
+    max: sorted[sorted.length - 1] ?? 0,
+    histogram: histogram(sorted),
+  };
+}
+
+/** Soundings whose station lies inside the geometry (bounding-box prefilter, then Turf point-in-polygon). */
+export function soundingsInside<T extends Pick<EvidenceSounding, 'latitude' | 'longitude'>>(geometry: AreaGeometry, soundings: readonly T[]): T[] {
+  const [west, south, east, north] = bbox(geometry);
+  return soundings.filter(
+    (s) => s.longitude >= west && s.longitude <= east && s.latitude >= south && s.latitude <= north && booleanPointInPolygon(point([s.longitude, s.latitude]), geometry),
+  );
+}
+
+/** The evidence of one area: which soundings lie inside and the statistics of each parameter. */
+export function areaEvidence(areaId: string, geometry: AreaGeometry, soundings: readonly EvidenceSounding[]): AreaEvidence {
+  const inside = soundingsInside(geometry, soundings);
+  const stats: AreaEvidence['stats'] = {};
+  for (const { key } of evidenceParameters) {
+    const values = inside.map((s) => s.figures[key]).filter((v): v is number => v !== null && Number.isFinite(v));
+    const summary = summarise(values);
+    if (summary) stats[key] = summary;
+  }
+  return { areaId, count: inside.length, soundingIds: inside.map((s) => s.id), stats };
+}
+
+/** Soundings valid within [validFrom, validUntil] (inclusive), optionally of one source. */
+export function soundingsInPeriod<T extends Pick<EvidenceSounding, 'validTime' | 'source'>>(soundings: readonly T[], validFrom: string, validUntil: string, source?: 'observed' | 'model'): T[] {
+  const from = Date.parse(validFrom);
+  const until = Date.parse(validUntil);
+  return soundings.filter((s) => {
+    const t = Date.parse(s.validTime);
+    return t >= from && t <= until && (!source || s.source === source);
+  });
+}
