@@ -84,3 +84,18 @@ describe('pseudo-adiabats', () => {
     expect(readDrawnTemperature(curve?.points ?? [], 500)).toBeGreaterThan(dry500);
   });
 });
+
+describe('zoomedFrame', () => {
+  it('spans the lowest 300 hPa above the surface', async () => {
+    const { zoomedFrame } = await import('./diagram-frame');
+    const frame = zoomedFrame(
+      [
+        { pressureHpa: 965, heightM: 350, temperatureC: 27.8, dewpointC: 23.8, uMs: null, vMs: null },
+        { pressureHpa: 600, heightM: 4400, temperatureC: -5, dewpointC: -20, uMs: null, vMs: null },
+      ],
+      [],
+    );
+    expect(frame.pressureTopHpa).toBe(665);
+    expect(frame.pressureBottomHpa).toBe(977);
+  });
+});
