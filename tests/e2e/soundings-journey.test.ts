@@ -26,6 +26,14 @@ async function signInAsForecaster(page: Page) {
   await page.waitForURL((url) => url.pathname === '/desk');
 }
 
+/** A value from the workbench's index panel, as a number (true minus sign and units stripped). */
+async function indexNumber(page: Page, label: string): Promise<number> {
+  const row = page.getByRole('rowheader', { name: label, exact: true }).first().locator('xpath=..');
+  const text = (await row.getByRole('cell').first().textContent()) ?? '';
+  const match = /[\u2212-]?\d+(\.\d+)?/.exec(text.replace('\u2212', '-'));
+  return match ? Number(match[0]) : Number.NaN;
+}
+
 describe('browser journey: a forecaster brings in a sounding and tries a what-if', () => {
   let page: Page;
   let soundingPath = '';
@@ -62,27 +70,33 @@ describe('browser journey: a forecaster brings in a sounding and tries a what-if
     expect(soundingPath).not.toBe('');
   });
 
-  // The what-if steps need the diagram kit (SoundingWorkbench); see the report for what remains.
-  it.todo('When the surface dewpoint is raised by 2 K in the what-if editor, then CAPE rises and the delta is shown');
-  it.todo('When the modified sounding is saved, then its page opens with a confirmation');
+  it('When the surface dewpoint is raised by 2 K in the what-if editor, then CAPE rises and the delta is shown', async () => {
+    const before = await indexNumber(page, 'SBCAPE');
+    const dewpoint = page.getByLabel('Surface dewpoint (°C)');
+    const original = Number(await dewpoint.inputValue());
+    expect(Number.isFinite(original)).toBe(true);
+    await dewpoint.fill((original + 2).toFixed(1));
 
-  it('When a modified sounding exists, then the library lists it marked as modified', async () => {
-    // Until the editor lands, save the what-if through the same API the editor calls.
-    const soundingId = soundingPath.split('/').pop() ?? '';
-    const original = await page.request.get(`${journey.baseUrl}/api/soundings/${soundingId}`);
-    const body: unknown = await original.json();
-    const dewpoint = typeof body === 'object' && body !== null && 'figures' in body && typeof body.figures === 'object' && body.figures !== null && 'surfaceDewpointC' in body.figures ? body.figures.surfaceDewpointC : null;
-    expect(typeof dewpoint).toBe('number');
-    const saved = await page.request.post(`${journey.baseUrl}/api/soundings/${soundingId}/modified`, {
-      data: { name: 'Moister surface +2 K', surfaceDewpointC: Number(dewpoint) + 2 },
-      headers: { Origin: journey.baseUrl },
-    });
-    expect(saved.status()).toBe(201);
+    await expect.poll(() => indexNumber(page, 'SBCAPE')).toBeGreaterThan(before);
+    const delta = page.locator('li').filter({ hasText: 'Surface-based:' }).first();
+    await expect.poll(() => delta.textContent()).toMatch(/CAPE \+\d+\u202fJ\/kg/);
+  });
 
-    await page.goto(`${journey.baseUrl}/soundings?station=OAX`);
+  it('When the modified sounding is saved, then its own page opens with a confirmation', async () => {
+    await page.getByLabel('Name', { exact: true }).fill('Moister surface +2 K');
+    await page.getByRole('button', { name: 'Save as modified sounding' }).click();
+    await page.waitForURL((url) => url.pathname.startsWith('/soundings/') && url.pathname !== soundingPath);
+    await expect.poll(() => page.getByText('Saved “Moister surface +2 K” as a modified sounding').count()).toBe(1);
+    expect(await page.getByRole('link', { name: 'the original OAX sounding' }).getAttribute('href')).toBe(soundingPath);
+  });
+
+  it('When the forecaster looks in the library, then the modified sounding is listed and marked as modified', async () => {
+    await page.getByRole('link', { name: 'Sounding library' }).first().click();
+    await page.getByLabel('Station').fill('OAX');
+    await page.waitForURL((url) => url.searchParams.get('station') === 'OAX');
     const table = page.getByRole('table');
-    await table.waitFor();
     await expect.poll(() => table.getByText('Modified · Moister surface +2 K').count()).toBe(1);
+    // The original and its what-if: a heading row plus two soundings.
     expect(await table.getByRole('row').count()).toBe(3);
   });
 });

@@ -1,35 +1,44 @@
-import { ChartSpline } from 'lucide-react';
-import type { SoundingDetail } from '../api/get-sounding';
+import { useNavigate } from 'react-router';
+import { Notice } from '../../../components/ui/notice';
+import type { SaveModifiedSoundingInput } from '../../../../shared/contracts/soundings';
+import { useMe } from '../../../hooks/use-me';
 import { useUnits } from '../../../hooks/use-units';
-import { figureDefinitions, libraryFigureKeys } from '../utils/sounding-figures';
+import { formFailureFrom } from '../../../utils/form';
+import type { SoundingDetail } from '../api/get-sounding';
+import { useSaveModifiedSounding } from '../api/save-modified-sounding';
+import { SoundingWorkbench } from '../diagram';
+import { canWriteSoundings } from '../utils/sounding-permissions';
 
 /**
- * Where the diagram workbench goes. Until the diagram kit lands this shows the stored key
- * figures and says the diagram is on its way.
+ * Hosts the diagram workbench for one stored sounding. Forecasters and leads get the what-if
+ * editor with saving: the new modified sounding opens on its own page with a confirmation.
  */
 export function SoundingDiagramArea({ sounding }: { sounding: SoundingDetail }) {
-  const units = useUnits();
+  const { units } = useUnits();
+  const me = useMe();
+  const navigate = useNavigate();
+  const save = useSaveModifiedSounding();
+  const mayWrite = me.data ? canWriteSoundings(me.data.user.role) : false;
+
+  async function saveModified(input: SaveModifiedSoundingInput) {
+    const saved = await save.mutateAsync({ soundingId: sounding.id, input });
+    await navigate(`/soundings/${saved.id}`, { state: { savedModification: saved.modificationName ?? input.name } });
+  }
+
   return (
-    <section aria-labelledby="sounding-figures-title" className="space-y-4">
-      <div className="flex items-center gap-3 rounded-lg border border-dashed border-line-strong bg-panel px-4 py-8 text-sm text-ink-muted">
-        <ChartSpline aria-hidden className="size-5" />
-        The skew-T log-p diagram, hodograph and what-if editor will appear here. {sounding.levels.length} levels stored.
-      </div>
-      <div className="rounded-lg border border-line bg-panel p-4">
-        <h2 id="sounding-figures-title" className="mb-2 text-sm font-semibold text-ink">
-          Key figures
-        </h2>
-        <dl className="grid grid-cols-2 gap-x-6 gap-y-1 text-sm sm:grid-cols-4">
-          {libraryFigureKeys.map((key) => (
-            <div key={key} className="flex justify-between gap-2 border-b border-line py-1">
-              <dt className="text-ink-muted" title={figureDefinitions[key].name}>
-                {figureDefinitions[key].label}
-              </dt>
-              <dd className="font-medium">{figureDefinitions[key].format(sounding.figures[key], units)}</dd>
-            </div>
-          ))}
-        </dl>
-      </div>
-    </section>
+    <div className="space-y-3">
+      {save.isError ? (
+        <Notice tone="error" title="The modified sounding was not saved">
+          {formFailureFrom(save.error).message}
+        </Notice>
+      ) : null}
+      <SoundingWorkbench
+        levels={sounding.levels}
+        units={units}
+        readOnly={!mayWrite}
+        modifiedLabel={sounding.modificationName}
+        {...(mayWrite ? { onSaveModified: saveModified } : {})}
+      />
+    </div>
   );
 }

@@ -57,7 +57,8 @@ export function SoundingPage() {
         </Notice>
       ) : null}
       <SoundingWarnings warnings={data.warnings} />
-      <SoundingDiagramArea sounding={data} />
+      {/* Keyed by id: a saved what-if opens fresh, not with the original's edits still applied. */}
+      <SoundingDiagramArea key={data.id} sounding={data} />
     </>
   );
 }
