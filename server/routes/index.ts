@@ -2,9 +2,10 @@ import { healthRoutes } from './health.routes';
 import { mailMessagesRoutes } from './mail-messages.routes';
 import { meRoutes } from './me.routes';
 import { officeRoutes } from './office.routes';
+import { outlooksRoutes } from './outlooks.routes';
 import type { RouteDefinition } from './route-definition';
 import { soundingsRoutes } from './soundings.routes';
 import { usersRoutes } from './users.routes';
 
 /** Every API route of the app (better-auth's own routes under /api/auth are separate). */
-export const apiRoutes: RouteDefinition[] = [...healthRoutes, ...meRoutes, ...officeRoutes, ...usersRoutes, ...mailMessagesRoutes, ...soundingsRoutes];
+export const apiRoutes: RouteDefinition[] = [...healthRoutes, ...meRoutes, ...officeRoutes, ...usersRoutes, ...mailMessagesRoutes, ...soundingsRoutes, ...outlooksRoutes];

@@ -1,9 +1,12 @@
 import { eq } from 'drizzle-orm';
 import { defaultRiskLadder } from '../../shared/contracts/office';
+import { defaultGuidanceThresholds } from '../../shared/evidence/support-check';
 import type { Role } from '../../shared/contracts/common';
 import type { Auth } from '../auth/auth';
 import type { Database } from '../db/client';
-import { offices, users } from '../db/schema';
+import { offices, outlooks, users } from '../db/schema';
+import { demoOutlookAreas, demoOutlookDiscussion, demoOutlookHeadline } from '../seed/demo-outlook';
+import { createOutlook, saveOutlook } from './outlooks.service';
 import { generateDemoSoundings } from '../seed/demo-soundings';
 import { seedSoundings } from './soundings.service';
 import { createUser } from './users.service';
@@ -29,7 +32,7 @@ export const demoOffice = {
 export async function ensureOffice(db: Database): Promise<void> {
   await db
     .insert(offices)
-    .values({ ...demoOffice, riskLadder: defaultRiskLadder })
+    .values({ ...demoOffice, riskLadder: defaultRiskLadder, guidanceThresholds: defaultGuidanceThresholds })
     .onConflictDoNothing({ target: offices.slug });
 }
 
@@ -46,5 +49,22 @@ export async function seedDemo(db: Database, auth: Auth): Promise<void> {
     if (!created.ok) throw new Error(`demo account ${account.email}: ${created.error.message}`);
   }
   // The demo day is the day of the first start, so the demo looks current; later starts keep it.
-  await seedSoundings(db, generateDemoSoundings(new Date()));
+  const demoDay = new Date();
+  await seedSoundings(db, generateDemoSoundings(demoDay));
+  await seedDemoOutlook(db, demoDay);
+}
+
+/** One draft Day 1 outlook over the demo region, written by the demo forecaster (once). */
+async function seedDemoOutlook(db: Database, demoDay: Date): Promise<void> {
+  const [existing] = await db.select({ id: outlooks.id }).from(outlooks).limit(1);
+  if (existing) return;
+  const [author] = await db.select().from(users).where(eq(users.email, 'forecaster@demo.stormdraft.test'));
+  if (!author) return;
+  const actor = { userId: author.id, name: author.name, email: author.email, role: 'forecaster' as const };
+  const issued = new Date(Date.UTC(demoDay.getUTCFullYear(), demoDay.getUTCMonth(), demoDay.getUTCDate(), 12));
+  const created = await createOutlook(db, actor, { day: 1, issuanceTime: issued.toISOString(), headline: demoOutlookHeadline });
+  if (!created.ok) throw new Error(`demo outlook: ${created.error.message}`);
+  const o = created.value;
+  const saved = await saveOutlook(db, actor, o.id, { version: o.version, headline: o.headline, discussion: demoOutlookDiscussion, hazardNotes: {}, validFrom: o.validFrom, validUntil: o.validUntil, areas: demoOutlookAreas });
+  if (!saved.ok) throw new Error(`demo outlook: ${saved.error.message}`);
 }

@@ -98,5 +98,9 @@ export const outlookListQuerySchema = z.object({
 });
 export type OutlookListQuery = z.infer<typeof outlookListQuerySchema>;
 
-export const revisionSummarySchema = z.object({ revisionNumber: z.number(), authorId: z.string().nullable(), authorName: z.string().nullable(), createdAt: z.string() });
+export const revisionSummarySchema = z.object({ id: z.string(), revisionNumber: z.number(), authorId: z.string().nullable(), authorName: z.string().nullable(), createdAt: z.string() });
 export type RevisionSummary = z.infer<typeof revisionSummarySchema>;
+
+export const evidenceQuerySchema = z.object({ source: z.enum(['observed', 'model'], { message: 'Source must be observed or model.' }).optional() });
+
+export const areaImportInputSchema = z.object({ geojson: z.unknown().refine((v) => v !== undefined, { message: 'Send the GeoJSON document in "geojson".' }) });

@@ -19,11 +19,11 @@ describe('checkSupport', () => {
   it('When median MLCAPE is below the level guidance, then thin support names the numbers in words', () => {
     const check = checkSupport(evidence(6, { mlCape: 450, bulkShear0to6kmMs: 25, srh0to1km: 180 }), 'level3', defaultRiskLadder, defaultGuidanceThresholds);
     expect(check.result).toBe('thin');
-    expect(check.reasons).toContain('median MLCAPE 450 J/kg, below the 1,000 J/kg expected for Level 3 · Numerous');
+    expect(check.reasons).toContain('median MLCAPE 450 J/kg, below the 1,500 J/kg expected for Level 3 · Numerous');
   });
 
   it('When every median meets the level but not the next, then the level is supported', () => {
-    const check = checkSupport(evidence(6, { mlCape: 1200, bulkShear0to6kmMs: 22, srh0to1km: 120, stp: 0.5 }), 'level3', defaultRiskLadder, defaultGuidanceThresholds);
+    const check = checkSupport(evidence(6, { mlCape: 1700, bulkShear0to6kmMs: 22, srh0to1km: 120, stp: 0.5 }), 'level3', defaultRiskLadder, defaultGuidanceThresholds);
     expect(check.result).toBe('supported');
   });
 
@@ -34,7 +34,7 @@ describe('checkSupport', () => {
   });
 
   it('When fewer than three soundings are inside, then support is thin even with good values', () => {
-    const check = checkSupport(evidence(2, { mlCape: 1200, bulkShear0to6kmMs: 22, srh0to1km: 120 }), 'level3', defaultRiskLadder, defaultGuidanceThresholds);
+    const check = checkSupport(evidence(2, { mlCape: 1700, bulkShear0to6kmMs: 22, srh0to1km: 120 }), 'level3', defaultRiskLadder, defaultGuidanceThresholds);
     expect(check.result).toBe('thin');
     expect(check.reasons[0]).toMatch(/only 2 soundings/);
   });

@@ -21,11 +21,11 @@ export type GuidanceThresholds = Record<string, Partial<Record<ThresholdParamete
  */
 export const defaultGuidanceThresholds: GuidanceThresholds = {
   thunder: { muCape: 100 },
-  level1: { mlCape: 500, bulkShear0to6kmMs: 12 },
+  level1: { mlCape: 250, bulkShear0to6kmMs: 10 },
   level2: { mlCape: 1000, bulkShear0to6kmMs: 15 },
-  level3: { mlCape: 1000, bulkShear0to6kmMs: 20, srh0to1km: 100 },
-  level4: { mlCape: 1500, bulkShear0to6kmMs: 20, srh0to1km: 150, stp: 1 },
-  level5: { mlCape: 2000, bulkShear0to6kmMs: 25, srh0to1km: 200, stp: 3 },
+  level3: { mlCape: 1500, bulkShear0to6kmMs: 20, srh0to1km: 100 },
+  level4: { mlCape: 2000, bulkShear0to6kmMs: 25, srh0to1km: 200, stp: 2 },
+  level5: { mlCape: 3000, bulkShear0to6kmMs: 30, srh0to1km: 300, stp: 4 },
 };
 
 export type SupportResult = 'supported' | 'thin' | 'exceeds' | 'none';

@@ -46,6 +46,15 @@ const matrix: MatrixRow[] = [
   { method: 'get', route: '/api/soundings/:soundingId', url: `/api/soundings/${missingId}`, expect: readers(404) },
   { method: 'delete', route: '/api/soundings/:soundingId', url: `/api/soundings/${missingId}`, expect: authors(404) },
   { method: 'post', route: '/api/soundings/:soundingId/modified', url: `/api/soundings/${missingId}/modified`, body: {}, expect: authors(400) },
+  { method: 'get', route: '/api/outlooks', url: '/api/outlooks', expect: readers(200) },
+  { method: 'post', route: '/api/outlooks', url: '/api/outlooks', body: {}, expect: authors(400) },
+  { method: 'post', route: '/api/outlooks/area-imports', url: '/api/outlooks/area-imports', body: {}, expect: authors(400) },
+  { method: 'get', route: '/api/outlooks/:outlookId', url: `/api/outlooks/${missingId}`, expect: readers(404) },
+  { method: 'put', route: '/api/outlooks/:outlookId', url: `/api/outlooks/${missingId}`, body: {}, expect: authors(400) },
+  { method: 'get', route: '/api/outlooks/:outlookId/evidence', url: `/api/outlooks/${missingId}/evidence`, expect: readers(404) },
+  { method: 'get', route: '/api/outlooks/:outlookId/geojson', url: `/api/outlooks/${missingId}/geojson`, expect: readers(404) },
+  { method: 'get', route: '/api/outlooks/:outlookId/revisions', url: `/api/outlooks/${missingId}/revisions`, expect: readers(404) },
+  { method: 'get', route: '/api/outlook-revisions/:revisionId', url: `/api/outlook-revisions/${missingId}`, expect: readers(404) },
 ];
 
 let sd: Stormdraft;
