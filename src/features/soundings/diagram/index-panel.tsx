@@ -15,9 +15,9 @@ export interface IndexPanelProps {
 export function IndexPanel({ analysis, units, chosenParcel = null, className }: IndexPanelProps) {
   const groups = indexGroups(analysis, units, chosenParcel);
   return (
-    <div className={clsx('grid gap-4 sm:grid-cols-2 xl:grid-cols-3', className)}>
+    <div className={clsx('gap-6 sm:columns-2 xl:columns-3', className)}>
       {groups.map((group) => (
-        <table key={group.title} className="w-full border-collapse text-[13px] tabular-nums">
+        <table key={group.title} className="mb-4 w-full break-inside-avoid border-collapse text-[13px] tabular-nums">
           <caption className="border-b border-line pb-1 text-left text-[12px] font-semibold tracking-wide text-ink-muted uppercase">{group.title}</caption>
           <tbody>
             {group.rows.map((row) => (

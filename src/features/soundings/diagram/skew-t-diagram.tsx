@@ -1,5 +1,5 @@
 import { clsx } from 'clsx';
-import { useId, useMemo, useRef, useState, type KeyboardEvent, type PointerEvent } from 'react';
+import { memo, useId, useMemo, useRef, useState, type KeyboardEvent, type PointerEvent } from 'react';
 import type { Units } from '../../../../shared/contracts/users';
 import type { ParcelResult, SoundingAnalysis, SoundingLevel } from '../../../../shared/sounding';
 import { buoyancyAreas } from './buoyancy-areas';
@@ -47,7 +47,7 @@ export interface SkewTDiagramProps {
 
 type Handle = 'temperature' | 'dewpoint';
 
-const BARB_X = FULL_FRAME.left + FULL_FRAME.width + 46;
+const BARB_X = FULL_FRAME.left + FULL_FRAME.width + 44;
 const round1 = (value: number): number => Math.round(value * 10) / 10;
 
 /** Skew-T log-p diagram of a sounding in Stormdraft's own styling (PRODUCT.md). */
@@ -90,7 +90,7 @@ export function SkewTDiagram({
   }, [zoomed, levels, analysis, chosenParcel]);
   const transform = useMemo(() => skewT(frame), [frame]);
 
-  const background = useMemo(() => backgroundPaths(transform), [transform]);
+  const isotherms = useMemo(() => isothermLines(transform), [transform]);
   const areas = useMemo(() => (selectedResult ? buoyancyAreas(levels, selectedResult) : []), [levels, selectedResult]);
 
   const surface = levels[0];
@@ -177,6 +177,12 @@ export function SkewTDiagram({
   const bottom = frame.top + frame.height;
   const right = frame.left + frame.width;
   const markers = selectedResult ? parcelMarkers(selectedResult, transform, units) : [];
+  const traceEnds = visibleParcels.flatMap((key) => {
+    const trace = parcelOf(analysis, chosenParcel, key)?.trace;
+    const last = trace?.[trace.length - 1];
+    return last ? [transform.toPoint(last.pressureHpa, last.virtualTemperatureC).x] : [];
+  });
+  const labelBaseX = traceEnds.length ? Math.min(...traceEnds) : 0;
 
   return (
     <figure className={clsx('m-0', className)}>
@@ -249,28 +255,7 @@ export function SkewTDiagram({
         <rect x={frame.left} y={frame.top} width={frame.width} height={frame.height} fill={C.background} />
 
         <g clipPath={`url(#${clip})`} aria-hidden="true">
-          {isobarsFor(frame).map((p) => (
-            <line key={p} x1={frame.left} x2={right} y1={transform.pressureToY(p)} y2={transform.pressureToY(p)} stroke={C.isobar} strokeWidth={0.8} />
-          ))}
-          {background.isotherms.map((line) => (
-            <path key={line.value} d={line.d} stroke={line.value === 0 ? C.isothermZero : C.isotherm} strokeWidth={line.value === 0 ? 1.2 : 0.8} fill="none" />
-          ))}
-          {background.dry.map((line) => (
-            <path key={line.value} d={line.d} stroke={C.dryAdiabat} strokeWidth={0.8} strokeDasharray={DASHES.dryAdiabat} fill="none" opacity={0.75} />
-          ))}
-          {background.moist.map((line) => (
-            <path key={line.value} d={line.d} stroke={C.pseudoAdiabat} strokeWidth={1.1} strokeDasharray={DASHES.pseudoAdiabat} fill="none" />
-          ))}
-          {background.mixing.map((line) => (
-            <g key={line.value}>
-              <path d={line.d} stroke={C.mixingRatio} strokeWidth={0.9} strokeDasharray={DASHES.mixingRatio} fill="none" />
-              {line.label ? (
-                <text x={line.label.x} y={line.label.y - 3} fontSize={9} fill={C.mixingRatio} textAnchor="middle">
-                  {line.value}
-                </text>
-              ) : null}
-            </g>
-          ))}
+          <DiagramBackground transform={transform} />
 
           {areas.map((area, index) => (
             <path
@@ -303,7 +288,7 @@ export function SkewTDiagram({
                   fill="none"
                 />
                 {end ? (
-                  <text x={end.x + 3 + order * 17} y={Math.max(end.y, frame.top + 10)} fontSize={10} fontWeight={isSelected ? 700 : 400} fill={C.parcel}>
+                  <text x={labelBaseX + 4 + order * 22} y={Math.max(end.y, frame.top + 10)} fontSize={10} fontWeight={isSelected ? 700 : 400} fill={C.parcel}>
                     {PARCEL_LABELS[key].short}
                   </text>
                 ) : null}
@@ -311,14 +296,27 @@ export function SkewTDiagram({
             );
           })}
 
-          {markers.map((marker) => (
-            <g key={marker.name}>
-              <line x1={marker.x + 4} x2={marker.x + 22} y1={marker.y} y2={marker.y} stroke={C.parcel} strokeWidth={1.5} />
-              <text x={marker.x + 25} y={marker.y + 3.5} fontSize={10.5} fontWeight={600} fill={C.parcel} paintOrder="stroke" stroke="#ffffff" strokeWidth={3}>
-                {marker.label}
-              </text>
-            </g>
-          ))}
+          {markers.map((marker) => {
+            const dx = marker.side === 'right' ? 1 : -1;
+            return (
+              <g key={marker.name}>
+                <line x1={marker.x + 4 * dx} x2={marker.x + 22 * dx} y1={marker.y} y2={marker.y} stroke={C.parcel} strokeWidth={1.5} />
+                <text
+                  x={marker.x + 25 * dx}
+                  y={marker.y + 3.5}
+                  textAnchor={marker.side === 'right' ? 'start' : 'end'}
+                  fontSize={10.5}
+                  fontWeight={600}
+                  fill={C.parcel}
+                  paintOrder="stroke"
+                  stroke="#ffffff"
+                  strokeWidth={3}
+                >
+                  {marker.label}
+                </text>
+              </g>
+            );
+          })}
 
           {cursorLevel ? (
             <line
@@ -344,7 +342,7 @@ export function SkewTDiagram({
           <text x={frame.left - 5} y={bottom + 28} fontSize={9.5} textAnchor="end">
             hPa
           </text>
-          {background.isotherms
+          {isotherms
             .filter((line) => line.bottomX !== null)
             .map((line) => (
               <text key={line.value} x={line.bottomX ?? 0} y={bottom + 14} textAnchor="middle">
@@ -436,6 +434,40 @@ export function SkewTDiagram({
   );
 }
 
+
+/** The static lines of the diagram; memoised so a what-if change does not re-render them. */
+const DiagramBackground = memo(function DiagramBackground({ transform }: { transform: SkewT }) {
+  const background = useMemo(() => backgroundPaths(transform), [transform]);
+  const frame = transform.frame;
+  const right = frame.left + frame.width;
+  return (
+    <g>
+        {isobarsFor(frame).map((p) => (
+          <line key={p} x1={frame.left} x2={right} y1={transform.pressureToY(p)} y2={transform.pressureToY(p)} stroke={C.isobar} strokeWidth={0.8} />
+        ))}
+        {background.isotherms.map((line) => (
+          <path key={line.value} d={line.d} stroke={line.value === 0 ? C.isothermZero : C.isotherm} strokeWidth={line.value === 0 ? 1.2 : 0.8} fill="none" />
+        ))}
+        {background.dry.map((line) => (
+          <path key={line.value} d={line.d} stroke={C.dryAdiabat} strokeWidth={0.8} strokeDasharray={DASHES.dryAdiabat} fill="none" opacity={0.75} />
+        ))}
+        {background.moist.map((line) => (
+          <path key={line.value} d={line.d} stroke={C.pseudoAdiabat} strokeWidth={1.1} strokeDasharray={DASHES.pseudoAdiabat} fill="none" />
+        ))}
+        {background.mixing.map((line) => (
+          <g key={line.value}>
+            <path d={line.d} stroke={C.mixingRatio} strokeWidth={0.9} strokeDasharray={DASHES.mixingRatio} fill="none" />
+            {line.label ? (
+              <text x={line.label.x} y={line.label.y - 3} fontSize={9} fill={C.mixingRatio} textAnchor="middle">
+                {line.value}
+              </text>
+            ) : null}
+          </g>
+        ))}
+    </g>
+  );
+});
+
 function xy(point: { x: number; y: number }): { cx: number; cy: number } {
   return { cx: point.x, cy: point.y };
 }
@@ -472,7 +504,12 @@ interface Marker {
   label: string;
   x: number;
   y: number;
+  /** Which side of the trace the label goes, so it stays inside the plot. */
+  side: 'left' | 'right';
 }
+
+/** Rough width of a label at 10.5 px (about 0.6 em per character). */
+const labelWidth = (text: string): number => text.length * 6.3 + 28;
 
 function parcelMarkers(parcel: ParcelResult, transform: SkewT, units: Units): Marker[] {
   const items: [string, number | null, number | null][] = [
@@ -485,7 +522,9 @@ function parcelMarkers(parcel: ParcelResult, transform: SkewT, units: Units): Ma
     if (pressure === null || pressure < pressureTopHpa || pressure > pressureBottomHpa) return [];
     const temperature = parcelTemperatureAt(parcel.trace, pressure);
     const point = transform.toPoint(pressure, Number.isFinite(temperature) ? temperature : parcel.lclTemperature);
-    return [{ name, label: height === null ? name : `${name} ${heightText(height, units)}`, x: point.x, y: point.y }];
+    const label = height === null ? name : `${name} ${heightText(height, units)}`;
+    const fitsRight = point.x + labelWidth(label) <= transform.frame.left + transform.frame.width;
+    return [{ name, label, x: point.x, y: point.y, side: fitsRight ? ('right' as const) : ('left' as const) }];
   });
 }
 
@@ -509,10 +548,8 @@ interface BackgroundLine {
   d: string;
 }
 
-function backgroundPaths(transform: SkewT) {
+function isothermLines(transform: SkewT): (BackgroundLine & { bottomX: number | null })[] {
   const { pressureBottomHpa: bottom, pressureTopHpa: top, temperatureLeftC, left, width } = transform.frame;
-  const toPath = (points: { pressureHpa: number; temperatureC: number }[]) =>
-    pathThrough(points.map((point) => transform.toPoint(point.pressureHpa, point.temperatureC)));
   const isotherms: (BackgroundLine & { bottomX: number | null })[] = [];
   const topLeftC = transform.fromPoint({ x: left, y: transform.pressureToY(top) }).temperatureC;
   for (let t = Math.floor(topLeftC / 10) * 10; t <= temperatureLeftC + 200; t += 10) {
@@ -521,6 +558,14 @@ function backgroundPaths(transform: SkewT) {
     if (a.x > left + width) break;
     isotherms.push({ value: t, d: `M${a.x.toFixed(1)},${a.y.toFixed(1)}L${b.x.toFixed(1)},${b.y.toFixed(1)}`, bottomX: a.x >= left && a.x <= left + width ? a.x : null });
   }
+  return isotherms;
+}
+
+function backgroundPaths(transform: SkewT) {
+  const { pressureBottomHpa: bottom, pressureTopHpa: top } = transform.frame;
+  const toPath = (points: { pressureHpa: number; temperatureC: number }[]) =>
+    pathThrough(points.map((point) => transform.toPoint(point.pressureHpa, point.temperatureC)));
+  const isotherms = isothermLines(transform);
   const moistTop = Math.max(top, 200);
   const mixingTop = Math.max(top, 600);
   const mixing = mixingRatioLines(MIXING_RATIOS_G_PER_KG, bottom, mixingTop).map((curve) => {

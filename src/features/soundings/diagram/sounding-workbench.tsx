@@ -32,6 +32,7 @@ export function SoundingWorkbench({ levels, units, onSaveModified, readOnly = fa
   const id = useId();
   const whatIf = useWhatIf(levels);
   const [selectedParcel, setSelectedParcel] = useState<ParcelKey>('mixedLayer');
+  const [tableOpen, setTableOpen] = useState(false);
   const { modified } = whatIf;
   const surface = levels[0];
   const surfaceChanged = whatIf.change.surfaceTemperatureC !== undefined || whatIf.change.surfaceDewpointC !== undefined;
@@ -104,9 +105,10 @@ export function SoundingWorkbench({ levels, units, onSaveModified, readOnly = fa
         <IndexPanel analysis={modified.analysis} units={units} chosenParcel={modified.chosenParcel} />
       </section>
 
-      <details className={clsx(card, 'lg:col-span-2')}>
+      <details className={clsx(card, 'lg:col-span-2')} onToggle={(event) => setTableOpen(event.currentTarget.open)}>
         <summary className="cursor-pointer text-sm font-semibold text-ink">Data table ({levels.length} levels)</summary>
-        <LevelsTable levels={modified.levels} units={units} className="mt-2" />
+        {/* Rendered only when open: 100+ rows would otherwise be re-rendered on every what-if change. */}
+        {tableOpen ? <LevelsTable levels={modified.levels} units={units} className="mt-2" /> : null}
       </details>
     </div>
   );
