@@ -1,4 +1,5 @@
 import { analyzeSounding, parseSoundingCsv } from '../../shared/sounding';
+import { evidenceSixAreas } from './evidence';
 import { assertParses, fixtureTexts, syntheticSounding } from './soundings';
 
 /** One benchmark figure: how to measure it and the unit it is printed in. */
@@ -80,4 +81,4 @@ const twoThousandSoundings: BenchFigure = {
 };
 
 /** Every figure `npm run -s bench` prints, in order. Add new figures here. */
-export const BENCH_FIGURES: BenchFigure[] = [analysesPerSecond(100), analysesPerSecond(1000), twoThousandSoundings];
+export const BENCH_FIGURES: BenchFigure[] = [analysesPerSecond(100), analysesPerSecond(1000), twoThousandSoundings, evidenceSixAreas];
