@@ -21,6 +21,7 @@ const staffOnly = (allowed: number): Record<Caller, number> => ({ anonymous: 401
 const anyone = (status: number): Record<Caller, number> => ({ anonymous: status, subscriber: status, forecaster: status, lead: status, admin: status });
 const readers = (status: number): Record<Caller, number> => ({ anonymous: 401, subscriber: 403, forecaster: status, lead: status, admin: status });
 const authors = (status: number): Record<Caller, number> => ({ anonymous: 401, subscriber: 403, forecaster: status, lead: status, admin: 403 });
+const leadOnly = (status: number): Record<Caller, number> => ({ anonymous: 401, subscriber: 403, forecaster: 403, lead: status, admin: 403 });
 const signedIn = (status: number): Record<Caller, number> => ({ anonymous: 401, subscriber: status, forecaster: status, lead: status, admin: status });
 
 /**
@@ -55,6 +56,13 @@ const matrix: MatrixRow[] = [
   { method: 'get', route: '/api/outlooks/:outlookId/geojson', url: `/api/outlooks/${missingId}/geojson`, expect: readers(404) },
   { method: 'get', route: '/api/outlooks/:outlookId/revisions', url: `/api/outlooks/${missingId}/revisions`, expect: readers(404) },
   { method: 'get', route: '/api/outlook-revisions/:revisionId', url: `/api/outlook-revisions/${missingId}`, expect: readers(404) },
+  { method: 'post', route: '/api/outlooks/:outlookId/submit', url: `/api/outlooks/${missingId}/submit`, body: {}, expect: authors(400) },
+  { method: 'post', route: '/api/outlooks/:outlookId/return', url: `/api/outlooks/${missingId}/return`, body: {}, expect: leadOnly(400) },
+  { method: 'post', route: '/api/outlooks/:outlookId/approve', url: `/api/outlooks/${missingId}/approve`, body: {}, expect: leadOnly(400) },
+  { method: 'post', route: '/api/outlooks/:outlookId/publish', url: `/api/outlooks/${missingId}/publish`, body: {}, expect: leadOnly(400) },
+  { method: 'get', route: '/api/outlooks/:outlookId/comments', url: `/api/outlooks/${missingId}/comments`, expect: readers(404) },
+  { method: 'post', route: '/api/outlooks/:outlookId/comments', url: `/api/outlooks/${missingId}/comments`, body: {}, expect: authors(400) },
+  { method: 'get', route: '/api/outlooks/:outlookId/audit', url: `/api/outlooks/${missingId}/audit`, expect: readers(404) },
 ];
 
 let sd: Stormdraft;

@@ -1,0 +1,33 @@
+import { z } from 'zod';
+
+export const workflowActions = ['submit', 'return', 'approve', 'publish'] as const;
+export type WorkflowAction = (typeof workflowActions)[number];
+
+export const transitionInputSchema = z.object({
+  /** The version the person acted on; a stale one gets 409 so nobody approves what they did not see. */
+  version: z.number({ message: 'Send the version you reviewed.' }).int().nonnegative(),
+  comment: z.string().trim().max(4000, { message: 'Keep the comment under 4,000 characters.' }).optional(),
+});
+export type TransitionInput = z.infer<typeof transitionInputSchema>;
+
+export const commentInputSchema = z.object({
+  body: z.string().trim().min(1, { message: 'Write a comment first.' }).max(4000, { message: 'Keep the comment under 4,000 characters.' }),
+  riskAreaId: z.string().uuid({ message: 'Pin the comment to an area of this outlook, or leave it general.' }).optional(),
+});
+export type CommentInput = z.infer<typeof commentInputSchema>;
+
+export const withdrawInputSchema = z.object({
+  reason: z.string().trim().min(5, { message: 'Give the public a reason for the withdrawal (at least 5 characters).' }).max(1000),
+});
+
+export const issuanceStates = ['published', 'superseded', 'withdrawn'] as const;
+
+export const archiveQuerySchema = z.object({
+  q: z.string().trim().max(100).optional(),
+  date: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, { message: 'Date must be YYYY-MM-DD.' }).optional(),
+  page: z.coerce.number().int().min(1).default(1),
+  pageSize: z.coerce.number().int().min(1).max(100).default(20),
+});
+export type ArchiveQuery = z.infer<typeof archiveQuerySchema>;
+
+export const issuanceNumberSchema = z.string().regex(/^\d{4}-\d{4}$/, { message: 'An issuance number looks like 2027-0142.' });
