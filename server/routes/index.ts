@@ -1,4 +1,5 @@
 import { healthRoutes } from './health.routes';
+import { issuancesRoutes } from './issuances.routes';
 import { mailMessagesRoutes } from './mail-messages.routes';
 import { meRoutes } from './me.routes';
 import { officeRoutes } from './office.routes';
@@ -9,4 +10,4 @@ import { usersRoutes } from './users.routes';
 import { workflowRoutes } from './workflow.routes';
 
 /** Every API route of the app (better-auth's own routes under /api/auth are separate). */
-export const apiRoutes: RouteDefinition[] = [...healthRoutes, ...meRoutes, ...officeRoutes, ...usersRoutes, ...mailMessagesRoutes, ...soundingsRoutes, ...outlooksRoutes, ...workflowRoutes];
+export const apiRoutes: RouteDefinition[] = [...healthRoutes, ...meRoutes, ...officeRoutes, ...usersRoutes, ...mailMessagesRoutes, ...soundingsRoutes, ...outlooksRoutes, ...workflowRoutes, ...issuancesRoutes];

@@ -63,6 +63,12 @@ const matrix: MatrixRow[] = [
   { method: 'get', route: '/api/outlooks/:outlookId/comments', url: `/api/outlooks/${missingId}/comments`, expect: readers(404) },
   { method: 'post', route: '/api/outlooks/:outlookId/comments', url: `/api/outlooks/${missingId}/comments`, body: {}, expect: authors(400) },
   { method: 'get', route: '/api/outlooks/:outlookId/audit', url: `/api/outlooks/${missingId}/audit`, expect: readers(404) },
+  { method: 'get', route: '/api/public/bulletin', url: '/api/public/bulletin', expect: anyone(200) },
+  { method: 'get', route: '/api/public/issuances', url: '/api/public/issuances', expect: anyone(200) },
+  { method: 'get', route: '/api/public/issuances/:issuanceNumber', url: '/api/public/issuances/1999-0001', expect: anyone(404) },
+  { method: 'get', route: '/api/public/issuances/:issuanceNumber/geojson', url: '/api/public/issuances/1999-0001/geojson', expect: anyone(404) },
+  { method: 'post', route: '/api/issuances/:issuanceNumber/withdraw', url: '/api/issuances/1999-0001/withdraw', body: {}, expect: leadOnly(400) },
+  { method: 'post', route: '/api/issuances/:issuanceNumber/amend', url: '/api/issuances/1999-0001/amend', body: {}, expect: authors(404) },
 ];
 
 let sd: Stormdraft;

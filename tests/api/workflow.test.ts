@@ -170,3 +170,48 @@ describe('comments and audit trail', () => {
     expect(audit.body.events[0]).toMatchObject({ fromState: 'in_review', toState: 'returned', comment: 'See the pinned comment.' });
   });
 });
+
+describe('issuances: public pages, amendments, withdrawal', () => {
+  it('When an issuance is published, then the public bulletin and archive show it without sign-in, with the caution', async () => {
+    const published = await act(lead, await outlookIn('approved'), 'publish');
+    const number = published.body.issuanceNumber;
+    const anonymous = agentFor(sd.app);
+    const bulletin = await anonymous.get('/api/public/bulletin');
+    expect(bulletin.status).toBe(200);
+    expect(bulletin.body.issuances.map((i: { number: string }) => i.number)).toContain(number);
+    expect(bulletin.body.caution).toMatch(/planning guidance/);
+    const archive = await anonymous.get('/api/public/issuances').query({ q: number });
+    expect(archive.body.issuances[0].number).toBe(number);
+    const geojson = await anonymous.get(`/api/public/issuances/${number}/geojson`);
+    expect(geojson.status).toBe(200);
+    const doc = JSON.parse(geojson.text);
+    expect(doc.properties).toMatchObject({ issuance: number, caution: expect.stringMatching(/planning guidance/) });
+    expect(doc.features[0].properties.issuance).toBe(number);
+  });
+
+  it('When an amendment is published, then the old issuance is superseded and both link to each other', async () => {
+    const first = await act(lead, await outlookIn('approved'), 'publish');
+    const amend = await forecaster.post(`/api/issuances/${first.body.issuanceNumber}/amend`).send({});
+    expect(amend.status).toBe(201);
+    const id = amend.body.outlookId;
+    expect((await act(forecaster, id, 'submit')).status).toBe(200);
+    expect((await act(lead, id, 'approve')).status).toBe(200);
+    const second = await act(lead, id, 'publish');
+    expect(second.status).toBe(200);
+    const old = await agentFor(sd.app).get(`/api/public/issuances/${first.body.issuanceNumber}`);
+    expect(old.body).toMatchObject({ state: 'superseded', supersededByNumber: second.body.issuanceNumber });
+    const current = await agentFor(sd.app).get(`/api/public/issuances/${second.body.issuanceNumber}`);
+    expect(current.body.supersedesNumber).toBe(first.body.issuanceNumber);
+  });
+
+  it('When a lead withdraws an issuance, then it stays readable, says so, and cannot be withdrawn twice', async () => {
+    const published = await act(lead, await outlookIn('approved'), 'publish');
+    const number = published.body.issuanceNumber;
+    expect((await forecaster.post(`/api/issuances/${number}/withdraw`).send({ reason: 'Issued for the wrong day.' })).status).toBe(403);
+    const res = await lead.post(`/api/issuances/${number}/withdraw`).send({ reason: 'Issued for the wrong day.' });
+    expect(res.status).toBe(200);
+    const page = await agentFor(sd.app).get(`/api/public/issuances/${number}`);
+    expect(page.body).toMatchObject({ state: 'withdrawn', withdrawnReason: 'Issued for the wrong day.' });
+    expect((await lead.post(`/api/issuances/${number}/withdraw`).send({ reason: 'Again and again.' })).status).toBe(409);
+  });
+});

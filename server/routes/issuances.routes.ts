@@ -1,0 +1,71 @@
+import { z } from 'zod';
+import { archiveQuerySchema, issuanceNumberSchema, withdrawInputSchema } from '../../shared/contracts/workflow';
+import { access, actorOf } from '../auth/require-role';
+import { parseInput, sendResult } from '../middleware/error-handler';
+import { amendIssuance, currentBulletin, getIssuance, issuanceGeoJson, listArchive, withdrawIssuance } from '../services/issuances.service';
+import { route } from './route-definition';
+
+const numberParamsSchema = z.object({ issuanceNumber: issuanceNumberSchema });
+
+export const issuancesRoutes = [
+  route({
+    method: 'get',
+    path: '/api/public/bulletin',
+    access: access.public,
+    handler: async (ctx, _req, res) => sendResult(res, await currentBulletin(ctx.db)),
+  }),
+  route({
+    method: 'get',
+    path: '/api/public/issuances',
+    access: access.public,
+    handler: async (ctx, req, res) => {
+      const query = parseInput(archiveQuerySchema, req.query, 'search');
+      if (!query.ok) return sendResult(res, query);
+      sendResult(res, await listArchive(ctx.db, query.value));
+    },
+  }),
+  route({
+    method: 'get',
+    path: '/api/public/issuances/:issuanceNumber',
+    access: access.public,
+    handler: async (ctx, req, res) => {
+      const params = parseInput(numberParamsSchema, req.params, 'address');
+      if (!params.ok) return sendResult(res, params);
+      sendResult(res, await getIssuance(ctx.db, params.value.issuanceNumber));
+    },
+  }),
+  route({
+    method: 'get',
+    path: '/api/public/issuances/:issuanceNumber/geojson',
+    access: access.public,
+    handler: async (ctx, req, res) => {
+      const params = parseInput(numberParamsSchema, req.params, 'address');
+      if (!params.ok) return sendResult(res, params);
+      const result = await issuanceGeoJson(ctx.db, params.value.issuanceNumber);
+      if (result.ok) res.type('application/geo+json').attachment(`stormdraft-${params.value.issuanceNumber}.geojson`);
+      sendResult(res, result);
+    },
+  }),
+  route({
+    method: 'post',
+    path: '/api/issuances/:issuanceNumber/withdraw',
+    access: access.roles('lead'),
+    handler: async (ctx, req, res) => {
+      const params = parseInput(numberParamsSchema, req.params, 'address');
+      if (!params.ok) return sendResult(res, params);
+      const input = parseInput(withdrawInputSchema, req.body);
+      if (!input.ok) return sendResult(res, input);
+      sendResult(res, await withdrawIssuance(ctx.db, actorOf(res), params.value.issuanceNumber, input.value.reason));
+    },
+  }),
+  route({
+    method: 'post',
+    path: '/api/issuances/:issuanceNumber/amend',
+    access: access.roles('forecaster', 'lead'),
+    handler: async (ctx, req, res) => {
+      const params = parseInput(numberParamsSchema, req.params, 'address');
+      if (!params.ok) return sendResult(res, params);
+      sendResult(res, await amendIssuance(ctx.db, actorOf(res), params.value.issuanceNumber), 201);
+    },
+  }),
+];
