@@ -2,7 +2,8 @@ import { z } from 'zod';
 import { archiveQuerySchema, issuanceNumberSchema, withdrawInputSchema } from '../../shared/contracts/workflow';
 import { access, actorOf } from '../auth/require-role';
 import { parseInput, sendResult } from '../middleware/error-handler';
-import { amendIssuance, currentBulletin, getIssuance, issuanceGeoJson, listArchive, withdrawIssuance } from '../services/issuances.service';
+import { amendIssuance, atomFeed, currentBulletin, getIssuance, issuanceGeoJson, issuanceKml, issuanceMap, listArchive, withdrawIssuance } from '../services/issuances.service';
+import { sendError } from '../middleware/error-handler';
 import { route } from './route-definition';
 
 const numberParamsSchema = z.object({ issuanceNumber: issuanceNumberSchema });
@@ -44,6 +45,52 @@ export const issuancesRoutes = [
       const result = await issuanceGeoJson(ctx.db, params.value.issuanceNumber);
       if (result.ok) res.type('application/geo+json').attachment(`stormdraft-${params.value.issuanceNumber}.geojson`);
       sendResult(res, result);
+    },
+  }),
+  route({
+    method: 'get',
+    path: '/api/public/issuances/:issuanceNumber/kml',
+    access: access.public,
+    handler: async (ctx, req, res) => {
+      const params = parseInput(numberParamsSchema, req.params, 'address');
+      if (!params.ok) return sendResult(res, params);
+      const result = await issuanceKml(ctx.db, params.value.issuanceNumber);
+      if (!result.ok) return sendError(res, result.error);
+      res.type('application/vnd.google-earth.kml+xml').attachment(`stormdraft-${params.value.issuanceNumber}.kml`).send(result.value);
+    },
+  }),
+  route({
+    method: 'get',
+    path: '/api/public/issuances/:issuanceNumber/map.svg',
+    access: access.public,
+    handler: async (ctx, req, res) => {
+      const params = parseInput(numberParamsSchema, req.params, 'address');
+      if (!params.ok) return sendResult(res, params);
+      const result = await issuanceMap(ctx.db, params.value.issuanceNumber, 'svg');
+      if (!result.ok) return sendError(res, result.error);
+      res.type('image/svg+xml').send(result.value);
+    },
+  }),
+  route({
+    method: 'get',
+    path: '/api/public/issuances/:issuanceNumber/map.png',
+    access: access.public,
+    handler: async (ctx, req, res) => {
+      const params = parseInput(numberParamsSchema, req.params, 'address');
+      if (!params.ok) return sendResult(res, params);
+      const result = await issuanceMap(ctx.db, params.value.issuanceNumber, 'png');
+      if (!result.ok) return sendError(res, result.error);
+      res.type('image/png').send(result.value);
+    },
+  }),
+  route({
+    method: 'get',
+    path: '/api/public/feed.atom',
+    access: access.public,
+    handler: async (ctx, _req, res) => {
+      const result = await atomFeed(ctx.db, ctx.config.publicUrl);
+      if (!result.ok) return sendError(res, result.error);
+      res.type('application/atom+xml').send(result.value);
     },
   }),
   route({

@@ -1,4 +1,5 @@
 import { and, count, desc, eq, ilike, or, sql, type SQL } from 'drizzle-orm';
+import { withRfc7946Winding } from '../../shared/geometry/winding';
 import type { Feature, FeatureCollection } from 'geojson';
 import type { ArchiveQuery } from '../../shared/contracts/workflow';
 import { appError, type AppError } from '../../shared/errors';
@@ -8,6 +9,10 @@ import type { Database } from '../db/client';
 import { auditEvents, issuances, outlookRevisions, outlooks, riskAreas } from '../db/schema';
 import { findOffice } from './office.service';
 import type { RiskArea } from '../../shared/contracts/outlooks';
+import type { Region, RiskLevel } from '../../shared/contracts/office';
+import { buildAtomFeed } from '../exports/atom';
+import { buildKml } from '../exports/kml';
+import { renderMapPng, renderMapSvg } from '../exports/map-image';
 
 export const publicCaution =
   'This outlook is planning guidance, not a warning. Follow warnings from the national weather service and instructions from your local emergency officials.';
@@ -102,7 +107,8 @@ export async function issuanceGeoJson(db: Database, number: string): Promise<Res
       (area): Feature => ({
         type: 'Feature',
         id: area.id,
-        geometry: area.geometry,
+        // RFC 7946 §3.1.6: exterior rings counterclockwise, holes clockwise.
+        geometry: withRfc7946Winding(area.geometry),
         properties: {
           issuance: view.number,
           level: area.levelKey,
@@ -170,4 +176,56 @@ export async function amendIssuance(db: Database, actor: Actor, number: string):
     await tx.insert(auditEvents).values({ officeId: office.id, outlookId: row.id, issuanceId: issuance.id, actorId: actor.userId, action: 'amend', toState: 'draft', details: { amends: number } });
     return ok({ outlookId: row.id });
   });
+}
+
+interface SnapshotParts {
+  riskLadder: RiskLevel[];
+  areas: RiskArea[];
+  headline: string;
+  office: { name: string; timeZone: string; region: Region };
+}
+
+function snapshotParts(view: IssuanceView): SnapshotParts {
+  const s = view.snapshot as Partial<SnapshotParts>;
+  return { riskLadder: s.riskLadder ?? [], areas: s.areas ?? [], headline: s.headline ?? '', office: s.office ?? { name: 'Stormdraft', timeZone: 'UTC', region: { west: -125, south: 24, east: -66, north: 50 } } };
+}
+
+export async function issuanceKml(db: Database, number: string): Promise<Result<string, AppError>> {
+  const found = await getIssuance(db, number);
+  if (!found.ok) return found;
+  const v = found.value;
+  const s = snapshotParts(v);
+  return ok(buildKml({ number: v.number, state: v.state, day: v.day, validFrom: v.validFrom, validUntil: v.validUntil, headline: s.headline, officeName: s.office.name, ladder: s.riskLadder, areas: s.areas, caution: publicCaution }));
+}
+
+/** The issuance's map for people and e-mail: SVG or PNG, with its number, valid time and the caution. */
+export async function issuanceMap(db: Database, number: string, format: 'svg' | 'png'): Promise<Result<string | Buffer, AppError>> {
+  const found = await getIssuance(db, number);
+  if (!found.ok) return found;
+  const v = found.value;
+  const s = snapshotParts(v);
+  const stateNote = v.state === 'published' ? '' : ` · ${v.state.toUpperCase()}`;
+  const input = {
+    title: `${s.office.name} · Day ${v.day} outlook ${v.number}${stateNote}`,
+    subtitle: `Valid ${v.validFrom.slice(0, 16).replace('T', ' ')} to ${v.validUntil.slice(0, 16).replace('T', ' ')} UTC`,
+    region: s.office.region,
+    ladder: s.riskLadder,
+    areas: s.areas,
+    caution: publicCaution,
+  };
+  return ok(format === 'svg' ? renderMapSvg(input) : renderMapPng(input));
+}
+
+export async function atomFeed(db: Database, publicUrl: string): Promise<Result<string, AppError>> {
+  const office = await findOffice(db);
+  const rows = await db.select().from(issuances).orderBy(desc(issuances.publishedAt)).limit(50);
+  return ok(
+    buildAtomFeed({
+      officeName: office?.name ?? 'Stormdraft',
+      publicUrl,
+      caution: publicCaution,
+      updated: rows[0]?.publishedAt ?? new Date(0),
+      entries: rows.map((r) => ({ number: r.number, day: r.day, state: r.state, headline: String(r.snapshot.headline ?? ''), validFrom: r.validFrom.toISOString(), validUntil: r.validUntil.toISOString(), publishedAt: r.publishedAt.toISOString() })),
+    }),
+  );
 }

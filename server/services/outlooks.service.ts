@@ -1,4 +1,5 @@
 import { and, asc, desc, eq, gte, lt, sql } from 'drizzle-orm';
+import { withRfc7946Winding } from '../../shared/geometry/winding';
 import type { Feature, FeatureCollection } from 'geojson';
 import { areaGeometrySchema, hazardFlagSchema, type CreateOutlookInput, type Outlook, type OutlookListQuery, type OutlookSummary, type RevisionSummary, type RiskArea, type RiskAreaInput, type SaveOutlookInput } from '../../shared/contracts/outlooks';
 import { areaEvidence, soundingsInPeriod, type AreaEvidence, type EvidenceSounding } from '../../shared/evidence/evidence';
@@ -297,7 +298,8 @@ export async function exportAreasGeoJson(db: Database, outlookId: string): Promi
       (area): Feature => ({
         type: 'Feature',
         id: area.id,
-        geometry: area.geometry,
+        // RFC 7946 §3.1.6: exterior rings counterclockwise, holes clockwise.
+        geometry: withRfc7946Winding(area.geometry),
         properties: { level: area.levelKey, levelLabel: labels.get(area.levelKey) ?? area.levelKey, hazards: area.hazards, label: area.label, outlookDay: outlook.day, validFrom: outlook.validFrom, validUntil: outlook.validUntil },
       }),
     ),

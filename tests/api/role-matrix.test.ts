@@ -67,6 +67,10 @@ const matrix: MatrixRow[] = [
   { method: 'get', route: '/api/public/issuances', url: '/api/public/issuances', expect: anyone(200) },
   { method: 'get', route: '/api/public/issuances/:issuanceNumber', url: '/api/public/issuances/1999-0001', expect: anyone(404) },
   { method: 'get', route: '/api/public/issuances/:issuanceNumber/geojson', url: '/api/public/issuances/1999-0001/geojson', expect: anyone(404) },
+  { method: 'get', route: '/api/public/issuances/:issuanceNumber/kml', url: '/api/public/issuances/1999-0001/kml', expect: anyone(404) },
+  { method: 'get', route: '/api/public/issuances/:issuanceNumber/map.svg', url: '/api/public/issuances/1999-0001/map.svg', expect: anyone(404) },
+  { method: 'get', route: '/api/public/issuances/:issuanceNumber/map.png', url: '/api/public/issuances/1999-0001/map.png', expect: anyone(404) },
+  { method: 'get', route: '/api/public/feed.atom', url: '/api/public/feed.atom', expect: anyone(200) },
   { method: 'post', route: '/api/issuances/:issuanceNumber/withdraw', url: '/api/issuances/1999-0001/withdraw', body: {}, expect: leadOnly(400) },
   { method: 'post', route: '/api/issuances/:issuanceNumber/amend', url: '/api/issuances/1999-0001/amend', body: {}, expect: authors(404) },
 ];
