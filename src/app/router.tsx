@@ -36,6 +36,7 @@ const leads = ['lead'] as const satisfies readonly Role[];
 const subscribers = ['subscriber'] as const satisfies readonly Role[];
 const admins = ['admin'] as const satisfies readonly Role[];
 const soundingReaders = ['forecaster', 'lead', 'admin'] as const satisfies readonly Role[];
+const outlookReaders = ['forecaster', 'lead', 'admin'] as const satisfies readonly Role[];
 
 /** Every page, lazy-loaded so the public bulletin never downloads staff pages. */
 export function createRoutes(queryClient: QueryClient): RouteObject[] {
@@ -100,6 +101,23 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
                   path: 'desk',
                   loader: loaderForRoles(queryClient, staff),
                   lazy: async () => ({ Component: (await import('../features/outlooks/routes/desk')).DeskPage }),
+                },
+              ],
+            },
+            {
+              element: <RoleGate roles={outlookReaders} />,
+              children: [
+                {
+                  path: 'outlooks/:outlookId',
+                  lazy: async () => {
+                    const page = await import('../features/outlooks/routes/workspace');
+                    return { Component: page.OutlookWorkspacePage, loader: (args: LoaderFunctionArgs) => loaderForRoles(queryClient, outlookReaders, () => page.workspaceLoader(queryClient)(args))() };
+                  },
+                },
+                {
+                  path: 'outlooks/:outlookId/revisions/:revisionId',
+                  loader: loaderForRoles(queryClient, outlookReaders),
+                  lazy: async () => ({ Component: (await import('../features/outlooks/routes/revision')).OutlookRevisionPage }),
                 },
               ],
             },

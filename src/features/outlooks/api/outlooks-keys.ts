@@ -1,0 +1,20 @@
+import type { OutlookListQuery } from '../../../../shared/contracts/outlooks';
+
+/**
+ * Query keys of the outlooks feature, general to specific: resource, kind, params. A save
+ * invalidates `outlooksKeys.all`, so lists, evidence and revisions refresh together.
+ */
+export const outlooksKeys = {
+  all: ['outlooks'] as const,
+  lists: () => [...outlooksKeys.all, 'list'] as const,
+  list: (filters: OutlookListQuery) => [...outlooksKeys.lists(), filters] as const,
+  details: () => [...outlooksKeys.all, 'detail'] as const,
+  detail: (outlookId: string) => [...outlooksKeys.details(), outlookId] as const,
+  evidence: (outlookId: string, source: EvidenceSource) => [...outlooksKeys.all, 'evidence', outlookId, source] as const,
+  revisions: (outlookId: string) => [...outlooksKeys.all, 'revisions', outlookId] as const,
+  revision: (revisionId: string) => [...outlooksKeys.all, 'revision', revisionId] as const,
+  soundings: (validFrom: string, validUntil: string) => [...outlooksKeys.all, 'soundings', { validFrom, validUntil }] as const,
+};
+
+/** Which soundings count as evidence: all, or only observed or only model ones. */
+export type EvidenceSource = 'all' | 'observed' | 'model';
