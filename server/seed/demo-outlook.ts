@@ -29,3 +29,15 @@ A moist warm sector lies over the southern and eastern valleys, with surface dew
 - **Wind**: damaging gusts are possible as storms grow upscale this evening.
 
 The north-western area is kept at Level 2 for now; moisture there is marginal.`;
+
+export const demoEarlyDiscussion = `## Summary
+Morning storms are clearing the northern valleys. A capping inversion holds over the warm sector for now; isolated severe storms are possible where it weakens this afternoon.`;
+
+/** Day 2: storms move into the eastern valleys (invented). */
+export const demoDay2Areas: RiskAreaInput[] = [
+  { levelKey: 'thunder', hazards: [], geometry: box(-93.5, 35.7, -87.7, 40.5), label: 'General thunder' },
+  { levelKey: 'level1', hazards: [{ hazard: 'wind', significant: false }], geometry: box(-92.0, 36.0, -88.0, 39.5), label: 'Eastern valleys' },
+];
+
+export const demoDay2Discussion = `## Summary
+The cold front reaches the eastern valleys tomorrow afternoon. Damaging gusts are the main hazard in a line of storms along the front.`;

@@ -5,8 +5,12 @@ import type { Role } from '../../shared/contracts/common';
 import type { Auth } from '../auth/auth';
 import type { Database } from '../db/client';
 import { offices, outlooks, users } from '../db/schema';
-import { demoOutlookAreas, demoOutlookDiscussion, demoOutlookHeadline } from '../seed/demo-outlook';
-import { createOutlook, saveOutlook } from './outlooks.service';
+import { demoDay2Areas, demoDay2Discussion, demoEarlyDiscussion, demoOutlookAreas, demoOutlookDiscussion, demoOutlookHeadline } from '../seed/demo-outlook';
+import type { AppError } from '../../shared/errors';
+import type { Result } from '../../shared/result';
+import { amendIssuance } from './issuances.service';
+import { createOutlook, getOutlook, saveOutlook } from './outlooks.service';
+import { transitionOutlook } from './workflow.service';
 import { generateDemoSoundings } from '../seed/demo-soundings';
 import { seedSoundings } from './soundings.service';
 import { createUser } from './users.service';
@@ -51,20 +55,57 @@ export async function seedDemo(db: Database, auth: Auth): Promise<void> {
   // The demo day is the day of the first start, so the demo looks current; later starts keep it.
   const demoDay = new Date();
   await seedSoundings(db, generateDemoSoundings(demoDay));
-  await seedDemoOutlook(db, demoDay);
+  await seedDemoOutlooks(db, demoDay);
 }
 
-/** One draft Day 1 outlook over the demo region, written by the demo forecaster (once). */
-async function seedDemoOutlook(db: Database, demoDay: Date): Promise<void> {
+/** A demo account as the actor services expect. */
+async function demoActor(db: Database, role: 'forecaster' | 'lead') {
+  const [row] = await db.select().from(users).where(eq(users.email, `${role}@demo.stormdraft.test`));
+  if (!row) throw new Error(`demo ${role} account missing`);
+  return { userId: row.id, name: row.name, email: row.email, role };
+}
+
+function must<T>(result: Result<T, AppError>, what: string): T {
+  if (!result.ok) throw new Error(`demo ${what}: ${result.error.message}`);
+  return result.value;
+}
+
+/**
+ * The demo workflow, once: an early Day 1 outlook issued at 12 UTC and published
+ * (forecaster writes, lead approves and publishes), the current Day 1 draft that amends it
+ * (fuller areas, to author in the workspace), and a Day 2 draft waiting in review.
+ */
+async function seedDemoOutlooks(db: Database, demoDay: Date): Promise<void> {
   const [existing] = await db.select({ id: outlooks.id }).from(outlooks).limit(1);
   if (existing) return;
-  const [author] = await db.select().from(users).where(eq(users.email, 'forecaster@demo.stormdraft.test'));
-  if (!author) return;
-  const actor = { userId: author.id, name: author.name, email: author.email, role: 'forecaster' as const };
-  const issued = new Date(Date.UTC(demoDay.getUTCFullYear(), demoDay.getUTCMonth(), demoDay.getUTCDate(), 12));
-  const created = await createOutlook(db, actor, { day: 1, issuanceTime: issued.toISOString(), headline: demoOutlookHeadline });
-  if (!created.ok) throw new Error(`demo outlook: ${created.error.message}`);
-  const o = created.value;
-  const saved = await saveOutlook(db, actor, o.id, { version: o.version, headline: o.headline, discussion: demoOutlookDiscussion, hazardNotes: {}, validFrom: o.validFrom, validUntil: o.validUntil, areas: demoOutlookAreas });
-  if (!saved.ok) throw new Error(`demo outlook: ${saved.error.message}`);
+  const forecaster = await demoActor(db, 'forecaster');
+  const lead = await demoActor(db, 'lead');
+  const at = (hourUtc: number) => new Date(Date.UTC(demoDay.getUTCFullYear(), demoDay.getUTCMonth(), demoDay.getUTCDate(), hourUtc)).toISOString();
+  const [thunder, level1, level2] = demoOutlookAreas;
+
+  // 1. The early Day 1 issuance.
+  const early = must(await createOutlook(db, forecaster, { day: 1, issuanceTime: at(12), headline: 'Isolated severe storms possible this afternoon' }), 'early outlook');
+  const earlySaved = must(
+    await saveOutlook(db, forecaster, early.id, { version: early.version, headline: early.headline, discussion: demoEarlyDiscussion, hazardNotes: {}, validFrom: early.validFrom, validUntil: early.validUntil, areas: [thunder, level1, level2].filter((a) => a !== undefined) }),
+    'early outlook',
+  );
+  let version = must(await transitionOutlook(db, forecaster, early.id, 'submit', { version: earlySaved.version }), 'submit').version;
+  version = must(await transitionOutlook(db, lead, early.id, 'approve', { version }), 'approve').version;
+  const published = must(await transitionOutlook(db, lead, early.id, 'publish', { version }), 'publish');
+
+  // 2. The current Day 1 draft: an amendment of that issuance.
+  const amendment = must(await amendIssuance(db, forecaster, published.issuanceNumber ?? ''), 'amendment');
+  const draft = must(await getOutlook(db, amendment.outlookId), 'amendment');
+  must(
+    await saveOutlook(db, forecaster, draft.id, { version: draft.version, headline: demoOutlookHeadline, discussion: demoOutlookDiscussion, hazardNotes: {}, validFrom: at(15), validUntil: draft.validUntil, areas: demoOutlookAreas }),
+    'draft',
+  );
+
+  // 3. A Day 2 draft in review.
+  const day2 = must(await createOutlook(db, forecaster, { day: 2, issuanceTime: at(15), headline: 'Storms return to the eastern valleys' }), 'day 2 outlook');
+  const day2Saved = must(
+    await saveOutlook(db, forecaster, day2.id, { version: day2.version, headline: day2.headline, discussion: demoDay2Discussion, hazardNotes: {}, validFrom: day2.validFrom, validUntil: day2.validUntil, areas: demoDay2Areas }),
+    'day 2 outlook',
+  );
+  must(await transitionOutlook(db, forecaster, day2.id, 'submit', { version: day2Saved.version }), 'day 2 submit');
 }

@@ -215,3 +215,17 @@ describe('issuances: public pages, amendments, withdrawal', () => {
     expect((await lead.post(`/api/issuances/${number}/withdraw`).send({ reason: 'Again and again.' })).status).toBe(409);
   });
 });
+
+describe('demo seed', () => {
+  it('When the demo office starts, then it has a published Day 1 issuance, a Day 1 draft amending it and a Day 2 draft in review', async () => {
+    // Earlier tests in this file publish other Day 1 issuances, so find the demo one in the archive.
+    const archive = await agentFor(sd.app).get('/api/public/issuances').query({ q: 'Isolated severe storms' });
+    const day1 = archive.body.issuances.find((i: { day: number }) => i.day === 1);
+    expect(day1).toBeDefined();
+    const review = await lead.get('/api/outlooks').query({ state: 'in_review' });
+    expect(review.body.outlooks.some((o: { day: number; headline: string }) => o.day === 2 && o.headline.startsWith('Storms return'))).toBe(true);
+    const drafts = await forecaster.get('/api/outlooks').query({ state: 'draft' });
+    const amendment = drafts.body.outlooks.find((o: { headline: string }) => o.headline.startsWith('Scattered severe storms'));
+    expect((await forecaster.get(`/api/outlooks/${amendment.id}`)).body.amendsIssuanceId).toBe(day1.id);
+  });
+});
