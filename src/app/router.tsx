@@ -62,7 +62,27 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
             return null;
           },
           children: [
-            { path: 'bulletin', lazy: async () => ({ Component: (await import('../features/bulletin/routes/bulletin')).BulletinPage }) },
+            {
+              path: 'bulletin',
+              lazy: async () => {
+                const page = await import('../features/bulletin/routes/bulletin');
+                return { Component: page.BulletinPage, loader: page.bulletinLoader(queryClient) };
+              },
+            },
+            {
+              path: 'archive',
+              lazy: async () => {
+                const page = await import('../features/bulletin/routes/archive');
+                return { Component: page.ArchivePage, loader: page.archiveLoader(queryClient) };
+              },
+            },
+            {
+              path: 'issuances/:issuanceNumber',
+              lazy: async () => {
+                const page = await import('../features/bulletin/routes/issuance');
+                return { Component: page.IssuancePage, loader: page.issuanceLoader(queryClient) };
+              },
+            },
             {
               path: 'sign-in',
               loader: async () => {
@@ -160,8 +180,22 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               children: [
                 {
                   path: 'review',
-                  loader: loaderForRoles(queryClient, leads),
-                  lazy: async () => ({ Component: (await import('../features/review/routes/review-queue')).ReviewQueuePage }),
+                  lazy: async () => {
+                    const page = await import('../features/review/routes/review-queue');
+                    return { Component: page.ReviewQueuePage, loader: loaderForRoles(queryClient, leads, page.reviewQueueLoader(queryClient)) };
+                  },
+                },
+              ],
+            },
+            {
+              element: <RoleGate roles={staff} />,
+              children: [
+                {
+                  path: 'review/:outlookId',
+                  lazy: async () => {
+                    const page = await import('../features/review/routes/review');
+                    return { Component: page.ReviewPage, loader: (args: LoaderFunctionArgs) => loaderForRoles(queryClient, staff, () => page.reviewLoader(queryClient)(args))() };
+                  },
                 },
               ],
             },

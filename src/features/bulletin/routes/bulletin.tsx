@@ -1,16 +1,35 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { clsx } from 'clsx';
 import { CloudLightning } from 'lucide-react';
+import { useState } from 'react';
+import { Link } from 'react-router';
 import { ButtonLink } from '../../../components/ui/button';
 import { Caution } from '../../../components/ui/caution';
 import { EmptyState } from '../../../components/ui/empty-state';
+import { Loading } from '../../../components/ui/loading';
+import { Notice } from '../../../components/ui/notice';
 import { RiskSwatch } from '../../../components/ui/risk-swatch';
 import { useMe } from '../../../hooks/use-me';
 import { useOffice } from '../../../hooks/use-office';
+import { bulletinQuery, useBulletin } from '../api/get-bulletin';
+import { IssuanceDetails } from '../components/issuance-details';
+import { dayLabel } from '../utils/issuance-format';
 
-/** The public bulletin: the latest published outlook of the office, open to everyone. */
+/** Warms the bulletin while the page's code loads. */
+export const bulletinLoader = (queryClient: QueryClient) => () => {
+  void queryClient.prefetchQuery(bulletinQuery());
+  return null;
+};
+
+/** The public bulletin: the current issuance of each day, open to everyone. */
 export function BulletinPage() {
   const office = useOffice();
   const me = useMe();
+  const bulletin = useBulletin();
   const signedIn = Boolean(me.data);
+  const issuances = bulletin.data?.issuances ?? [];
+  const [chosenDay, setChosenDay] = useState<number | null>(null);
+  const shown = issuances.find((i) => i.day === chosenDay) ?? issuances[0];
 
   return (
     <div className="space-y-6">
@@ -19,26 +38,68 @@ export function BulletinPage() {
         <h1 className="mt-1 text-2xl font-semibold tracking-tight">Severe-thunderstorm outlook</h1>
         <p className="mt-1 max-w-prose text-sm text-ink-muted">
           Where thunderstorms and severe storms are expected over the next one to three days, graded by risk level, with the
-          forecasters’ discussion.
+          forecasters’ discussion.{' '}
+          <Link to="/archive" className="text-accent hover:underline">
+            Earlier issuances are in the archive.
+          </Link>
         </p>
       </header>
 
       <Caution />
 
-      <EmptyState
-        icon={<CloudLightning aria-hidden className="size-5" />}
-        title="No outlook has been published yet"
-        actions={
-          signedIn ? null : (
-            <ButtonLink to="/sign-in" variant="secondary">
-              Sign in
-            </ButtonLink>
-          )
-        }
-      >
-        When the office publishes its first outlook, the risk map, the headline and the discussion appear here. Emergency
-        managers can register to be e-mailed when their area reaches the level they care about.
-      </EmptyState>
+      {bulletin.isPending ? <Loading label="Loading the current outlook…" /> : null}
+      {bulletin.isError ? (
+        <Notice tone="error" title="The bulletin could not be loaded">
+          {bulletin.error.message}
+        </Notice>
+      ) : null}
+
+      {bulletin.isSuccess && shown === undefined ? (
+        <EmptyState
+          icon={<CloudLightning aria-hidden className="size-5" />}
+          title="No outlook has been published yet"
+          actions={
+            signedIn ? null : (
+              <ButtonLink to="/sign-in" variant="secondary">
+                Sign in
+              </ButtonLink>
+            )
+          }
+        >
+          When the office publishes its first outlook, the risk map, the headline and the discussion appear here. Emergency
+          managers can register to be e-mailed when their area reaches the level they care about.
+        </EmptyState>
+      ) : null}
+
+      {shown ? (
+        <section aria-label="Current outlooks" className="rounded-lg border border-line bg-panel">
+          <div role="tablist" aria-label="Outlook day" className="flex gap-1 border-b border-line px-3 pt-2">
+            {issuances.map((issuance) => {
+              const selected = issuance.number === shown.number;
+              return (
+                <button
+                  key={issuance.number}
+                  type="button"
+                  role="tab"
+                  id={`tab-day-${issuance.day}`}
+                  aria-selected={selected}
+                  aria-controls={`panel-day-${issuance.day}`}
+                  onClick={() => setChosenDay(issuance.day)}
+                  className={clsx(
+                    '-mb-px rounded-t-md border px-3.5 py-1.5 text-sm font-medium',
+                    selected ? 'border-line border-b-panel bg-panel text-ink' : 'border-transparent text-ink-muted hover:text-ink',
+                  )}
+                >
+                  {dayLabel(issuance.day)}
+                </button>
+              );
+            })}
+          </div>
+          <div role="tabpanel" id={`panel-day-${shown.day}`} aria-labelledby={`tab-day-${shown.day}`} className="p-4">
+            <IssuanceDetails issuance={shown} variant="bulletin" />
+          </div>
+        </section>
+      ) : null}
 
       {office.data ? (
         <section aria-labelledby="ladder-title" className="rounded-lg border border-line bg-panel p-4">

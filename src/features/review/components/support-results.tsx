@@ -1,0 +1,51 @@
+import { clsx } from 'clsx';
+import { supportResultLabels, type SupportResult } from '../../../../shared/evidence/support-check';
+import type { OfficeSettings } from '../../../../shared/contracts/office';
+import type { Outlook } from '../../../../shared/contracts/outlooks';
+import { RiskSwatch } from '../../../components/ui/risk-swatch';
+import type { AreaReport } from '../api/get-review-evidence';
+import { levelColour, levelLabel } from '../utils/review-map-areas';
+
+const resultStyle: Record<SupportResult, string> = {
+  supported: 'bg-ok-soft text-ok',
+  thin: 'bg-warning-soft text-warning',
+  exceeds: 'bg-accent-soft text-accent-strong',
+  none: 'bg-danger-soft text-danger',
+};
+
+/** The support check and geometry checks of every area, as the server computed them. */
+export function SupportResults({ reports, areas, ladder }: { reports: readonly AreaReport[]; areas: Outlook['areas']; ladder: OfficeSettings['riskLadder'] }) {
+  if (reports.length === 0) return <p className="text-sm text-ink-muted">This outlook has no risk areas to check.</p>;
+  return (
+    <ul className="space-y-3">
+      {reports.map((report) => {
+        const area = areas.find((a) => a.id === report.areaId);
+        return (
+          <li key={report.areaId} className="text-sm">
+            <div className="flex flex-wrap items-center gap-2">
+              <RiskSwatch label={levelLabel(ladder, report.levelKey)} colour={levelColour(ladder, report.levelKey)} />
+              {area?.label ? <span>{area.label}</span> : null}
+              <span className={clsx('rounded px-1.5 py-0.5 text-xs font-semibold', resultStyle[report.support.result])}>{supportResultLabels[report.support.result]}</span>
+              <span className="text-[13px] text-ink-muted">
+                {report.evidence.count} sounding{report.evidence.count === 1 ? '' : 's'} inside
+              </span>
+            </div>
+            {report.support.reasons.length ? (
+              <ul className="mt-1 list-disc pl-5 text-[13px] text-ink-muted">
+                {report.support.reasons.map((reason) => (
+                  <li key={reason}>{reason}</li>
+                ))}
+              </ul>
+            ) : null}
+            {report.checks.map((check) => (
+              <p key={check.code} className={clsx('mt-1 text-[13px]', check.severity === 'error' ? 'text-danger' : 'text-warning')}>
+                {check.severity === 'error' ? 'Error: ' : 'Check: '}
+                {check.message}
+              </p>
+            ))}
+          </li>
+        );
+      })}
+    </ul>
+  );
+}

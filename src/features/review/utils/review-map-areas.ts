@@ -1,0 +1,60 @@
+import type { OfficeSettings } from '../../../../shared/contracts/office';
+import { hazardLabels, type AreaGeometry, type HazardKind } from '../../../../shared/contracts/outlooks';
+
+/** One risk area as the read-only review map draws it. */
+export interface MapArea {
+  id: string;
+  geometry: AreaGeometry;
+  colour: string;
+  title: string;
+  detail: string;
+  significant: boolean;
+}
+
+export interface MapBounds {
+  west: number;
+  south: number;
+  east: number;
+  north: number;
+}
+
+type Ladder = OfficeSettings['riskLadder'];
+
+export function levelLabel(ladder: Ladder, levelKey: string): string {
+  return ladder.find((l) => l.key === levelKey)?.label ?? levelKey;
+}
+
+export function levelColour(ladder: Ladder, levelKey: string): string {
+  return ladder.find((l) => l.key === levelKey)?.colour ?? '#b6c0cd';
+}
+
+interface AreaLike {
+  id?: string | undefined;
+  levelKey: string;
+  geometry: AreaGeometry;
+  label?: string | undefined;
+  hazards: readonly { hazard: HazardKind; significant: boolean }[];
+}
+
+/** Areas for the map, lowest level first (higher levels draw on top), titled with level and label. */
+export function reviewMapAreas(areas: readonly AreaLike[], ladder: Ladder): MapArea[] {
+  const rank = (key: string) => {
+    const i = ladder.findIndex((l) => l.key === key);
+    return i === -1 ? ladder.length : i;
+  };
+  return [...areas]
+    .sort((a, b) => rank(a.levelKey) - rank(b.levelKey))
+    .map((area, index) => ({
+      id: area.id ?? `area-${index}`,
+      geometry: area.geometry,
+      colour: levelColour(ladder, area.levelKey),
+      title: area.label ? `${levelLabel(ladder, area.levelKey)} — ${area.label}` : levelLabel(ladder, area.levelKey),
+      detail: area.hazards.map((h) => `${hazardLabels[h.hazard]}${h.significant ? ' (significant)' : ''}`).join(', '),
+      significant: area.hazards.some((h) => h.significant),
+    }));
+}
+
+/** "Level 2 · Scattered — Lower valley" for lists and comment pins. */
+export function areaName(ladder: Ladder, area: { levelKey: string; label?: string | undefined }): string {
+  return area.label ? `${levelLabel(ladder, area.levelKey)} — ${area.label}` : levelLabel(ladder, area.levelKey);
+}
