@@ -15,6 +15,7 @@ export default defineConfig({
           include: ['shared/**/*.test.ts', 'server/**/*.test.ts', 'tests/api/**/*.test.ts', 'tests/e2e/**/*.test.ts'],
           testTimeout: 60_000,
           hookTimeout: 180_000,
+          globalSetup: ['tests/api/helpers/global-setup.ts'],
         },
       },
       {

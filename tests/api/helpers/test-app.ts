@@ -1,3 +1,6 @@
+import { existsSync, readFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
 import { pino } from 'pino';
 import request from 'supertest';
 import type TestAgent from 'supertest/lib/agent';
@@ -27,9 +30,18 @@ export function testConfig(overrides: Partial<Config> = {}): Config {
   };
 }
 
-/** Starts the real app (real PGlite, real better-auth, real SMTP catcher), seeded with the demo office. */
-export async function startTestApp(overrides: Partial<Config> = {}, clientMode: ClientMode = 'none'): Promise<Stormdraft> {
-  return startStormdraft(testConfig(overrides), { clientMode, logger: pino({ level: 'silent' }) });
+/** Where the global setup leaves a migrated, seeded database for test files to copy. */
+export const testTemplatePath = path.join(tmpdir(), 'stormdraft-test-template.tar');
+
+/**
+ * Starts the real app (real PGlite, real better-auth, real SMTP catcher), seeded with the demo
+ * office. An in-memory database starts from the template the global setup made, when there is one.
+ */
+export async function startTestApp(overrides: Partial<Config> = {}, clientMode: ClientMode = 'none', options: { useTemplate?: boolean } = {}): Promise<Stormdraft> {
+  const config = testConfig(overrides);
+  const useTemplate = (options.useTemplate ?? true) && config.dataDir === undefined && config.seedDemo && existsSync(testTemplatePath);
+  const loadDataDir = useTemplate ? new Blob([readFileSync(testTemplatePath)]) : undefined;
+  return startStormdraft(config, { clientMode, logger: pino({ level: 'silent' }), ...(loadDataDir ? { loadDataDir } : {}) });
 }
 
 export const demoEmail = (role: Role) => `${role}@demo.stormdraft.test`;
