@@ -34,6 +34,13 @@ describe('soundingsInside', () => {
     const inside = soundingsInside(square, [at('a', -93, 38, 1), at('b', -95, 38, 1), at('c', -93, 40, 1)]);
     expect(inside.map((s) => s.id)).toEqual(['a']);
   });
+  // Our convention (stated here and in evidence.ts): a station exactly on the outline counts as
+  // inside, so a sounding on a shared edge is evidence for both areas.
+  it('When a station lies exactly on an edge or a corner, then it counts as inside', () => {
+    const onEdge = soundingsInside(square, [at('edge', -94, 38, 1), at('corner', -92, 39, 1)]);
+    expect(onEdge.map((s) => s.id)).toEqual(['edge', 'corner']);
+  });
+
   it('When the polygon has a hole, then a station in the hole is outside', () => {
     const holed: AreaGeometry = { type: 'Polygon', coordinates: [square.coordinates[0] as [number, number][], [[-93.5, 37.5], [-92.5, 37.5], [-92.5, 38.5], [-93.5, 38.5], [-93.5, 37.5]]] };
     expect(soundingsInside(holed, [at('hole', -93, 38, 1), at('rim', -93.8, 38.8, 1)]).map((s) => s.id)).toEqual(['rim']);

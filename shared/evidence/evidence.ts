@@ -96,7 +96,10 @@ export function summarise(values: number[]): ParameterStats | undefined {
   };
 }
 
-/** Soundings whose station lies inside the geometry (bounding-box prefilter, then Turf point-in-polygon). */
+/**
+ * Soundings whose station lies inside the geometry (bounding-box prefilter, then Turf
+ * point-in-polygon). A station exactly on the outline counts as inside; one in a hole does not.
+ */
 export function soundingsInside<T extends Pick<EvidenceSounding, 'latitude' | 'longitude'>>(geometry: AreaGeometry, soundings: readonly T[]): T[] {
   const [west, south, east, north] = bbox(geometry);
   return soundings.filter(
