@@ -11,7 +11,11 @@ import { reviewQueueQuery, useReviewQueue } from '../api/get-review-queue';
 import { outlookStateWords } from '../utils/review-rules';
 import { supportSummary } from '../utils/support-summary';
 
-export const reviewQueueLoader = (queryClient: QueryClient) => () => queryClient.prefetchQuery(reviewQueueQuery());
+/** Warms the queue without holding up navigation (the page shows its own loading state). */
+export const reviewQueueLoader = (queryClient: QueryClient) => () => {
+  void queryClient.prefetchQuery(reviewQueueQuery());
+  return Promise.resolve();
+};
 
 /** The lead forecaster's home: drafts submitted for review, and approved ones waiting to go out. */
 export function ReviewQueuePage() {
