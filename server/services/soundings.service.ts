@@ -43,7 +43,7 @@ export function keyFigures(analysis: SoundingAnalysis | null): SoundingKeyFigure
     stp: analysis.composites.significantTornado,
     scp: analysis.composites.supercellComposite,
     surfaceDewpointC: analysis.environment.surfaceDewpointC,
-    surfaceMixingRatioGkg: analysis.environment.surfaceMixingRatio * 1000,
+    surfaceMixingRatioGkg: analysis.environment.surfaceMixingRatio, // already g/kg
   };
 }
 

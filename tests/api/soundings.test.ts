@@ -56,6 +56,9 @@ describe('POST /api/soundings/uploads', () => {
     expect(list.status).toBe(200);
     expect(list.body.total).toBe(1);
     expect(list.body.soundings[0].figures.muCape).toBeGreaterThan(0);
+    // Regression: the figure is in g/kg. OAX's surface (965 hPa, dewpoint 23.8 °C) holds about
+    // 19.6 g/kg: ε·e/(p − e) with e ≈ 29.5 hPa from Bolton (1980) eq. 10.
+    expect(list.body.soundings[0].figures.surfaceMixingRatioGkg).toBeCloseTo(19.6, 0);
   });
 
   it('When a batch mixes a good and a bad file, then the good one is stored, the bad one is rejected with a line number and leaves no row', async () => {
