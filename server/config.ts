@@ -29,6 +29,8 @@ export interface Config {
   viteDev: boolean;
   /** Seed the demo office and accounts (never in production). */
   seedDemo: boolean;
+  /** How often the mail outbox worker looks for messages to send; 0 turns the worker off. */
+  outboxIntervalMs: number;
 }
 
 /** Reads and checks the environment; throws with a readable message when something is wrong. */
@@ -54,5 +56,6 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, argv: string[] 
     authRateLimitPerMinute: e.AUTH_RATE_LIMIT_PER_MINUTE,
     viteDev: argv.includes('--dev'),
     seedDemo: e.NODE_ENV !== 'production',
+    outboxIntervalMs: 2000,
   };
 }

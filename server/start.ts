@@ -10,6 +10,7 @@ import { startMailCatcher, type MailCatcher } from './mail/mail-catcher';
 import { createMailer } from './mail/send-mail';
 import { sendPasswordResetMail, storeCaughtMail } from './services/mail.service';
 import { ensureOffice, seedDemo } from './services/seed.service';
+import { recoverOutbox, startOutboxWorker } from './services/outbox.service';
 
 export interface StartOptions {
   clientMode: ClientMode;
@@ -39,8 +40,10 @@ export async function startStormdraft(config: Config, options: StartOptions): Pr
   const mailer = createMailer(config.smtpUrl ?? catcher?.url ?? 'smtp://127.0.0.1:25', 'Stormdraft <outlooks@stormdraft.test>');
   const auth = createAuth(config, db, { sendResetPassword: (input) => sendPasswordResetMail(db, mailer, input) });
   const ctx: AppContext = { config, db, auth, mailer, logger, ping: database.ping };
-  if (config.seedDemo) await seedDemo(db, auth);
+  if (config.seedDemo) await seedDemo(db, auth, config);
   else await ensureOffice(db);
+  await recoverOutbox(db);
+  const stopWorker = config.outboxIntervalMs > 0 ? startOutboxWorker(db, mailer, config.outboxIntervalMs, (error) => logger.error({ err: error }, 'outbox worker')) : async () => {};
   const app = await createApp(ctx, options.clientMode);
   return {
     app,
@@ -48,6 +51,7 @@ export async function startStormdraft(config: Config, options: StartOptions): Pr
     catcher,
     dump: database.dump,
     async close() {
+      await stopWorker();
       mailer.close();
       await catcher?.close();
       await database.close();

@@ -6,6 +6,8 @@ export interface OutgoingMail {
   html: string;
   text: string;
   headers?: Record<string, string>;
+  /** Inline images referenced from the HTML as `cid:<cid>`. */
+  attachments?: { filename: string; content: Buffer; cid: string; contentType: string }[];
 }
 
 export interface Mailer {

@@ -102,7 +102,7 @@ export const issuancesRoutes = [
       if (!params.ok) return sendResult(res, params);
       const input = parseInput(withdrawInputSchema, req.body);
       if (!input.ok) return sendResult(res, input);
-      sendResult(res, await withdrawIssuance(ctx.db, actorOf(res), params.value.issuanceNumber, input.value.reason));
+      sendResult(res, await withdrawIssuance(ctx.db, ctx.config, actorOf(res), params.value.issuanceNumber, input.value.reason));
     },
   }),
   route({

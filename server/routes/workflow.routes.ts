@@ -21,7 +21,7 @@ const transitionRoutes = workflowActions.map((action) =>
       if (!params.ok) return sendResult(res, params);
       const input = parseInput(transitionInputSchema, req.body);
       if (!input.ok) return sendResult(res, input);
-      sendResult(res, await transitionOutlook(ctx.db, actorOf(res), params.value.outlookId, action, input.value));
+      sendResult(res, await transitionOutlook(ctx.db, ctx.config, actorOf(res), params.value.outlookId, action, input.value));
     },
   }),
 );

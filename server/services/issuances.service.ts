@@ -5,8 +5,10 @@ import type { ArchiveQuery } from '../../shared/contracts/workflow';
 import { appError, type AppError } from '../../shared/errors';
 import { err, ok, type Result } from '../../shared/result';
 import type { Actor } from '../auth/require-role';
-import type { Database } from '../db/client';
+import type { Database, DatabaseOrTransaction } from '../db/client';
 import { auditEvents, issuances, outlookRevisions, outlooks, riskAreas } from '../db/schema';
+import type { Config } from '../config';
+import { queueWithdrawalNotices } from './distribution.service';
 import { findOffice } from './office.service';
 import type { RiskArea } from '../../shared/contracts/outlooks';
 import type { Region, RiskLevel } from '../../shared/contracts/office';
@@ -35,13 +37,13 @@ export interface IssuanceView {
   caution: string;
 }
 
-async function numberOf(db: Database, id: string | null): Promise<string | null> {
+async function numberOf(db: DatabaseOrTransaction, id: string | null): Promise<string | null> {
   if (!id) return null;
   const [row] = await db.select({ number: issuances.number }).from(issuances).where(eq(issuances.id, id));
   return row?.number ?? null;
 }
 
-async function toView(db: Database, row: IssuanceRow): Promise<IssuanceView> {
+async function toView(db: DatabaseOrTransaction, row: IssuanceRow): Promise<IssuanceView> {
   return {
     id: row.id,
     number: row.number,
@@ -86,7 +88,7 @@ export async function listArchive(db: Database, query: ArchiveQuery): Promise<Re
   return ok({ issuances: views.map(({ snapshot: _snapshot, ...rest }) => ({ ...rest, headline: String(_snapshot.headline ?? '') })), total: total?.value ?? 0, caution: publicCaution });
 }
 
-export async function getIssuance(db: Database, number: string): Promise<Result<IssuanceView, AppError>> {
+export async function getIssuance(db: DatabaseOrTransaction, number: string): Promise<Result<IssuanceView, AppError>> {
   const [row] = await db.select().from(issuances).where(eq(issuances.number, number));
   if (!row) return err(appError('NOT_FOUND', `There is no issuance ${number}.`));
   return ok(await toView(db, row));
@@ -124,21 +126,26 @@ export async function issuanceGeoJson(db: Database, number: string): Promise<Res
 }
 
 /** Withdraws a published issuance with a reason shown to the public (lead). */
-export async function withdrawIssuance(db: Database, actor: Actor, number: string, reason: string): Promise<Result<IssuanceView, AppError>> {
+export async function withdrawIssuance(db: Database, config: Config, actor: Actor, number: string, reason: string): Promise<Result<IssuanceView, AppError>> {
   const office = await findOffice(db);
   if (!office) throw new Error('no office');
-  const [row] = await db
+  return db.transaction(async (tx) => {
+  const [row] = await tx
     .update(issuances)
     .set({ state: 'withdrawn', withdrawnReason: reason, withdrawnAt: new Date(), withdrawnBy: actor.userId })
     .where(and(eq(issuances.number, number), eq(issuances.state, 'published')))
     .returning();
   if (!row) {
-    const exists = await getIssuance(db, number);
+    // Inside the transaction, read through tx: PGlite has one connection.
+    const exists = await getIssuance(tx, number);
     if (!exists.ok) return exists;
     return err(appError('CONFLICT', `Issuance ${number} is ${exists.value.state}; only a current (published) issuance can be withdrawn.`));
   }
-  await db.insert(auditEvents).values({ officeId: office.id, issuanceId: row.id, outlookId: row.outlookId, actorId: actor.userId, action: 'withdraw', fromState: 'published', toState: 'withdrawn', comment: reason });
-  return ok(await toView(db, row));
+  await tx.insert(auditEvents).values({ officeId: office.id, issuanceId: row.id, outlookId: row.outlookId, actorId: actor.userId, action: 'withdraw', fromState: 'published', toState: 'withdrawn', comment: reason });
+  const s = row.snapshot as { headline?: string; discussion?: string; areas?: RiskArea[] };
+  await queueWithdrawalNotices(tx, config, office, { id: row.id, number: row.number, day: row.day, validFrom: row.validFrom.toISOString(), validUntil: row.validUntil.toISOString(), supersedesId: row.supersedesId, headline: s.headline ?? '', discussion: s.discussion ?? '', areas: s.areas ?? [] }, reason);
+  return ok(await toView(tx, row));
+  });
 }
 
 /** Starts an amendment: a new draft with the issuance's content; publishing it supersedes the issuance. */

@@ -3,8 +3,11 @@ import { defaultRiskLadder } from '../../shared/contracts/office';
 import { defaultGuidanceThresholds } from '../../shared/evidence/support-check';
 import type { Role } from '../../shared/contracts/common';
 import type { Auth } from '../auth/auth';
+import type { Config } from '../config';
 import type { Database } from '../db/client';
-import { offices, outlooks, users } from '../db/schema';
+import { offices, outlooks, subscriptions, users } from '../db/schema';
+import type { HazardKind } from '../../shared/contracts/outlooks';
+import { addAreaOfInterest, getMySubscription, saveMySubscription } from './subscriptions.service';
 import { demoDay2Areas, demoDay2Discussion, demoEarlyDiscussion, demoOutlookAreas, demoOutlookDiscussion, demoOutlookHeadline } from '../seed/demo-outlook';
 import type { AppError } from '../../shared/errors';
 import type { Result } from '../../shared/result';
@@ -22,6 +25,15 @@ export const demoAccounts: { email: string; name: string; role: Role }[] = [
   { email: 'lead@demo.stormdraft.test', name: 'Lena Lead', role: 'lead' },
   { email: 'forecaster@demo.stormdraft.test', name: 'Felix Forecaster', role: 'forecaster' },
   { email: 'subscriber@demo.stormdraft.test', name: 'Sam Subscriber', role: 'subscriber' },
+  { email: 'fairgrounds@demo.stormdraft.test', name: 'Fran Fairgrounds', role: 'subscriber' },
+  { email: 'utility@demo.stormdraft.test', name: 'Uma Utility', role: 'subscriber' },
+];
+
+/** Invented emergency-manager subscriptions over real counties (FIPS codes from us-atlas). */
+const demoSubscriptions: { email: string; threshold: string; hazards: HazardKind[]; counties: string[] }[] = [
+  { email: 'subscriber@demo.stormdraft.test', threshold: 'level2', hazards: [], counties: ['29019', '29051'] },
+  { email: 'fairgrounds@demo.stormdraft.test', threshold: 'level1', hazards: ['wind', 'hail'], counties: ['17167'] },
+  { email: 'utility@demo.stormdraft.test', threshold: 'level3', hazards: ['tornado', 'wind'], counties: ['29027', '29077'] },
 ];
 
 /** The invented demo office over the central United States' river valleys. */
@@ -44,7 +56,7 @@ export async function ensureOffice(db: Database): Promise<void> {
  * Seeds the demo office and accounts. Idempotent: what exists is left alone, so a restart never
  * duplicates or resets data. Never called in production (config.seedDemo).
  */
-export async function seedDemo(db: Database, auth: Auth): Promise<void> {
+export async function seedDemo(db: Database, auth: Auth, config: Config): Promise<void> {
   await ensureOffice(db);
   for (const account of demoAccounts) {
     const [existing] = await db.select({ id: users.id }).from(users).where(eq(users.email, account.email));
@@ -52,10 +64,25 @@ export async function seedDemo(db: Database, auth: Auth): Promise<void> {
     const created = await createUser(db, auth, { ...account, password: demoPassword });
     if (!created.ok) throw new Error(`demo account ${account.email}: ${created.error.message}`);
   }
+  await seedSubscriptions(db);
   // The demo day is the day of the first start, so the demo looks current; later starts keep it.
   const demoDay = new Date();
   await seedSoundings(db, generateDemoSoundings(demoDay));
-  await seedDemoOutlooks(db, demoDay);
+  await seedDemoOutlooks(db, config, demoDay);
+}
+
+/** The demo subscribers' thresholds and county areas of interest (once). */
+async function seedSubscriptions(db: Database): Promise<void> {
+  const [existing] = await db.select({ id: subscriptions.id }).from(subscriptions).limit(1);
+  if (existing) return;
+  for (const demo of demoSubscriptions) {
+    const [user] = await db.select().from(users).where(eq(users.email, demo.email));
+    if (!user) continue;
+    const actor = { userId: user.id, name: user.name, email: user.email, role: 'subscriber' as const };
+    const current = must(await getMySubscription(db, actor), 'subscription');
+    must(await saveMySubscription(db, actor, { version: current.version, alertThreshold: demo.threshold, hazards: demo.hazards, days: [1, 2, 3], emails: [demo.email], paused: false }), 'subscription');
+    for (const fipsCode of demo.counties) must(await addAreaOfInterest(db, actor, { kind: 'county', fipsCode }), 'area of interest');
+  }
 }
 
 /** A demo account as the actor services expect. */
@@ -75,7 +102,7 @@ function must<T>(result: Result<T, AppError>, what: string): T {
  * (forecaster writes, lead approves and publishes), the current Day 1 draft that amends it
  * (fuller areas, to author in the workspace), and a Day 2 draft waiting in review.
  */
-async function seedDemoOutlooks(db: Database, demoDay: Date): Promise<void> {
+async function seedDemoOutlooks(db: Database, config: Config, demoDay: Date): Promise<void> {
   const [existing] = await db.select({ id: outlooks.id }).from(outlooks).limit(1);
   if (existing) return;
   const forecaster = await demoActor(db, 'forecaster');
@@ -89,9 +116,9 @@ async function seedDemoOutlooks(db: Database, demoDay: Date): Promise<void> {
     await saveOutlook(db, forecaster, early.id, { version: early.version, headline: early.headline, discussion: demoEarlyDiscussion, hazardNotes: {}, validFrom: early.validFrom, validUntil: early.validUntil, areas: [thunder, level1, level2].filter((a) => a !== undefined) }),
     'early outlook',
   );
-  let version = must(await transitionOutlook(db, forecaster, early.id, 'submit', { version: earlySaved.version }), 'submit').version;
-  version = must(await transitionOutlook(db, lead, early.id, 'approve', { version }), 'approve').version;
-  const published = must(await transitionOutlook(db, lead, early.id, 'publish', { version }), 'publish');
+  let version = must(await transitionOutlook(db, config, forecaster, early.id, 'submit', { version: earlySaved.version }), 'submit').version;
+  version = must(await transitionOutlook(db, config, lead, early.id, 'approve', { version }), 'approve').version;
+  const published = must(await transitionOutlook(db, config, lead, early.id, 'publish', { version }), 'publish');
 
   // 2. The current Day 1 draft: an amendment of that issuance.
   const amendment = must(await amendIssuance(db, forecaster, published.issuanceNumber ?? ''), 'amendment');
@@ -107,5 +134,5 @@ async function seedDemoOutlooks(db: Database, demoDay: Date): Promise<void> {
     await saveOutlook(db, forecaster, day2.id, { version: day2.version, headline: day2.headline, discussion: demoDay2Discussion, hazardNotes: {}, validFrom: day2.validFrom, validUntil: day2.validUntil, areas: demoDay2Areas }),
     'day 2 outlook',
   );
-  must(await transitionOutlook(db, forecaster, day2.id, 'submit', { version: day2Saved.version }), 'day 2 submit');
+  must(await transitionOutlook(db, config, forecaster, day2.id, 'submit', { version: day2Saved.version }), 'day 2 submit');
 }

@@ -8,6 +8,8 @@ import { err, ok, type Result } from '../../shared/result';
 import type { Actor } from '../auth/require-role';
 import type { Database, Transaction } from '../db/client';
 import { auditEvents, issuances, outlooks, users } from '../db/schema';
+import type { Config } from '../config';
+import { queueIssuanceNotices } from './distribution.service';
 import { findOffice } from './office.service';
 import { buildEvidenceReport, evidenceSoundings, getOutlook } from './outlooks.service';
 
@@ -44,6 +46,7 @@ const stateWords: Record<OutlookState, string> = { draft: 'a draft', in_review: 
  */
 export async function transitionOutlook(
   db: Database,
+  config: Config,
   actor: Actor,
   outlookId: string,
   action: WorkflowAction,
@@ -84,7 +87,7 @@ export async function transitionOutlook(
     let issuanceNumber: string | undefined;
     let issuanceId: string | undefined;
     if (action === 'publish') {
-      const issued = await writeIssuance(tx, office, outlookId, actor, hooks);
+      const issued = await writeIssuance(tx, config, office, outlookId, actor, hooks);
       issuanceNumber = issued.number;
       issuanceId = issued.id;
       details.issuanceNumber = issued.number;
@@ -97,7 +100,7 @@ export async function transitionOutlook(
 type OfficeRow = NonNullable<Awaited<ReturnType<typeof findOffice>>>;
 
 /** Writes the issuance: next number of the office's year, frozen snapshot with evidence and support. */
-async function writeIssuance(tx: Transaction, office: OfficeRow, outlookId: string, actor: Actor, hooks: PublishHooks) {
+async function writeIssuance(tx: Transaction, config: Config, office: OfficeRow, outlookId: string, actor: Actor, hooks: PublishHooks) {
   const outlook = await getOutlook(tx as unknown as Database, outlookId);
   if (!outlook.ok) throw new Error('outlook vanished while publishing');
   const o = outlook.value;
@@ -167,5 +170,7 @@ async function writeIssuance(tx: Transaction, office: OfficeRow, outlookId: stri
     await tx.update(issuances).set({ state: 'superseded', supersededById: row.id }).where(and(eq(issuances.id, o.amendsIssuanceId), eq(issuances.state, 'published')));
     await tx.insert(auditEvents).values({ officeId: office.id, issuanceId: o.amendsIssuanceId, actorId: actor.userId, action: 'supersede', fromState: 'published', toState: 'superseded', details: { supersededBy: number } });
   }
+  // Mail is queued in this same transaction (durable outbox); the worker sends after commit.
+  await queueIssuanceNotices(tx, config, office, { id: row.id, number, day: o.day, validFrom: o.validFrom, validUntil: o.validUntil, supersedesId: o.amendsIssuanceId, headline: o.headline, discussion: o.discussion, areas: o.areas });
   return { id: row.id, number };
 }

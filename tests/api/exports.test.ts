@@ -2,15 +2,17 @@ import { inflateSync } from 'node:zlib';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { XMLParser } from 'fast-xml-parser';
 import type TestAgent from 'supertest/lib/agent';
+import type request from 'superagent';
 import type { Stormdraft } from '../../server/start';
 import { signedInAgent, startTestApp, agentFor } from './helpers/test-app';
 import { signedRingArea } from '../../shared/geometry/winding';
 
 /** supertest parser that keeps the raw body (images are not parsed as text). */
-function asBuffer(response: NodeJS.ReadableStream, callback: (error: Error | null, body: Buffer) => void) {
+function asBuffer(response: request.Response, callback: (error: Error | null, body: Buffer) => void) {
   const chunks: Buffer[] = [];
-  response.on('data', (c: Buffer) => chunks.push(c));
-  response.on('end', () => callback(null, Buffer.concat(chunks)));
+  const stream = response as unknown as NodeJS.ReadableStream;
+  stream.on('data', (c: Buffer) => chunks.push(c));
+  stream.on('end', () => callback(null, Buffer.concat(chunks)));
 }
 
 let sd: Stormdraft;

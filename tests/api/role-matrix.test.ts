@@ -22,6 +22,7 @@ const anyone = (status: number): Record<Caller, number> => ({ anonymous: status,
 const readers = (status: number): Record<Caller, number> => ({ anonymous: 401, subscriber: 403, forecaster: status, lead: status, admin: status });
 const authors = (status: number): Record<Caller, number> => ({ anonymous: 401, subscriber: 403, forecaster: status, lead: status, admin: 403 });
 const leadOnly = (status: number): Record<Caller, number> => ({ anonymous: 401, subscriber: 403, forecaster: 403, lead: status, admin: 403 });
+const subscriberOnly = (status: number): Record<Caller, number> => ({ anonymous: 401, subscriber: status, forecaster: 403, lead: 403, admin: 403 });
 const signedIn = (status: number): Record<Caller, number> => ({ anonymous: 401, subscriber: status, forecaster: status, lead: status, admin: status });
 
 /**
@@ -73,6 +74,16 @@ const matrix: MatrixRow[] = [
   { method: 'get', route: '/api/public/feed.atom', url: '/api/public/feed.atom', expect: anyone(200) },
   { method: 'post', route: '/api/issuances/:issuanceNumber/withdraw', url: '/api/issuances/1999-0001/withdraw', body: {}, expect: leadOnly(400) },
   { method: 'post', route: '/api/issuances/:issuanceNumber/amend', url: '/api/issuances/1999-0001/amend', body: {}, expect: authors(404) },
+  { method: 'get', route: '/api/subscriptions/me', url: '/api/subscriptions/me', expect: subscriberOnly(200) },
+  { method: 'put', route: '/api/subscriptions/me', url: '/api/subscriptions/me', body: {}, expect: subscriberOnly(400) },
+  { method: 'post', route: '/api/areas-of-interest', url: '/api/areas-of-interest', body: {}, expect: subscriberOnly(400) },
+  { method: 'delete', route: '/api/areas-of-interest/:areaId', url: `/api/areas-of-interest/${missingId}`, expect: subscriberOnly(404) },
+  { method: 'get', route: '/api/places', url: '/api/places?q=Boone', expect: signedIn(200) },
+  { method: 'get', route: '/api/subscriptions', url: '/api/subscriptions', expect: { anonymous: 401, subscriber: 403, forecaster: 403, lead: 200, admin: 200 } },
+  { method: 'get', route: '/api/unsubscribe', url: '/api/unsubscribe?token=not-a-real-token', expect: anyone(200) },
+  { method: 'post', route: '/api/unsubscribe', url: '/api/unsubscribe?token=not-a-real-token', body: {}, expect: anyone(400) },
+  { method: 'get', route: '/api/mail-outbox', url: '/api/mail-outbox', expect: staffOnly(200) },
+  { method: 'post', route: '/api/mail-outbox/:messageId/resend', url: `/api/mail-outbox/${missingId}/resend`, body: {}, expect: staffOnly(409) },
 ];
 
 let sd: Stormdraft;

@@ -144,7 +144,7 @@ describe('publishing', () => {
     if (!leadRow) throw new Error('no demo lead');
     const actor = { userId: leadRow.id, name: leadRow.name, email: leadRow.email, role: 'lead' as const };
     await expect(
-      transitionOutlook(sd.ctx.db, actor, id, 'publish', { version: before.version }, {
+      transitionOutlook(sd.ctx.db, sd.ctx.config, actor, id, 'publish', { version: before.version }, {
         afterIssuanceWritten: () => {
           throw new Error('injected fault');
         },

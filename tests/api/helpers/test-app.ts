@@ -26,6 +26,8 @@ export function testConfig(overrides: Partial<Config> = {}): Config {
     authRateLimitPerMinute: 10_000,
     viteDev: false,
     seedDemo: true,
+    // Tests drive the outbox themselves (processOutbox) so sending is deterministic.
+    outboxIntervalMs: 0,
     ...overrides,
   };
 }
