@@ -204,8 +204,10 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               children: [
                 {
                   path: 'alerts',
-                  loader: loaderForRoles(queryClient, subscribers),
-                  lazy: async () => ({ Component: (await import('../features/subscriptions/routes/my-alerts')).MyAlertsPage }),
+                  lazy: async () => {
+                    const page = await import('../features/subscriptions/routes/my-alerts');
+                    return { Component: page.MyAlertsPage, loader: loaderForRoles(queryClient, subscribers, page.myAlertsLoader(queryClient)) };
+                  },
                 },
               ],
             },
