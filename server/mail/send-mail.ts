@@ -20,6 +20,9 @@ export function createMailer(smtpUrl: string, fromAddress: string): Mailer {
   const url = new URL(smtpUrl);
   const local = url.hostname === '127.0.0.1' || url.hostname === 'localhost';
   const transport: Transporter = nodemailer.createTransport({
+    // Reuse a few connections instead of one handshake per message.
+    pool: true,
+    maxConnections: 4,
     host: url.hostname,
     port: url.port ? Number(url.port) : url.protocol === 'smtps:' ? 465 : 587,
     secure: url.protocol === 'smtps:',

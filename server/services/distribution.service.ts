@@ -163,15 +163,12 @@ async function queueMessages(
       ]
     : [];
   const headers = { 'List-Unsubscribe': `<${unsubscribeUrl}>`, 'List-Unsubscribe-Post': 'List-Unsubscribe=One-Click' };
-  const rows = sub.emails.map((email) => ({
-    dedupeKey: `${kind}:${issuance.id}:${sub.id}:${email}`,
-    toAddress: email,
-    subject: rendered.subject,
-    html: rendered.html,
-    text: rendered.text,
-    headers,
-    attachments,
-  }));
-  const inserted = await tx.insert(mailOutbox).values(rows).onConflictDoNothing({ target: mailOutbox.dedupeKey }).returning({ id: mailOutbox.id });
+  if (sub.emails.length === 0) return 0;
+  // One message per subscriber and issuance, addressed to all of their addresses.
+  const inserted = await tx
+    .insert(mailOutbox)
+    .values({ dedupeKey: `${kind}:${issuance.id}:${sub.id}`, toAddress: sub.emails.join(', '), subject: rendered.subject, html: rendered.html, text: rendered.text, headers, attachments })
+    .onConflictDoNothing({ target: mailOutbox.dedupeKey })
+    .returning({ id: mailOutbox.id });
   return inserted.length;
 }

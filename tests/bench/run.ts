@@ -5,5 +5,5 @@
 import { BENCH_FIGURES } from './figures';
 
 for (const figure of BENCH_FIGURES) {
-  console.log(`${figure.name}: ${figure.measure()} ${figure.unit}`);
+  console.log(`${figure.name}: ${await figure.measure()} ${figure.unit}`);
 }
