@@ -139,3 +139,81 @@ describe('matching and the outbox', () => {
     expect(forged.status).toBe(400);
   });
 });
+
+describe('outbox faults with a real SMTP server on 127.0.0.1', () => {
+  async function freePort(): Promise<number> {
+    const { createServer } = await import('node:net');
+    return new Promise((resolve) => {
+      const probe = createServer();
+      probe.listen(0, '127.0.0.1', () => {
+        const address = probe.address();
+        const port = typeof address === 'object' && address ? address.port : 0;
+        probe.close(() => resolve(port));
+      });
+    });
+  }
+
+  async function queueOneFor(email: string, headline: string): Promise<string> {
+    const admin = await signedInAgent(sd.app, 'admin');
+    const password = 'long-enough-9';
+    await admin.post('/api/users').send({ name: headline, email, password, role: 'subscriber' });
+    const person = agentFor(sd.app);
+    await person.post('/api/auth/sign-in/email').send({ email, password });
+    const current = (await person.get('/api/subscriptions/me')).body;
+    await person.put('/api/subscriptions/me').send({ version: current.version, alertThreshold: 'level1', hazards: [], days: [1, 2, 3], emails: [email], paused: false });
+    await person.post('/api/areas-of-interest').send({ kind: 'county', fipsCode: '29019' });
+    // Send everything already queued so only the new message is due.
+    await processOutbox(sd.ctx.db, sd.ctx.mailer);
+    return publish(headline, [{ levelKey: 'level2', hazards: [], geometry: overBoone }]);
+  }
+
+  it('When the SMTP server is down, then the message is retried and delivered exactly once when it comes back', async () => {
+    const { startMailCatcher } = await import('../../server/mail/mail-catcher');
+    const { createMailer } = await import('../../server/mail/send-mail');
+    const email = 'down@county.test';
+    const number = await queueOneFor(email, 'Relay down');
+    const port = await freePort();
+    const mailer = createMailer(`smtp://127.0.0.1:${port}`, 'outlooks@stormdraft.test');
+    try {
+      const first = await processOutbox(sd.ctx.db, mailer);
+      expect(first.failed).toBeGreaterThanOrEqual(1);
+      const [row] = await outboxFor(email, number);
+      expect(row).toMatchObject({ status: 'queued', attempts: 1 });
+      expect(row?.lastError).toBeTruthy();
+      const received: string[] = [];
+      const catcher = await startMailCatcher(async (m) => {
+        received.push(m.subject);
+      }, port);
+      try {
+        const later = new Date(Date.now() + 10 * 60_000);
+        await processOutbox(sd.ctx.db, mailer, later);
+        await processOutbox(sd.ctx.db, mailer, new Date(later.getTime() + 3_600_000));
+        expect(received.filter((s) => s.includes(number))).toHaveLength(1);
+        expect((await outboxFor(email, number))[0]?.status).toBe('sent');
+      } finally {
+        await catcher.close();
+      }
+    } finally {
+      mailer.close();
+    }
+  });
+
+  it('When the app stopped mid-send (a row left "sending"), then start-up recovery sends it once and never twice', async () => {
+    const { recoverOutbox } = await import('../../server/services/outbox.service');
+    const email = 'crash@county.test';
+    const number = await queueOneFor(email, 'Crash mid-send');
+    const [row] = await outboxFor(email, number);
+    // What a worker killed between claiming and sending leaves behind.
+    await sd.ctx.db.update(mailOutbox).set({ status: 'sending' }).where(eq(mailOutbox.id, row?.id ?? ''));
+    await processOutbox(sd.ctx.db, sd.ctx.mailer);
+    expect((await outboxFor(email, number))[0]?.status, 'a running worker leaves a claimed row alone').toBe('sending');
+    await recoverOutbox(sd.ctx.db);
+    await processOutbox(sd.ctx.db, sd.ctx.mailer);
+    await processOutbox(sd.ctx.db, sd.ctx.mailer);
+    const delivered = await waitFor(async () => {
+      const rows = await sd.ctx.db.select().from(caughtMail).where(like(caughtMail.subject, `%${number}%`));
+      return rows.length ? rows : undefined;
+    }, 'the recovered message');
+    expect(delivered.filter((m) => m.toAddress === email)).toHaveLength(1);
+  });
+});
