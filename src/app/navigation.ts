@@ -15,6 +15,8 @@ const alerts: NavigationItem = { label: 'My alerts', to: '/alerts', icon: 'alert
 const users: NavigationItem = { label: 'Users', to: '/admin/users', icon: 'users' };
 const settings: NavigationItem = { label: 'Office settings', to: '/admin/settings', icon: 'settings' };
 const mail: NavigationItem = { label: 'Mail catcher', to: '/admin/mail', icon: 'mail' };
+const subscribers: NavigationItem = { label: 'Subscribers', to: '/subscribers', icon: 'alerts' };
+const outbox: NavigationItem = { label: 'Outbox', to: '/admin/outbox', icon: 'mail' };
 const bulletin: NavigationItem = { label: 'Public bulletin', to: '/bulletin', icon: 'bulletin' };
 const account: NavigationItem = { label: 'Account', to: '/account', icon: 'account' };
 
@@ -24,10 +26,10 @@ export function navigationFor(role: Role): NavigationItem[] {
     case 'forecaster':
       return [desk, soundings, bulletin, account];
     case 'lead':
-      return [review, desk, soundings, bulletin, account];
+      return [review, desk, soundings, subscribers, bulletin, account];
     case 'subscriber':
       return [alerts, bulletin, account];
     case 'admin':
-      return [users, settings, mail, soundings, bulletin, account];
+      return [users, settings, subscribers, outbox, mail, soundings, bulletin, account];
   }
 }

@@ -37,6 +37,7 @@ const subscribers = ['subscriber'] as const satisfies readonly Role[];
 const admins = ['admin'] as const satisfies readonly Role[];
 const soundingReaders = ['forecaster', 'lead', 'admin'] as const satisfies readonly Role[];
 const outlookReaders = ['forecaster', 'lead', 'admin'] as const satisfies readonly Role[];
+const subscriberReaders = ['lead', 'admin'] as const satisfies readonly Role[];
 
 /** Every page, lazy-loaded so the public bulletin never downloads staff pages. */
 export function createRoutes(queryClient: QueryClient): RouteObject[] {
@@ -212,6 +213,18 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               ],
             },
             {
+              element: <RoleGate roles={subscriberReaders} />,
+              children: [
+                {
+                  path: 'subscribers',
+                  lazy: async () => {
+                    const page = await import('../features/subscriptions/routes/subscribers');
+                    return { Component: page.SubscribersPage, loader: loaderForRoles(queryClient, subscriberReaders, page.subscribersLoader(queryClient)) };
+                  },
+                },
+              ],
+            },
+            {
               path: 'admin',
               element: <RoleGate roles={admins} />,
               children: [
@@ -231,6 +244,13 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
                       Component: page.OfficeSettingsPage,
                       loader: loaderForRoles(queryClient, admins, page.officeSettingsLoader(queryClient)),
                     };
+                  },
+                },
+                {
+                  path: 'outbox',
+                  lazy: async () => {
+                    const page = await import('../features/admin/routes/outbox');
+                    return { Component: page.OutboxPage, loader: loaderForRoles(queryClient, admins, page.outboxLoader(queryClient)) };
                   },
                 },
                 {

@@ -9,4 +9,6 @@ export const adminKeys = {
   mail: () => [...adminKeys.all, 'mail'] as const,
   mailList: () => [...adminKeys.mail(), 'list'] as const,
   mailDetail: (messageId: string) => [...adminKeys.mail(), 'detail', messageId] as const,
+  outbox: () => [...adminKeys.all, 'outbox'] as const,
+  outboxList: () => [...adminKeys.outbox(), 'list'] as const,
 };
