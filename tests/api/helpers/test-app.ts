@@ -1,7 +1,6 @@
 import { existsSync, readFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import path from 'node:path';
 import { pino } from 'pino';
+import { inject } from 'vitest';
 import request from 'supertest';
 import type TestAgent from 'supertest/lib/agent';
 import { developmentAuthSecret, type Config } from '../../../server/config';
@@ -32,8 +31,14 @@ export function testConfig(overrides: Partial<Config> = {}): Config {
   };
 }
 
-/** Where the global setup leaves a migrated, seeded database for test files to copy. */
-export const testTemplatePath = path.join(tmpdir(), 'stormdraft-test-template.tar');
+/** Where the global setup left a migrated, seeded database for test files to copy (none outside vitest's setup). */
+function templatePath(): string | undefined {
+  try {
+    return inject('testTemplatePath');
+  } catch {
+    return undefined;
+  }
+}
 
 /**
  * Starts the real app (real PGlite, real better-auth, real SMTP catcher), seeded with the demo
@@ -41,8 +46,8 @@ export const testTemplatePath = path.join(tmpdir(), 'stormdraft-test-template.ta
  */
 export async function startTestApp(overrides: Partial<Config> = {}, clientMode: ClientMode = 'none', options: { useTemplate?: boolean } = {}): Promise<Stormdraft> {
   const config = testConfig(overrides);
-  const useTemplate = (options.useTemplate ?? true) && config.dataDir === undefined && config.seedDemo && existsSync(testTemplatePath);
-  const loadDataDir = useTemplate ? new Blob([readFileSync(testTemplatePath)]) : undefined;
+  const template = (options.useTemplate ?? true) && config.dataDir === undefined && config.seedDemo ? templatePath() : undefined;
+  const loadDataDir = template && existsSync(template) ? new Blob([readFileSync(template)]) : undefined;
   return startStormdraft(config, { clientMode, logger: pino({ level: 'silent' }), ...(loadDataDir ? { loadDataDir } : {}) });
 }
 
