@@ -37,10 +37,13 @@ describe('app shell by role', () => {
   });
 
   it('when nobody is signed in, / opens the public bulletin with the caution', async () => {
-    fakeServer({ role: null });
+    fakeServer({
+      role: null,
+      routes: [({ path }) => (path === '/api/public/bulletin' ? { status: 200, body: { issuances: [], caution: 'planning guidance, not a warning' } } : undefined)],
+    });
     renderApp('/');
     expect(await screen.findByRole('heading', { level: 1, name: 'Severe-thunderstorm outlook' })).toBeDefined();
-    expect(screen.getByText('No outlook has been published yet')).toBeDefined();
+    expect(await screen.findByText('No outlook has been published yet')).toBeDefined();
     expect(screen.getByRole('complementary', { name: 'Caution' }).textContent).toContain('planning guidance, not a warning');
   });
 
