@@ -9,7 +9,7 @@ import { DiscussionText } from './discussion-text';
 import { IssuanceDownloads } from './issuance-downloads';
 import { IssuanceStateBadge } from './issuance-state-badge';
 import { MapLegend } from './map-legend';
-import { RiskAreaMap } from './risk-area-map';
+import { RiskAreaMap } from '../../../lib/map/risk-area-map';
 
 interface IssuanceDetailsProps {
   issuance: Issuance;

@@ -1,24 +1,8 @@
+import type { MapArea, MapBounds } from '../../../lib/map/risk-area-types';
 import type { AreaGeometry, HazardKind } from '../../../../shared/contracts/outlooks';
 import { hazardsText, stepFor, type LadderStep } from './issuance-format';
 
-/** One risk area as the read-only map draws it: plain data, no Leaflet objects. */
-export interface MapArea {
-  id: string;
-  geometry: AreaGeometry;
-  colour: string;
-  /** Level number and word, e.g. "Level 2 · Scattered" — shown on hover and in the legend. */
-  title: string;
-  /** Hazards in words; a significant hazard draws the bold inner outline. */
-  detail: string;
-  significant: boolean;
-}
-
-export interface MapBounds {
-  west: number;
-  south: number;
-  east: number;
-  north: number;
-}
+export type { MapArea, MapBounds };
 
 interface AreaLike {
   id: string;

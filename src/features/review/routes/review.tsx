@@ -17,7 +17,7 @@ import { AuditTrail } from '../components/audit-trail';
 import { ChangeSummary } from '../components/change-summary';
 import { CommentThread } from '../components/comment-thread';
 import { ReviewActions } from '../components/review-actions';
-import { ReviewMap } from '../components/review-map';
+import { RiskAreaMap } from '../../../lib/map/risk-area-map';
 import { SupportResults } from '../components/support-results';
 import { diffOutlookAreas } from '../utils/outlook-diff';
 import { chooseBaseline } from '../utils/review-baseline';
@@ -115,7 +115,7 @@ export function ReviewPage() {
           <div className="grid gap-3 md:grid-cols-2">
             <figure className="space-y-1">
               <figcaption className="text-[13px] font-semibold">This draft</figcaption>
-              <ReviewMap label="Map of the draft under review" bounds={region} areas={reviewMapAreas(draft.areas, ladder)} className="h-80 rounded-md border border-line" />
+              <RiskAreaMap label="Map of the draft under review" bounds={region} areas={reviewMapAreas(draft.areas, ladder)} className="h-80 rounded-md border border-line" />
             </figure>
             <figure className="space-y-1">
               <figcaption className="text-[13px] font-semibold">
@@ -132,7 +132,7 @@ export function ReviewPage() {
                   'Nothing to compare with (first draft, no current issuance for this day)'
                 )}
               </figcaption>
-              <ReviewMap label={`Map of ${baseline.name}`} bounds={region} areas={reviewMapAreas(baseline.areas, ladder)} className="h-80 rounded-md border border-line" />
+              <RiskAreaMap label={`Map of ${baseline.name}`} bounds={region} areas={reviewMapAreas(baseline.areas, ladder)} className="h-80 rounded-md border border-line" />
             </figure>
           </div>
           <ul aria-label="Map legend" className="flex flex-wrap gap-1.5">

@@ -1,22 +1,8 @@
+import type { MapArea, MapBounds } from '../../../lib/map/risk-area-types';
 import type { OfficeSettings } from '../../../../shared/contracts/office';
 import { hazardLabels, type AreaGeometry, type HazardKind } from '../../../../shared/contracts/outlooks';
 
-/** One risk area as the read-only review map draws it. */
-export interface MapArea {
-  id: string;
-  geometry: AreaGeometry;
-  colour: string;
-  title: string;
-  detail: string;
-  significant: boolean;
-}
-
-export interface MapBounds {
-  west: number;
-  south: number;
-  east: number;
-  north: number;
-}
+export type { MapArea, MapBounds };
 
 type Ladder = OfficeSettings['riskLadder'];
 

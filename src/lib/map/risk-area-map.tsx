@@ -1,9 +1,9 @@
-import '../../../lib/map/leaflet-setup';
+import './leaflet-setup';
 import type { Feature, FeatureCollection, MultiLineString } from 'geojson';
 import { useEffect, useState } from 'react';
 import { GeoJSON, MapContainer, Pane, Tooltip, useMap } from 'react-leaflet';
-import { loadOfflineBoundaries, type OfflineBoundaries } from '../../../lib/map/offline-boundaries';
-import type { MapArea, MapBounds } from '../utils/map-areas';
+import { loadOfflineBoundaries, type OfflineBoundaries } from './offline-boundaries';
+import type { MapArea, MapBounds } from './risk-area-types';
 
 
 const boundaryStyle = {
