@@ -14,6 +14,8 @@ function toSettings(row: OfficeRow): OfficeSettings {
     region: row.region,
     timeZone: row.timeZone,
     riskLadder: row.riskLadder,
+    guidanceThresholds: row.guidanceThresholds,
+    allowSelfApproval: row.allowSelfApproval,
     version: row.version,
     updatedAt: row.updatedAt.toISOString(),
   };
@@ -38,10 +40,25 @@ export async function getOfficeSettings(db: DatabaseOrTransaction): Promise<Resu
 export async function updateOfficeSettings(db: DatabaseOrTransaction, input: OfficeSettingsInput): Promise<Result<OfficeSettings, AppError>> {
   const current = await findOffice(db);
   if (!current) return err(appError('NOT_FOUND', 'No office is set up yet.'));
-  const { version, ...fields } = input;
+  const { version, guidanceThresholds, allowSelfApproval, ...fields } = input;
+  const ladderKeys = new Set(fields.riskLadder.map((l) => l.key));
+  const strayLevels = Object.keys(guidanceThresholds ?? {}).filter((key) => !ladderKeys.has(key));
+  if (strayLevels.length) {
+    return err(
+      appError('VALIDATION_FAILED', `Guidance is set for levels that are not on the ladder: ${strayLevels.join(', ')}.`, {
+        issues: strayLevels.map((key) => ({ path: `guidanceThresholds.${key}`, message: 'This level is not on the risk ladder.' })),
+      }),
+    );
+  }
   const [row] = await db
     .update(offices)
-    .set({ ...fields, version: version + 1, updatedAt: new Date() })
+    .set({
+      ...fields,
+      ...(guidanceThresholds ? { guidanceThresholds } : {}),
+      ...(allowSelfApproval !== undefined ? { allowSelfApproval } : {}),
+      version: version + 1,
+      updatedAt: new Date(),
+    })
     .where(eq(offices.version, version))
     .returning();
   if (!row) {

@@ -55,11 +55,25 @@ export const timeZoneSchema = z
   .min(1, { message: 'A time zone is required.' })
   .refine(isTimeZone, { message: 'Use an IANA time zone such as America/Chicago.' });
 
+/** Parameters an office may set a guidance threshold for (minimum medians per level, SI units). */
+export const thresholdParameterKeys = ['mlCape', 'muCape', 'bulkShear0to6kmMs', 'srh0to1km', 'stp', 'scp'] as const;
+export type ThresholdParameterKey = (typeof thresholdParameterKeys)[number];
+
+export const guidanceThresholdsSchema = z.record(
+  z.string(),
+  z.partialRecord(z.enum(thresholdParameterKeys), z.number({ message: 'Thresholds are numbers.' }).min(0, { message: 'Thresholds are 0 or more.' }).max(100_000)),
+);
+export type GuidanceThresholdsInput = z.infer<typeof guidanceThresholdsSchema>;
+
 export const officeSettingsInputSchema = z.object({
   name: z.string().trim().min(2, { message: 'The office name needs at least 2 characters.' }).max(120, { message: 'Keep the office name under 120 characters.' }),
   region: regionSchema,
   timeZone: timeZoneSchema,
   riskLadder: riskLadderSchema,
+  /** Support-check guidance per ladder key; left as it is when absent. */
+  guidanceThresholds: guidanceThresholdsSchema.optional(),
+  /** Relaxes the four-eyes rule (one-person night shift); each use is audited. Left as it is when absent. */
+  allowSelfApproval: z.boolean().optional(),
   /** Optimistic concurrency: the version the editor loaded. */
   version: z.number().int().nonnegative(),
 });
@@ -68,6 +82,8 @@ export type OfficeSettingsInput = z.infer<typeof officeSettingsInputSchema>;
 export const officeSettingsSchema = officeSettingsInputSchema.extend({
   id: z.string(),
   updatedAt: z.string(),
+  guidanceThresholds: guidanceThresholdsSchema,
+  allowSelfApproval: z.boolean(),
 });
 export type OfficeSettings = z.infer<typeof officeSettingsSchema>;
 

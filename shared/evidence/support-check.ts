@@ -1,4 +1,4 @@
-import type { RiskLadder } from '../contracts/office';
+import type { RiskLadder, ThresholdParameterKey } from '../contracts/office';
 import type { AreaEvidence } from './evidence';
 
 /** Parameters an office may set a guidance threshold for; each is a minimum median expected for a level. */
@@ -9,7 +9,7 @@ export const thresholdParameters = {
   srh0to1km: { label: '0–1 km SRH', unit: 'm²/s²', digits: 0 },
   stp: { label: 'STP', unit: '', digits: 1 },
   scp: { label: 'SCP', unit: '', digits: 1 },
-} as const;
+} as const satisfies Record<ThresholdParameterKey, { label: string; unit: string; digits: number }>;
 export type ThresholdParameter = keyof typeof thresholdParameters;
 
 /** Per ladder key, the minimum median of each parameter expected at that level. */

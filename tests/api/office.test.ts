@@ -68,3 +68,26 @@ describe('PUT /api/office', () => {
     expect(res.body.error.message).toMatch(/not valid JSON/);
   });
 });
+
+describe('guidance thresholds and the four-eyes setting', () => {
+  it('When an admin sets thresholds and relaxes four-eyes, then both are stored and read back', async () => {
+    const current = (await admin.get('/api/office')).body;
+    expect(current.guidanceThresholds.level3.mlCape).toBeGreaterThan(0);
+    const guidanceThresholds = { ...current.guidanceThresholds, level3: { mlCape: 1800, srh0to1km: 120 } };
+    const res = await admin.put('/api/office').send({ name: current.name, region: current.region, timeZone: current.timeZone, riskLadder: current.riskLadder, guidanceThresholds, allowSelfApproval: true, version: current.version });
+    expect(res.status).toBe(200);
+    expect(res.body.guidanceThresholds.level3).toEqual({ mlCape: 1800, srh0to1km: 120 });
+    expect(res.body.allowSelfApproval).toBe(true);
+  });
+
+  it('When a threshold is negative or names a level not on the ladder, then 400 names it', async () => {
+    const current = (await admin.get('/api/office')).body;
+    const base = { name: current.name, region: current.region, timeZone: current.timeZone, riskLadder: current.riskLadder, version: current.version };
+    const negative = await admin.put('/api/office').send({ ...base, guidanceThresholds: { level1: { mlCape: -5 } } });
+    expect(negative.status).toBe(400);
+    expect(negative.body.error.issues[0].path).toBe('guidanceThresholds.level1.mlCape');
+    const stray = await admin.put('/api/office').send({ ...base, guidanceThresholds: { level9: { mlCape: 5 } } });
+    expect(stray.status).toBe(400);
+    expect(stray.body.error.issues[0].path).toBe('guidanceThresholds.level9');
+  });
+});

@@ -11,6 +11,7 @@ import { formFailureFrom, parseForm } from '../../../utils/form';
 import { readClock } from '../../../utils/time';
 import { useUpdateOffice } from '../api/update-office';
 import { toEditableLadder, toRiskLadder, type EditableLevel } from '../utils/risk-ladder-edits';
+import { GuidanceEditor, guidanceToText, textToGuidance, type GuidanceText } from './guidance-editor';
 import { RiskLadderEditor } from './risk-ladder-editor';
 
 type RegionSide = 'west' | 'south' | 'east' | 'north';
@@ -45,7 +46,7 @@ function regionFromText(text: Record<RegionSide, string>): { values: Record<Regi
 
 /** Fields without a place of their own in the form are listed at the top. */
 function unplacedErrors(errors: FieldErrors): string[] {
-  const placed = /^(name|timeZone|region\.(west|south|east|north)|riskLadder(\.\d+\.(key|label|colour|meaning))?)$/;
+  const placed = /^(name|timeZone|region\.(west|south|east|north)|riskLadder(\.\d+\.(key|label|colour|meaning))?|guidanceThresholds\.[^.]+\.[^.]+)$/;
   return Object.entries(errors)
     .filter(([path]) => !placed.test(path))
     .map(([path, message]) => (path === '' ? message : `${path}: ${message}`));
@@ -69,6 +70,8 @@ export function OfficeSettingsForm({ office, onReset }: OfficeSettingsFormProps)
     north: String(office.region.north),
   });
   const [rows, setRows] = useState<EditableLevel[]>(() => toEditableLadder(office.riskLadder));
+  const [guidance, setGuidance] = useState<GuidanceText>(() => guidanceToText(office.guidanceThresholds));
+  const [allowSelfApproval, setAllowSelfApproval] = useState(office.allowSelfApproval);
   // The version this editor started from. Background refetches must not move it, or a save
   // would silently overwrite someone else's change instead of answering 409.
   const [baseVersion, setBaseVersion] = useState(office.version);
@@ -84,6 +87,11 @@ export function OfficeSettingsForm({ office, onReset }: OfficeSettingsFormProps)
       timeZone,
       region: regionParsed.values,
       riskLadder: toRiskLadder(rows),
+      guidanceThresholds: textToGuidance(
+        guidance,
+        rows.map((r) => r.key),
+      ),
+      allowSelfApproval,
       version,
     });
     const fieldErrors = { ...(parsed.ok ? {} : parsed.error), ...regionParsed.errors };
@@ -235,6 +243,19 @@ export function OfficeSettingsForm({ office, onReset }: OfficeSettingsFormProps)
             setErrors((current) => Object.fromEntries(Object.entries(current).filter(([path]) => !path.startsWith('riskLadder'))));
           }}
         />
+      </Panel>
+
+      <Panel title="Guidance thresholds" description="The median each level should reach inside an area. The support check compares every area's soundings with its level's row.">
+        <GuidanceEditor levels={rows} value={guidance} onChange={setGuidance} errors={errors} />
+      </Panel>
+
+      <Panel title="Review" description="Who may approve a draft.">
+        <label className="flex items-start gap-2 text-[14px]">
+          <input type="checkbox" className="mt-1" checked={allowSelfApproval} onChange={(event) => setAllowSelfApproval(event.target.checked)} />
+          <span>
+            Let a lead approve a draft they edited last (one-person night shift). Every such approval is recorded in the outlook's audit trail. Leave this off to keep the four-eyes rule.
+          </span>
+        </label>
       </Panel>
 
       <div className="sticky bottom-0 flex items-center gap-3 border-t border-line bg-canvas py-3">
