@@ -8,7 +8,7 @@ import type { AppContext } from './context';
 import { openDatabase } from './db/client';
 import { startMailCatcher, type MailCatcher } from './mail/mail-catcher';
 import { createMailer } from './mail/send-mail';
-import { sendPasswordResetMail, storeCaughtMail } from './services/mail.service';
+import { sendPasswordResetMail, sendVerificationMail, storeCaughtMail } from './services/mail.service';
 import { ensureOffice, seedDemo } from './services/seed.service';
 import { recoverOutbox, startOutboxWorker } from './services/outbox.service';
 
@@ -38,7 +38,10 @@ export async function startStormdraft(config: Config, options: StartOptions): Pr
   const db = database.db;
   const catcher = config.smtpUrl ? undefined : await startMailCatcher((message) => storeCaughtMail(db, message));
   const mailer = createMailer(config.smtpUrl ?? catcher?.url ?? 'smtp://127.0.0.1:25', 'Stormdraft <outlooks@stormdraft.test>');
-  const auth = createAuth(config, db, { sendResetPassword: (input) => sendPasswordResetMail(db, mailer, input) });
+  const auth = createAuth(config, db, {
+    sendResetPassword: (input) => sendPasswordResetMail(db, mailer, input),
+    sendVerificationEmail: (input) => sendVerificationMail(db, mailer, input),
+  });
   const ctx: AppContext = { config, db, auth, mailer, logger, ping: database.ping };
   if (config.seedDemo) await seedDemo(db, auth, config);
   else await ensureOffice(db);

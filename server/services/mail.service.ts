@@ -40,3 +40,10 @@ export async function sendPasswordResetMail(db: Database, mailer: Mailer, input:
   const rendered = renderTemplate('reset-password', { ...input, officeName: office?.name ?? 'Stormdraft' });
   await mailer.send({ to: input.email, ...rendered });
 }
+
+/** Sends the address-confirmation mail built from templates/verify-email.{html,txt}. */
+export async function sendVerificationMail(db: Database, mailer: Mailer, input: { name: string; email: string; url: string }): Promise<void> {
+  const office = await findOffice(db);
+  const rendered = renderTemplate('verify-email', { ...input, officeName: office?.name ?? 'Stormdraft' });
+  await mailer.send({ to: input.email, ...rendered });
+}

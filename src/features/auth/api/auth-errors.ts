@@ -18,6 +18,7 @@ const messagesByCode: Record<string, string> = {
   PASSWORD_TOO_LONG: 'Keep the password under 128 characters.',
   BANNED_USER: 'This account is disabled. Ask your office administrator to enable it again.',
   INVALID_TOKEN: 'This reset link is invalid or has expired. Ask for a new link below.',
+  EMAIL_NOT_VERIFIED: 'Confirm your e-mail address first: we have sent you a new link.',
 };
 
 function codeForStatus(status: number): ApiErrorCode {

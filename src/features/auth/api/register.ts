@@ -13,9 +13,12 @@ export function useRegister() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: async (input: RegisterInput): Promise<Me | null> => {
-      const result = await authClient.signUp.email({ name: input.name, email: input.email, password: input.password });
+      // The confirmation link in the e-mail signs the new subscriber in and opens their alerts.
+      const result = await authClient.signUp.email({ name: input.name, email: input.email, password: input.password, callbackURL: '/alerts' });
       if (result.error) throw apiErrorFromAuth(result.error);
       queryClient.removeQueries({ queryKey: meKeys.all });
+      // No session until the address is confirmed.
+      if (!result.data?.token) return null;
       return queryClient.fetchQuery(meQueryOptions());
     },
   });

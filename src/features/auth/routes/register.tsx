@@ -32,7 +32,7 @@ export function RegisterPage() {
     setFieldErrors({});
     register.mutate(parsed.value, {
       onSuccess: (me) => {
-        void navigate(me ? homePathFor(me.user.role) : '/sign-in?notice=registered', { replace: true });
+        void navigate(me ? homePathFor(me.user.role) : '/sign-in?notice=verify-email', { replace: true });
       },
       onError: (error) => {
         const failure = formFailureFrom(error);

@@ -66,6 +66,11 @@ export function SignInPage() {
           Sign in with your new password.
         </Notice>
       ) : null}
+      {notice === 'verify-email' ? (
+        <Notice tone="success" title="Check your e-mail" className="mb-4">
+          We sent you a link to confirm your address. Open it to sign in and set up your alerts.
+        </Notice>
+      ) : null}
       {notice === 'registered' ? (
         <Notice tone="success" title="Account created" className="mb-4">
           Sign in to set up your alerts.
