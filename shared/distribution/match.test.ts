@@ -17,6 +17,11 @@ describe('matchAreas', () => {
   it('When the area of interest only touches the thunder area, then the level is thunder', () => {
     expect(matchAreas([box(-89.5, 40.5, -88.5, 40.9)], risk, ladder).highestLevelKey).toBe('thunder');
   });
+  // Our convention: touching counts. A county whose edge runs along the Level 3 area's edge is
+  // alerted at Level 3 (a storm on the line threatens both sides).
+  it('When the area only touches the Level 3 edge, then it is matched at Level 3', () => {
+    expect(matchAreas([box(-92, 38.2, -91.5, 38.8)], risk, ladder).highestLevelKey).toBe('level3');
+  });
   it('When the area lies outside every risk area, then there is no level', () => {
     expect(matchAreas([box(-80, 30, -79, 31)], risk, ladder).highestLevelKey).toBeNull();
   });

@@ -109,6 +109,20 @@ describe('matching and the outbox', () => {
     expect(await outboxFor('subscriber@demo.stormdraft.test', number)).toHaveLength(0);
   });
 
+  it('When the subscriber pauses alerts, or follows other days, then nothing is queued for them', async () => {
+    const current = (await subscriber.get('/api/subscriptions/me')).body;
+    const base = { alertThreshold: 'level1', hazards: [], emails: ['subscriber@demo.stormdraft.test'] };
+    const paused = await subscriber.put('/api/subscriptions/me').send({ ...base, version: current.version, days: [1, 2, 3], paused: true });
+    expect(paused.status).toBe(200);
+    const whilePaused = await publish('While paused', [{ levelKey: 'level3', hazards: [], geometry: overBoone }]);
+    expect(await outboxFor('subscriber@demo.stormdraft.test', whilePaused)).toHaveLength(0);
+    const day2Only = await subscriber.put('/api/subscriptions/me').send({ ...base, version: paused.body.version, days: [2], paused: false });
+    expect(day2Only.status).toBe(200);
+    const dayOne = await publish('Day 1 while following Day 2', [{ levelKey: 'level3', hazards: [], geometry: overBoone }]);
+    expect(await outboxFor('subscriber@demo.stormdraft.test', dayOne)).toHaveLength(0);
+    await subscriber.put('/api/subscriptions/me').send({ ...base, alertThreshold: 'level2', version: day2Only.body.version, days: [1, 2, 3], paused: false });
+  });
+
   it('When SMTP fails, then the message is retried with backoff and marked failed after the last attempt; an admin can resend it', async () => {
     const number = await publish('Retry test', [{ levelKey: 'level3', hazards: [], geometry: overBoone }]);
     const failing = { send: async () => Promise.reject(new Error('relay refused')), close: () => {} };
