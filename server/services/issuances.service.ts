@@ -129,22 +129,23 @@ export async function issuanceGeoJson(db: Database, number: string): Promise<Res
 export async function withdrawIssuance(db: Database, config: Config, actor: Actor, number: string, reason: string): Promise<Result<IssuanceView, AppError>> {
   const office = await findOffice(db);
   if (!office) throw new Error('no office');
+  // Withdrawal and its notices to alerted subscribers commit together.
   return db.transaction(async (tx) => {
-  const [row] = await tx
-    .update(issuances)
-    .set({ state: 'withdrawn', withdrawnReason: reason, withdrawnAt: new Date(), withdrawnBy: actor.userId })
-    .where(and(eq(issuances.number, number), eq(issuances.state, 'published')))
-    .returning();
-  if (!row) {
-    // Inside the transaction, read through tx: PGlite has one connection.
-    const exists = await getIssuance(tx, number);
-    if (!exists.ok) return exists;
-    return err(appError('CONFLICT', `Issuance ${number} is ${exists.value.state}; only a current (published) issuance can be withdrawn.`));
-  }
-  await tx.insert(auditEvents).values({ officeId: office.id, issuanceId: row.id, outlookId: row.outlookId, actorId: actor.userId, action: 'withdraw', fromState: 'published', toState: 'withdrawn', comment: reason });
-  const s = row.snapshot as { headline?: string; discussion?: string; areas?: RiskArea[] };
-  await queueWithdrawalNotices(tx, config, office, { id: row.id, number: row.number, day: row.day, validFrom: row.validFrom.toISOString(), validUntil: row.validUntil.toISOString(), supersedesId: row.supersedesId, headline: s.headline ?? '', discussion: s.discussion ?? '', areas: s.areas ?? [] }, reason);
-  return ok(await toView(tx, row));
+    const [row] = await tx
+      .update(issuances)
+      .set({ state: 'withdrawn', withdrawnReason: reason, withdrawnAt: new Date(), withdrawnBy: actor.userId })
+      .where(and(eq(issuances.number, number), eq(issuances.state, 'published')))
+      .returning();
+    if (!row) {
+      // Inside the transaction, read through tx: PGlite has one connection.
+      const exists = await getIssuance(tx, number);
+      if (!exists.ok) return exists;
+      return err(appError('CONFLICT', `Issuance ${number} is ${exists.value.state}; only a current (published) issuance can be withdrawn.`));
+    }
+    await tx.insert(auditEvents).values({ officeId: office.id, issuanceId: row.id, outlookId: row.outlookId, actorId: actor.userId, action: 'withdraw', fromState: 'published', toState: 'withdrawn', comment: reason });
+    const s = row.snapshot as { headline?: string; discussion?: string; areas?: RiskArea[] };
+    await queueWithdrawalNotices(tx, config, office, { id: row.id, number: row.number, day: row.day, validFrom: row.validFrom.toISOString(), validUntil: row.validUntil.toISOString(), supersedesId: row.supersedesId, headline: s.headline ?? '', discussion: s.discussion ?? '', areas: s.areas ?? [] }, reason);
+    return ok(await toView(tx, row));
   });
 }
 

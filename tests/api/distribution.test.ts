@@ -123,6 +123,16 @@ describe('matching and the outbox', () => {
     await subscriber.put('/api/subscriptions/me').send({ ...base, alertThreshold: 'level2', version: day2Only.body.version, days: [1, 2, 3], paused: false });
   });
 
+  it('When an issuance that alerted a subscriber is withdrawn, then they are told, once', async () => {
+    const number = await publish('To be withdrawn', [{ levelKey: 'level3', hazards: [], geometry: overBoone }]);
+    expect(await outboxFor('subscriber@demo.stormdraft.test', number)).toHaveLength(1);
+    expect((await lead.post(`/api/issuances/${number}/withdraw`).send({ reason: 'Issued for the wrong day.' })).status).toBe(200);
+    const rows = await outboxFor('subscriber@demo.stormdraft.test', number);
+    const withdrawn = rows.filter((r) => /withdrawn/.test(r.subject));
+    expect(withdrawn).toHaveLength(1);
+    expect(withdrawn[0]?.text).toContain('Issued for the wrong day.');
+  });
+
   it('When SMTP fails, then the message is retried with backoff and marked failed after the last attempt; an admin can resend it', async () => {
     const number = await publish('Retry test', [{ levelKey: 'level3', hazards: [], geometry: overBoone }]);
     const failing = { send: async () => Promise.reject(new Error('relay refused')), close: () => {} };
