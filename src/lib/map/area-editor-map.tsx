@@ -1,12 +1,12 @@
 import './leaflet-setup';
 import '@geoman-io/leaflet-geoman-free';
 import '@geoman-io/leaflet-geoman-free/dist/leaflet-geoman.css';
-import type { Feature, FeatureCollection, MultiLineString, MultiPolygon, Point, Polygon } from 'geojson';
+import type { FeatureCollection, MultiPolygon, Point, Polygon } from 'geojson';
 import L from 'leaflet';
-import { useEffect, useLayoutEffect, useRef, useState, type ReactNode, type RefObject } from 'react';
-import { CircleMarker, GeoJSON, MapContainer, Pane, Popup, TileLayer, Tooltip, useMap } from 'react-leaflet';
+import { useEffect, useLayoutEffect, useRef, type ReactNode, type RefObject } from 'react';
+import { CircleMarker, MapContainer, Pane, Popup, TileLayer, Tooltip, useMap } from 'react-leaflet';
 import { insetOutline, labelAnchor } from './inset-outline';
-import { loadOfflineBoundaries, type OfflineBoundaries } from './offline-boundaries';
+import { BoundaryLines, FitBounds, useOfflineBoundaries } from './base-map';
 import type { MapRegion, PointProperties } from './point-map';
 
 /** What the editor is doing: selecting, drawing a new area, editing vertices, moving or cutting a hole. */
@@ -49,12 +49,6 @@ interface AreaEditorMapProps {
   tileAttribution?: string | undefined;
   className?: string;
 }
-
-const boundaryStyles = {
-  counties: { color: '#c3cad4', weight: 0.6, opacity: 1 },
-  states: { color: '#7d8898', weight: 1.2, opacity: 1 },
-  nation: { color: '#515d6e', weight: 1.6, opacity: 1 },
-} as const;
 
 const PRECISION = 6;
 
@@ -296,24 +290,6 @@ function AreaLayers({ areas, selectedId, visible, mode, latest }: { areas: AreaE
   return null;
 }
 
-function FitRegion({ region }: { region: MapRegion }) {
-  const map = useMap();
-  useEffect(() => {
-    map.fitBounds(
-      [
-        [region.south, region.west],
-        [region.north, region.east],
-      ],
-      { padding: [12, 12] },
-    );
-  }, [map, region.west, region.south, region.east, region.north]);
-  return null;
-}
-
-function Boundary({ feature, style }: { feature: Feature<MultiLineString>; style: L.PathOptions }) {
-  return <GeoJSON data={feature} style={() => style} interactive={false} pmIgnore />;
-}
-
 /**
  * The authoring map: offline boundaries, soundings as coloured points and the outlook's risk
  * areas, with geoman drawing and editing. Callers pass plain GeoJSON and callbacks; geometry
@@ -321,28 +297,12 @@ function Boundary({ feature, style }: { feature: Feature<MultiLineString>; style
  */
 export function AreaEditorMap(props: AreaEditorMapProps) {
   const { label, region, areas, selectedId, points, renderPopup, layers, mode, tileUrl, tileAttribution, className } = props;
-  const [boundaries, setBoundaries] = useState<OfflineBoundaries | null>(null);
-  const [boundaryProblem, setBoundaryProblem] = useState<string | null>(null);
+  const { boundaries, problem: boundaryProblem } = useOfflineBoundaries();
   const latest = useRef<LatestProps>({ mode, onSelect: props.onSelect, onCreate: props.onCreate, onChange: props.onChange, onModeChange: props.onModeChange });
   useLayoutEffect(() => {
     latest.current = { mode, onSelect: props.onSelect, onCreate: props.onCreate, onChange: props.onChange, onModeChange: props.onModeChange };
   });
   const pointsInteractive = mode === 'select';
-
-  useEffect(() => {
-    let live = true;
-    loadOfflineBoundaries().then(
-      (loaded) => {
-        if (live) setBoundaries(loaded);
-      },
-      (error: unknown) => {
-        if (live) setBoundaryProblem(error instanceof Error ? error.message : 'The base map could not be drawn.');
-      },
-    );
-    return () => {
-      live = false;
-    };
-  }, []);
 
   return (
     <div className={className} role="region" aria-label={label} data-mode={mode}>
@@ -357,13 +317,11 @@ export function AreaEditorMap(props: AreaEditorMapProps) {
         doubleClickZoom={false}
         attributionControl={tileUrl !== undefined}
       >
-        <FitRegion region={region} />
+        <FitBounds bounds={region} />
         {tileUrl ? <TileLayer url={tileUrl} attribution={tileAttribution ?? ''} /> : null}
         {boundaries ? (
           <Pane name="boundaries" style={{ zIndex: 350, pointerEvents: 'none' }}>
-            {layers.counties ? <Boundary feature={boundaries.counties} style={boundaryStyles.counties} /> : null}
-            <Boundary feature={boundaries.states} style={boundaryStyles.states} />
-            <Boundary feature={boundaries.nation} style={boundaryStyles.nation} />
+            <BoundaryLines boundaries={boundaries} counties={layers.counties} />
           </Pane>
         ) : null}
         <AreaLayers areas={areas} selectedId={selectedId} visible={layers.areas} mode={mode} latest={latest} />

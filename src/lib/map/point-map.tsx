@@ -1,8 +1,8 @@
 import './leaflet-setup';
-import type { Feature, FeatureCollection, MultiLineString, Point } from 'geojson';
-import { useEffect, useState, type ReactNode } from 'react';
-import { CircleMarker, GeoJSON, MapContainer, Pane, Popup, TileLayer, Tooltip, useMap } from 'react-leaflet';
-import { loadOfflineBoundaries, type OfflineBoundaries } from './offline-boundaries';
+import type { FeatureCollection, Point } from 'geojson';
+import type { ReactNode } from 'react';
+import { CircleMarker, MapContainer, Pane, Popup, TileLayer, Tooltip } from 'react-leaflet';
+import { BoundaryLines, FitBounds, useOfflineBoundaries } from './base-map';
 
 /** A rectangle in degrees (WGS 84), e.g. the office region. */
 export interface MapRegion {
@@ -34,55 +34,14 @@ interface PointMapProps {
   className?: string;
 }
 
-const boundaryStyles = {
-  counties: { color: '#c3cad4', weight: 0.6, opacity: 1, interactive: false },
-  states: { color: '#7d8898', weight: 1.2, opacity: 1, interactive: false },
-  nation: { color: '#515d6e', weight: 1.6, opacity: 1, interactive: false },
-} as const;
-
 const NO_VALUE_FILL = '#ffffff';
-
-/** Fits the view to the region whenever the region changes. */
-function FitRegion({ region }: { region: MapRegion }) {
-  const map = useMap();
-  useEffect(() => {
-    map.fitBounds(
-      [
-        [region.south, region.west],
-        [region.north, region.east],
-      ],
-      { padding: [12, 12] },
-    );
-  }, [map, region.west, region.south, region.east, region.north]);
-  return null;
-}
-
-function BoundaryLayer({ feature, style }: { feature: Feature<MultiLineString>; style: (typeof boundaryStyles)[keyof typeof boundaryStyles] }) {
-  return <GeoJSON data={feature} style={() => style} interactive={false} />;
-}
 
 /**
  * A Leaflet map of coloured points over the offline US state and county boundaries. Callers pass
  * plain GeoJSON and a popup renderer; no Leaflet object leaves this module.
  */
 export function PointMap({ label, region, points, renderPopup, tileUrl, tileAttribution, className }: PointMapProps) {
-  const [boundaries, setBoundaries] = useState<OfflineBoundaries | null>(null);
-  const [boundaryProblem, setBoundaryProblem] = useState<string | null>(null);
-
-  useEffect(() => {
-    let live = true;
-    loadOfflineBoundaries().then(
-      (loaded) => {
-        if (live) setBoundaries(loaded);
-      },
-      (error: unknown) => {
-        if (live) setBoundaryProblem(error instanceof Error ? error.message : 'The base map could not be drawn.');
-      },
-    );
-    return () => {
-      live = false;
-    };
-  }, []);
+  const { boundaries, problem: boundaryProblem } = useOfflineBoundaries();
 
   return (
     <div className={className} role="region" aria-label={label}>
@@ -96,13 +55,11 @@ export function PointMap({ label, region, points, renderPopup, tileUrl, tileAttr
         zoomSnap={0.25}
         attributionControl={tileUrl !== undefined}
       >
-        <FitRegion region={region} />
+        <FitBounds bounds={region} />
         {tileUrl ? <TileLayer url={tileUrl} attribution={tileAttribution ?? ''} /> : null}
         {boundaries ? (
           <Pane name="boundaries" style={{ zIndex: 350 }}>
-            <BoundaryLayer feature={boundaries.counties} style={boundaryStyles.counties} />
-            <BoundaryLayer feature={boundaries.states} style={boundaryStyles.states} />
-            <BoundaryLayer feature={boundaries.nation} style={boundaryStyles.nation} />
+            <BoundaryLines boundaries={boundaries} />
           </Pane>
         ) : null}
         {points.features.map((point) => {

@@ -1,34 +1,9 @@
 import './leaflet-setup';
-import type { Feature, FeatureCollection, MultiLineString } from 'geojson';
-import { useEffect, useState } from 'react';
-import { GeoJSON, MapContainer, Pane, Tooltip, useMap } from 'react-leaflet';
-import { loadOfflineBoundaries, type OfflineBoundaries } from './offline-boundaries';
+import type { FeatureCollection } from 'geojson';
+import { GeoJSON, MapContainer, Pane, Tooltip } from 'react-leaflet';
+import { BoundaryLines, FitBounds, useOfflineBoundaries } from './base-map';
 import type { MapArea, MapBounds } from './risk-area-types';
 
-
-const boundaryStyle = {
-  counties: { color: '#c3cad4', weight: 0.6, opacity: 1 },
-  states: { color: '#7d8898', weight: 1.2, opacity: 1 },
-  nation: { color: '#515d6e', weight: 1.6, opacity: 1 },
-} as const;
-
-function FitBounds({ bounds }: { bounds: MapBounds }) {
-  const map = useMap();
-  useEffect(() => {
-    map.fitBounds(
-      [
-        [bounds.south, bounds.west],
-        [bounds.north, bounds.east],
-      ],
-      { padding: [10, 10] },
-    );
-  }, [map, bounds.west, bounds.south, bounds.east, bounds.north]);
-  return null;
-}
-
-function Boundary({ feature, style }: { feature: Feature<MultiLineString>; style: (typeof boundaryStyle)[keyof typeof boundaryStyle] }) {
-  return <GeoJSON data={feature} style={() => style} interactive={false} />;
-}
 
 const asFeature = (area: MapArea): FeatureCollection => ({ type: 'FeatureCollection', features: [{ type: 'Feature', id: area.id, properties: {}, geometry: area.geometry }] });
 
@@ -37,19 +12,7 @@ const asFeature = (area: MapArea): FeatureCollection => ({ type: 'FeatureCollect
  * order given (lowest level first); significant hazards get a bold dark inner outline.
  */
 export function RiskAreaMap({ label, bounds, areas, className }: { label: string; bounds: MapBounds; areas: readonly MapArea[]; className?: string }) {
-  const [boundaries, setBoundaries] = useState<OfflineBoundaries | null>(null);
-  useEffect(() => {
-    let live = true;
-    loadOfflineBoundaries().then(
-      (loaded) => {
-        if (live) setBoundaries(loaded);
-      },
-      () => undefined,
-    );
-    return () => {
-      live = false;
-    };
-  }, []);
+  const { boundaries } = useOfflineBoundaries();
 
   return (
     <div className={className} role="region" aria-label={label}>
@@ -63,12 +26,10 @@ export function RiskAreaMap({ label, bounds, areas, className }: { label: string
         scrollWheelZoom={false}
         attributionControl={false}
       >
-        <FitBounds bounds={bounds} />
+        <FitBounds bounds={bounds} padding={10} />
         {boundaries ? (
           <Pane name="boundaries" style={{ zIndex: 450, pointerEvents: 'none' }}>
-            <Boundary feature={boundaries.counties} style={boundaryStyle.counties} />
-            <Boundary feature={boundaries.states} style={boundaryStyle.states} />
-            <Boundary feature={boundaries.nation} style={boundaryStyle.nation} />
+            <BoundaryLines boundaries={boundaries} />
           </Pane>
         ) : null}
         {areas.map((area) => (
