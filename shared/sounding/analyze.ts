@@ -11,10 +11,11 @@ import {
   type ParcelResult,
 } from './parcel';
 import { buildProfile } from './profile';
+import { qualityFlags, type QualityFlag } from './quality-flags';
 import type { SoundingLevel } from './types';
 import { ENGINE_VERSION } from './version';
 
-/** The full analysis of a sounding. The first keys are the contract of SCIENCE.md. */
+/** The full analysis of a sounding. The first keys are the contract of docs/analysis.md. */
 export interface SoundingAnalysis {
   surfaceBased: ParcelResult;
   mixedLayer: ParcelResult;
@@ -31,31 +32,38 @@ export interface SoundingAnalysis {
   environment: EnvironmentAnalysis;
   kinematics: KinematicsAnalysis;
   composites: CompositesAnalysis;
+  /** Quality flags: what in the data or the results deserves caution (never NaN, never silent). */
+  flags: QualityFlag[];
   /** Version of the engine that made this analysis (cache key). */
   engineVersion: string;
 }
 
 /** Options of {@link analyzeSounding}. */
-export type AnalysisOptions = ParcelOptions;
+export interface AnalysisOptions extends ParcelOptions {
+  /** Latitude, degrees north: below 0 the left mover is the cyclonic deviant one (Bunkers2000). */
+  latitude?: number | null;
+}
 
 /**
  * Analyse a sounding: three parcels, environment, kinematics and composites.
  *
  * @param levels - validated sounding levels (any order; see parseSoundingCsv / validateSounding)
  * @param options - `{trace: true}` adds parcel traces; `moistAscent: 'reference'` uses the
- *   slow RK4 integration instead of the table
+ *   slow RK4 integration instead of the table; `latitude` picks the hemisphere's deviant mover
  * @returns {@link SoundingAnalysis}: numbers or null, never NaN
  * @example analyzeSounding(parsed.levels).mostUnstable.cape // → J kg⁻¹
- * Notes: methods and sources per quantity in shared/sounding/README.md.
+ * Notes: methods and sources per quantity in docs/analysis.md.
  */
 export function analyzeSounding(levels: readonly SoundingLevel[], options: AnalysisOptions = {}): SoundingAnalysis {
   const profile = buildProfile(levels);
   const surfaceBased = liftParcelOnProfile(profile, surfaceBasedStart(profile), options);
   const mixedLayer = liftParcelOnProfile(profile, mixedLayerStart(profile, 100), options);
-  const mostUnstable = liftParcelOnProfile(profile, levelStart(profile, mostUnstableLevelIndex(profile, 300)), options);
+  const mostUnstableIndex = mostUnstableLevelIndex(profile, 300);
+  const mostUnstable = liftParcelOnProfile(profile, levelStart(profile, mostUnstableIndex), options);
   const environment = analyzeEnvironment(profile);
-  const kinematics = analyzeKinematics(profile, mostUnstable);
+  const kinematics = analyzeKinematics(profile, mostUnstable, { latitude: options.latitude ?? null, mostUnstableIndex });
   const composites = analyzeComposites({ surfaceBased, mixedLayer, mostUnstable }, kinematics);
+  const flags = qualityFlags(profile, { surfaceBased, mixedLayer, mostUnstable }, kinematics);
   return {
     surfaceBased,
     mixedLayer,
@@ -68,6 +76,7 @@ export function analyzeSounding(levels: readonly SoundingLevel[], options: Analy
     environment,
     kinematics,
     composites,
+    flags,
     engineVersion: ENGINE_VERSION,
   };
 }

@@ -91,7 +91,16 @@ export function analyzeComposites(
   kinematics: KinematicsAnalysis,
 ): CompositesAnalysis {
   const { surfaceBased, mixedLayer, mostUnstable } = parcels;
-  const k = kinematics;
+  // South of the equator the cyclonic (left) mover has negative helicity; the composites take
+  // the helicity of the cyclonic mover with its sign turned so supportive values stay positive
+  // in both hemispheres (docs/analysis.md).
+  const sign = kinematics.deviantMover === 'left' ? -1 : 1;
+  const k = {
+    ...kinematics,
+    effectiveSrh: kinematics.effectiveSrh === null ? null : sign * kinematics.effectiveSrh,
+    srh0to3km: kinematics.srh0to3km === null ? null : sign * kinematics.srh0to3km,
+    srh0to1km: kinematics.srh0to1km === null ? null : sign * kinematics.srh0to1km,
+  };
   return {
     supercellComposite:
       k.effectiveSrh !== null && k.effectiveBulkShear !== null ? supercellComposite(mostUnstable.cape, k.effectiveSrh, k.effectiveBulkShear) : null,

@@ -19,15 +19,17 @@ function levelsOf(temperatureC: (p: number) => number, mixing: (p: number) => nu
   return levels;
 }
 
-describe('precipitableWater ((1/ρw g) ∫ w dp, standard texts)', () => {
-  it('is w·Δp/g for a constant mixing ratio: 0.001 · 50000 Pa / 9.80665 = 5.10 mm', () => {
+describe('precipitableWater ((1/ρw g) ∫ q dp with specific humidity, WallaceHobbs2006 pg. 80)', () => {
+  // Hand calculation: w = 1 g/kg → q = w/(1 + w) = 0.001/1.001 = 0.000999; over 50000 Pa
+  // with ρw = 1000 kg m⁻³: PW = 0.000999 · 50000 / (1000 · 9.80665) m = 5.0935 mm.
+  it('is q·Δp/(ρw g) for a constant mixing ratio: 0.000999 · 50000 Pa / 9.80665 = 5.09 mm', () => {
     const profile = buildProfile(levelsOf((p) => 20 - (1000 - p) * 0.08, () => 0.001, 500));
-    expect(precipitableWater(profile)).toBeCloseTo((0.001 * 50000) / 9.80665, 2);
+    expect(precipitableWater(profile)).toBeCloseTo(5.0935, 2);
   });
 
   it('stops at the top of the moisture data', () => {
     const levels = levelsOf((p) => 20 - (1000 - p) * 0.08, () => 0.001, 500).map((level) => (level.pressureHpa < 600 ? { ...level, dewpointC: null } : level));
-    expect(precipitableWater(buildProfile(levels))).toBeCloseTo((0.001 * 40000) / 9.80665, 2);
+    expect(precipitableWater(buildProfile(levels))).toBeCloseTo(4.0748, 2) // 0.000999 · 40000 / 9.80665 = 4.0748 mm (hand calculation);
   });
 });
 

@@ -2,7 +2,7 @@ import * as constants from './constants';
 import { dewpointFromMixingRatio } from './mixing-ratio';
 import { pseudoAdiabatTable } from './moist-adiabat';
 import { finiteOrNull, mixedLayerStart } from './parcel';
-import { heightAtPressure, valueAtHeight, valueAtPressure, type Profile } from './profile';
+import { heightAtPressure, layerIndexAtPressure, valueAtHeight, valueAtPressure, type Profile } from './profile';
 import { saturationVaporPressure } from './saturation';
 import { equivalentPotentialTemperatureFromMixingRatio } from './thermo';
 import { lclTemperature } from './lcl';
@@ -37,7 +37,7 @@ export interface EnvironmentAnalysis {
   wetBulbZeroHeight: number | null;
   /** Downdraft CAPE, J kg⁻¹ (≥ 0). */
   downdraftCape: number | null;
-  /** Pressure of the downdraft parcel's source (minimum θₑ in the lowest 400 hPa), hPa. */
+  /** Pressure of the downdraft parcel's source (centre of the 100 hPa layer of lowest mean θₑ in the lowest 400 hPa), hPa. */
   downdraftParcelPressure: number | null;
 }
 
@@ -45,14 +45,20 @@ export interface EnvironmentAnalysis {
  * Precipitable water: depth of liquid water if all the vapour of the column condensed.
  * @param profile - the prepared environment
  * @returns precipitable water, mm, from the surface to the top of the moisture data
- * Notes: PW = (1/(ρ_w g)) ∫ w dp (SCIENCE.md; WallaceHobbs2006 pg. 80 gives the same with
- * specific humidity), trapezoid rule in p, p in Pa; the result in m ×1000 → mm.
+ * Notes: PW = (1/(ρ_w g)) ∫ q dp with the specific humidity q = w/(1 + w) (the mass of
+ * vapour per mass of moist air; WallaceHobbs2006 pg. 80 and eq. 3.57), trapezoid rule in p,
+ * p in Pa; the result in m ×1000 → mm. Using w instead of q would overstate PW by about w
+ * (2 % at 20 g kg⁻¹).
  */
 export function precipitableWater(profile: Profile): number {
   let sum = 0;
+  const q = (k: number): number => {
+    const w = profile.mixingRatio[k] as number;
+    return w / (1 + w);
+  };
   for (let k = 1; k <= profile.moistureTopIndex; k++) {
     const dpPa = ((profile.pressureHpa[k - 1] as number) - (profile.pressureHpa[k] as number)) * 100;
-    sum += 0.5 * ((profile.mixingRatio[k - 1] as number) + (profile.mixingRatio[k] as number)) * dpPa;
+    sum += 0.5 * (q(k - 1) + q(k)) * dpPa;
   }
   return (sum / (1000 * GRAVITY)) * 1000;
 }
@@ -73,49 +79,99 @@ function zeroCrossingHeight(profile: Profile, values: Float64Array, lastIndex: n
   return NaN;
 }
 
+/** Depth of the layer whose mean θₑ picks the downdraft source, hPa. */
+export const DOWNDRAFT_LAYER_DEPTH_HPA = 100;
+/** How deep above the ground the downdraft source is searched, hPa (GilmoreWicker1998 pg. 945). */
+export const DOWNDRAFT_SEARCH_DEPTH_HPA = 400;
+
 /**
  * Downdraft CAPE: the negative buoyancy a saturated downdraft gains sinking to the ground.
  * @param profile - the prepared environment
- * @returns `{dcape, pressure}`: J kg⁻¹ (≥ 0) and the source pressure, hPa
- * Notes: source = level of minimum θₑ (Bolton1980 eq. 39) in the lowest 400 hPa; the parcel
- * starts at that level's wet-bulb temperature and descends along the pseudo-adiabat, kept
- * saturated; DCAPE = ∫ g (Tᵥ,env − Tᵥ,parcel)/Tᵥ,env dz from the ground to the source
- * (GilmoreWicker1998 pg. 945). Net area, floored at 0.
+ * @returns `{dcape, pressure}`: J kg⁻¹ (≥ 0) and the source pressure (centre of the layer), hPa
+ * Notes: the source is the 100 hPa deep layer with the lowest pressure-weighted mean θₑ
+ * (Bolton1980 eq. 39) whose centre lies in the lowest 400 hPa (GilmoreWicker1998 pg. 945
+ * take the minimum θₑ in the lowest 400 hPa; averaging over 100 hPa, common practice, keeps a
+ * single dry level from deciding it). The parcel starts at the layer centre, saturated, on
+ * the pseudo-adiabat of the layer's mean wet-bulb potential temperature, and descends to the
+ * ground; DCAPE = ∫ g (Tᵥ,env − Tᵥ,parcel)/Tᵥ,env dz from the ground to the source. Net
+ * area, floored at 0.
  */
 export function downdraftCape(profile: Profile): { dcape: number; pressure: number } | null {
-  const limit = (profile.pressureHpa[0] as number) - 400;
-  let source = -1;
-  let lowest = Infinity;
-  for (let k = 0; k <= profile.moistureTopIndex; k++) {
+  const top = profile.moistureTopIndex;
+  if (top < 1) return null;
+  const table = pseudoAdiabatTable();
+  const count = top + 1;
+  const thetaE = new Float64Array(count);
+  const thetaW = new Float64Array(count);
+  for (let k = 0; k < count; k++) {
     const pk = profile.pressureHpa[k] as number;
-    if (pk < limit) break;
     const temperature = profile.temperatureK[k] as number;
     const dewpoint = profile.dewpointK[k] as number;
-    const thetaE = equivalentPotentialTemperatureFromMixingRatio(pk, temperature, profile.mixingRatio[k] as number, lclTemperature(temperature, dewpoint));
-    if (thetaE < lowest) {
-      lowest = thetaE;
-      source = k;
+    thetaE[k] = equivalentPotentialTemperatureFromMixingRatio(pk, temperature, profile.mixingRatio[k] as number, lclTemperature(temperature, dewpoint));
+    thetaW[k] = table.thetaW(wetBulbTemperature(pk, temperature, dewpoint), profile.logPressure[k] as number);
+  }
+  // Cumulative pressure-weighted integrals (trapezoid) for O(1) layer means.
+  const cumulativeE = new Float64Array(count);
+  const cumulativeW = new Float64Array(count);
+  for (let k = 1; k < count; k++) {
+    const dp = (profile.pressureHpa[k - 1] as number) - (profile.pressureHpa[k] as number);
+    cumulativeE[k] = (cumulativeE[k - 1] as number) + 0.5 * ((thetaE[k - 1] as number) + (thetaE[k] as number)) * dp;
+    cumulativeW[k] = (cumulativeW[k - 1] as number) + 0.5 * ((thetaW[k - 1] as number) + (thetaW[k] as number)) * dp;
+  }
+  const surface = profile.pressureHpa[0] as number;
+  const half = DOWNDRAFT_LAYER_DEPTH_HPA / 2;
+  const integralAt = (cumulative: Float64Array, values: Float64Array, pressure: number): number => {
+    const i = layerIndexAtPressure(profile, pressure);
+    if (i < 0 || i >= top) return NaN;
+    const p0 = profile.pressureHpa[i] as number;
+    const p1 = profile.pressureHpa[i + 1] as number;
+    const fraction = (p0 - pressure) / (p0 - p1);
+    const v0 = values[i] as number;
+    const vx = v0 + fraction * ((values[i + 1] as number) - v0);
+    return (cumulative[i] as number) + 0.5 * (v0 + vx) * (p0 - pressure);
+  };
+  let best = -1;
+  let lowest = Infinity;
+  let bestThetaW = NaN;
+  let bestPressure = NaN;
+  for (let k = 0; k < count; k++) {
+    const centre = profile.pressureHpa[k] as number;
+    if (centre < surface - DOWNDRAFT_SEARCH_DEPTH_HPA) break;
+    const bottom = Math.min(surface, centre + half);
+    const upper = bottom - DOWNDRAFT_LAYER_DEPTH_HPA;
+    const meanE = (integralAt(cumulativeE, thetaE, upper) - integralAt(cumulativeE, thetaE, bottom)) / DOWNDRAFT_LAYER_DEPTH_HPA;
+    if (!Number.isFinite(meanE)) break;
+    if (meanE < lowest) {
+      lowest = meanE;
+      best = k;
+      bestThetaW = (integralAt(cumulativeW, thetaW, upper) - integralAt(cumulativeW, thetaW, bottom)) / DOWNDRAFT_LAYER_DEPTH_HPA;
+      bestPressure = bottom - half;
     }
   }
-  if (source <= 0) return source === 0 ? { dcape: 0, pressure: profile.pressureHpa[0] as number } : null;
-  const table = pseudoAdiabatTable();
-  const sourcePressure = profile.pressureHpa[source] as number;
-  const wetBulb = wetBulbTemperature(sourcePressure, profile.temperatureK[source] as number, profile.dewpointK[source] as number);
-  const thetaW = table.thetaW(wetBulb, profile.logPressure[source] as number);
-  const buoyancy = (k: number): number => {
-    const pk = profile.pressureHpa[k] as number;
-    const temperature = table.temperature(thetaW, profile.logPressure[k] as number);
+  if (best < 0) return null;
+  const sourcePressure = bestPressure;
+  const sourceHeight = heightAtPressure(profile, sourcePressure);
+  const buoyancy = (pressure: number, logPressure: number, envVirtual: number): number => {
+    const temperature = table.temperature(bestThetaW, logPressure);
     const es = saturationVaporPressure(temperature);
-    const ws = (EPSILON * es) / (pk - es);
+    const ws = (EPSILON * es) / (pressure - es);
     const parcelVirtual = (temperature * (ws + EPSILON)) / (EPSILON * (1 + ws));
-    const envVirtual = profile.virtualTemperatureK[k] as number;
     return (GRAVITY * (envVirtual - parcelVirtual)) / envVirtual;
   };
   let sum = 0;
-  let previous = buoyancy(0);
-  for (let k = 1; k <= source; k++) {
-    const current = buoyancy(k);
-    sum += 0.5 * (previous + current) * ((profile.heightAglM[k] as number) - (profile.heightAglM[k - 1] as number));
+  let previous = buoyancy(profile.pressureHpa[0] as number, profile.logPressure[0] as number, profile.virtualTemperatureK[0] as number);
+  for (let k = 1; k < profile.count; k++) {
+    const pk = profile.pressureHpa[k] as number;
+    const zk = profile.heightAglM[k] as number;
+    const z0 = profile.heightAglM[k - 1] as number;
+    if (pk <= sourcePressure) {
+      const envAtSource = valueAtPressure(profile, profile.virtualTemperatureK, sourcePressure);
+      const current = buoyancy(sourcePressure, Math.log(sourcePressure), envAtSource);
+      sum += 0.5 * (previous + current) * (sourceHeight - z0);
+      break;
+    }
+    const current = buoyancy(pk, profile.logPressure[k] as number, profile.virtualTemperatureK[k] as number);
+    sum += 0.5 * (previous + current) * (zk - z0);
     previous = current;
   }
   return { dcape: Math.max(0, sum), pressure: sourcePressure };

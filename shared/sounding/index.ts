@@ -25,6 +25,7 @@ export {
   type ParcelTracePoint,
 } from './parcel';
 export * from './parse-csv';
+export * from './quality-flags';
 export * from './saturation';
 export * from './thermo';
 export * from './types';

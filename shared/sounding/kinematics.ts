@@ -1,5 +1,5 @@
 import * as constants from './constants';
-import { finiteOrNull, meetsEffectiveInflowCriteria, type ParcelResult } from './parcel';
+import { finiteOrNull, meetsEffectiveInflowCriteria, mostUnstableLevelIndex, type ParcelResult } from './parcel';
 import type { Profile } from './profile';
 
 // Constants copied once at load (fast access in hot loops).
@@ -28,11 +28,20 @@ export interface KinematicsAnalysis {
   meanWind0to6km: WindVector | null;
   stormMotionRight: WindVector | null;
   stormMotionLeft: WindVector | null;
-  /** Storm-relative helicity for the right-moving storm, m² s⁻². */
+  /**
+   * Which Bunkers mover is the cyclonic deviant one the helicity uses: the right mover in the
+   * Northern Hemisphere, the left mover in the Southern (latitude < 0; Bunkers2000 pg. 62).
+   */
+  deviantMover: 'right' | 'left';
+  /** Motion of the cyclonic deviant mover, m s⁻¹. */
+  stormMotionDeviant: WindVector | null;
+  /** True when the lowest level had no wind and the lowest reported wind stood in for it. */
+  surfaceWindSubstituted: boolean;
+  /** Storm-relative helicity for the cyclonic deviant mover (right mover north of the equator), m² s⁻². */
   srh0to1km: number | null;
   srh0to3km: number | null;
   effectiveInflowLayer: EffectiveInflowLayer | null;
-  /** SRH of the effective inflow layer (right mover), m² s⁻²; 0 when there is no effective layer. */
+  /** SRH of the effective inflow layer (deviant mover), m² s⁻²; 0 when there is no effective layer. */
   effectiveSrh: number | null;
   /** Bulk shear from the effective inflow base to half the MU equilibrium-level height, m s⁻¹. */
   effectiveBulkShear: number | null;
@@ -50,6 +59,7 @@ interface WindProfile {
 
 function windProfile(profile: Profile): WindProfile {
   const result: WindProfile = { height: [], u: [], v: [], density: [] };
+  const surfaceDensity = ((profile.pressureHpa[0] as number) * 100) / (RD * (profile.virtualTemperatureK[0] as number));
   for (let k = 0; k < profile.count; k++) {
     const u = profile.uMs[k] as number;
     const v = profile.vMs[k] as number;
@@ -58,6 +68,14 @@ function windProfile(profile: Profile): WindProfile {
     result.u.push(u);
     result.v.push(v);
     result.density.push(((profile.pressureHpa[k] as number) * 100) / (RD * (profile.virtualTemperatureK[k] as number)));
+  }
+  // No wind at the lowest level: the lowest reported wind stands in for it (flagged by the
+  // analysis), so shear and helicity are computed instead of all turning null.
+  if (result.height.length > 0 && (result.height[0] as number) > 0) {
+    result.height.unshift(0);
+    result.u.unshift(result.u[0] as number);
+    result.v.unshift(result.v[0] as number);
+    result.density.unshift(surfaceDensity);
   }
   return result;
 }
@@ -129,9 +147,11 @@ function meanWind(winds: WindProfile, bottom: number, top: number, densityWeight
 
 /**
  * Bunkers storm motion: right- and left-moving supercells.
- * Notes: V = V_mean ± D (k̂ × S)/|S| with V_mean the 0–6 km non-pressure-weighted mean wind,
- * S the shear from the 0–0.5 km mean wind to the 5.5–6 km mean wind, D = 7.5 m s⁻¹; the
- * right mover deviates to the right of S. Source: Bunkers2000 eq. 1 and pg. 66.
+ * Notes: V_right = V_mean + D (S × k̂)/|S| and V_left = V_mean − D (S × k̂)/|S|, with V_mean
+ * the 0–6 km non-pressure-weighted mean wind, S the shear vector from the 0–0.5 km mean wind
+ * to the 5.5–6 km mean wind, k̂ the upward unit vector and D = 7.5 m s⁻¹. S × k̂ = (S_v, −S_u)
+ * points 90° to the right of S, so the right mover deviates to the right of the shear.
+ * Source: Bunkers2000 eq. 1 and pg. 66.
  */
 function bunkersMotion(winds: WindProfile): { right: WindVector; left: WindVector; mean: WindVector } | null {
   const mean = meanWind(winds, 0, 6000);
@@ -169,24 +189,48 @@ function stormRelativeHelicity(winds: WindProfile, bottom: number, top: number, 
 }
 
 /**
- * The effective inflow layer: the lowest contiguous layer of levels whose parcels have
- * CAPE ≥ 100 J kg⁻¹ and CIN ≥ −250 J kg⁻¹ (Thompson2007 pg. 104).
- * The search for its base covers the lowest 300 hPa (the most-unstable layer); once a base
- * is found the layer extends up to the last level before one that fails.
+ * The effective inflow layer: the layer of levels whose parcels have CAPE ≥ 100 J kg⁻¹ and
+ * CIN ≥ −250 J kg⁻¹ (Thompson2007 pg. 104), containing the most-unstable level.
+ *
+ * Bisection from the most-unstable level (the level of highest θₑ in the lowest 300 hPa):
+ * when its parcel fails, there is no layer; otherwise the base is found by bisection between
+ * the surface and that level and the top by bisection between that level and the top of the
+ * moisture data, each step lifting one parcel. Work: O(n log n) for n levels, instead of a
+ * parcel from every level. It assumes, as the layer's definition does, that the levels
+ * meeting the criteria form one contiguous layer around the most-unstable level.
+ * @param profile - the prepared environment
+ * @param mostUnstableIndex - index of the most-unstable level
+ * @returns the layer, or null when the most-unstable parcel fails the criteria
  */
-export function effectiveInflowLayer(profile: Profile): EffectiveInflowLayer | null {
-  const limit = (profile.pressureHpa[0] as number) - 300;
-  let bottom = -1;
-  for (let k = 0; k <= profile.moistureTopIndex; k++) {
-    if (bottom < 0 && (profile.pressureHpa[k] as number) < limit) break;
-    const meets = meetsEffectiveInflowCriteria(profile, k);
-    if (bottom < 0) {
-      if (meets) bottom = k;
-    } else if (!meets) {
-      return layerOf(profile, bottom, k - 1);
+export function effectiveInflowLayer(profile: Profile, mostUnstableIndex = mostUnstableLevelIndex(profile, 300)): EffectiveInflowLayer | null {
+  const top = profile.moistureTopIndex;
+  if (top < 0 || mostUnstableIndex > top || !meetsEffectiveInflowCriteria(profile, mostUnstableIndex)) return null;
+  let bottom = mostUnstableIndex;
+  if (mostUnstableIndex > 0) {
+    if (meetsEffectiveInflowCriteria(profile, 0)) bottom = 0;
+    else {
+      let fails = 0;
+      let passes = mostUnstableIndex;
+      while (passes - fails > 1) {
+        const middle = (fails + passes) >> 1;
+        if (meetsEffectiveInflowCriteria(profile, middle)) passes = middle;
+        else fails = middle;
+      }
+      bottom = passes;
     }
   }
-  return bottom < 0 ? null : layerOf(profile, bottom, profile.moistureTopIndex);
+  let upper = top;
+  if (top > mostUnstableIndex && !meetsEffectiveInflowCriteria(profile, top)) {
+    let passes = mostUnstableIndex;
+    let fails = top;
+    while (fails - passes > 1) {
+      const middle = (fails + passes) >> 1;
+      if (meetsEffectiveInflowCriteria(profile, middle)) passes = middle;
+      else fails = middle;
+    }
+    upper = passes;
+  }
+  return layerOf(profile, bottom, upper);
 }
 
 function layerOf(profile: Profile, bottom: number, top: number): EffectiveInflowLayer {
@@ -198,19 +242,31 @@ function layerOf(profile: Profile, bottom: number, top: number): EffectiveInflow
   };
 }
 
+/** Options of {@link analyzeKinematics}. */
+export interface KinematicsOptions {
+  /** Latitude of the sounding, degrees north; below 0 the left mover is the deviant one. Default: northern. */
+  latitude?: number | null;
+  /** Index of the most-unstable level (saves finding it again). */
+  mostUnstableIndex?: number;
+}
+
 /**
  * Analyse the wind profile: shear, storm motion, helicity and the effective inflow layer.
  * @param profile - the prepared environment
  * @param mostUnstable - the most-unstable parcel (its EL sets the effective bulk shear depth)
+ * @param options - latitude (hemisphere of the deviant mover) and the most-unstable level
  * @returns {@link KinematicsAnalysis}
  */
-export function analyzeKinematics(profile: Profile, mostUnstable: ParcelResult): KinematicsAnalysis {
+export function analyzeKinematics(profile: Profile, mostUnstable: ParcelResult, options: KinematicsOptions = {}): KinematicsAnalysis {
   const winds = windProfile(profile);
+  const surfaceWindSubstituted = winds.height.length > 0 && Number.isNaN(profile.uMs[0] as number);
   const motion = bunkersMotion(winds);
-  const layer = effectiveInflowLayer(profile);
+  const deviantMover = options.latitude !== undefined && options.latitude !== null && options.latitude < 0 ? 'left' : 'right';
+  const deviant = motion ? (deviantMover === 'left' ? motion.left : motion.right) : null;
+  const layer = effectiveInflowLayer(profile, options.mostUnstableIndex);
   let effectiveSrh: number | null = null;
   let effectiveBulkShear: number | null = null;
-  if (motion) effectiveSrh = layer ? finiteOrNull(stormRelativeHelicity(winds, layer.bottomHeight, layer.topHeight, motion.right)) : 0;
+  if (deviant) effectiveSrh = layer ? finiteOrNull(stormRelativeHelicity(winds, layer.bottomHeight, layer.topHeight, deviant)) : 0;
   if (layer && mostUnstable.elHeight !== null) {
     const top = layer.bottomHeight + 0.5 * (mostUnstable.elHeight - layer.bottomHeight);
     effectiveBulkShear = finiteOrNull(bulkShear(winds, layer.bottomHeight, top));
@@ -227,8 +283,11 @@ export function analyzeKinematics(profile: Profile, mostUnstable: ParcelResult):
     meanWind0to6km: motion ? motion.mean : null,
     stormMotionRight: motion ? motion.right : null,
     stormMotionLeft: motion ? motion.left : null,
-    srh0to1km: motion ? finiteOrNull(stormRelativeHelicity(winds, 0, 1000, motion.right)) : null,
-    srh0to3km: motion ? finiteOrNull(stormRelativeHelicity(winds, 0, 3000, motion.right)) : null,
+    deviantMover,
+    stormMotionDeviant: deviant,
+    surfaceWindSubstituted,
+    srh0to1km: deviant ? finiteOrNull(stormRelativeHelicity(winds, 0, 1000, deviant)) : null,
+    srh0to3km: deviant ? finiteOrNull(stormRelativeHelicity(winds, 0, 3000, deviant)) : null,
     effectiveInflowLayer: layer,
     effectiveSrh,
     effectiveBulkShear,

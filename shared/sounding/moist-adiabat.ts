@@ -46,7 +46,7 @@ export function pseudoAdiabaticLapseRate(pressureHpa: number, temperatureK: numb
  * @param startPressureHpa - pressure where the saturated parcel starts, hPa
  * @param startTemperatureK - its temperature, K
  * @param endPressureHpa - pressure to follow the curve to (above or below), hPa
- * @param maxStepHpa - largest RK4 step, hPa (default 1 hPa; SCIENCE.md asks ≤ 5 hPa)
+ * @param maxStepHpa - largest RK4 step, hPa (default 1 hPa)
  * @returns temperature at endPressureHpa, K
  * @example moistAdiabatTemperature(1000, 293.15, 500) // → 264.4 K
  * Notes: integrates {@link pseudoAdiabaticLapseRate} with the classic RK4 scheme
@@ -143,11 +143,20 @@ export class PseudoAdiabatTable {
    * @returns temperature, K
    */
   temperature(thetaWK: number, logPressure: number): number {
+    const inside = this.temperatureInTable(thetaWK, logPressure);
+    return Number.isNaN(inside) ? moistAdiabatTemperature(1000, thetaWK, Math.exp(logPressure)) : inside;
+  }
+
+  /**
+   * Temperature on the pseudo-adiabat labelled θ_w at a pressure, from the table only.
+   * @param thetaWK - wet-bulb potential temperature of the curve, K
+   * @param logPressure - natural logarithm of the pressure in hPa
+   * @returns temperature, K; NaN outside the table (see {@link PseudoAdiabatPath})
+   */
+  temperatureInTable(thetaWK: number, logPressure: number): number {
     const x = (LOG_TABLE_BOTTOM - logPressure) / TABLE_LOG_STEP;
     const y = (thetaWK - TABLE_THETA_W_MIN_K) / TABLE_THETA_W_STEP_K;
-    if (!(x >= 0 && x <= TABLE_PRESSURE_NODES - 1 && y >= 0 && y <= TABLE_THETA_W_NODES - 1)) {
-      return moistAdiabatTemperature(1000, thetaWK, Math.exp(logPressure));
-    }
+    if (!(x >= 0 && x <= TABLE_PRESSURE_NODES - 1 && y >= 0 && y <= TABLE_THETA_W_NODES - 1)) return NaN;
     const j = Math.min(Math.floor(x), TABLE_PRESSURE_NODES - 2);
     const i = Math.min(Math.floor(y), TABLE_THETA_W_NODES - 2);
     const fx = x - j;
@@ -196,6 +205,51 @@ export class PseudoAdiabatTable {
     const tHigh = this.atNode(high, j, fx);
     const fraction = tHigh > tLow ? (temperatureK - tLow) / (tHigh - tLow) : 0;
     return TABLE_THETA_W_MIN_K + (low + fraction) * TABLE_THETA_W_STEP_K;
+  }
+}
+
+/**
+ * One parcel's walk along a pseudo-adiabat, level after level, in either direction.
+ *
+ * Inside the table it interpolates; outside it (θ_w beyond −70..+50 °C or pressure beyond
+ * 1100..9.9 hPa) it continues the RK4 integration from the previous point of the walk, so
+ * the work over a whole ascent is bounded by the pressure span (one step per hPa at most),
+ * never a new integration from 1000 hPa at each level.
+ */
+export class PseudoAdiabatPath {
+  private lastPressure: number;
+  private lastTemperature: number;
+
+  /**
+   * @param table - the shared table
+   * @param startPressureHpa - a saturated point of the curve: pressure, hPa
+   * @param startTemperatureK - and its temperature, K
+   */
+  constructor(
+    private readonly table: PseudoAdiabatTable,
+    startPressureHpa: number,
+    startTemperatureK: number,
+  ) {
+    this.lastPressure = startPressureHpa;
+    this.lastTemperature = startTemperatureK;
+    this.thetaWK = table.thetaW(startTemperatureK, Math.log(startPressureHpa));
+  }
+
+  /** Wet-bulb potential temperature of the curve, K. */
+  readonly thetaWK: number;
+
+  /**
+   * Temperature of the curve at the next pressure of the walk.
+   * @param pressureHpa - pressure, hPa
+   * @param logPressure - its natural logarithm (given to save a logarithm in hot loops)
+   * @returns temperature, K
+   */
+  temperatureAt(pressureHpa: number, logPressure: number): number {
+    let temperature = this.table.temperatureInTable(this.thetaWK, logPressure);
+    if (Number.isNaN(temperature)) temperature = moistAdiabatTemperature(this.lastPressure, this.lastTemperature, pressureHpa, 1);
+    this.lastPressure = pressureHpa;
+    this.lastTemperature = temperature;
+    return temperature;
   }
 }
 

@@ -1,7 +1,7 @@
 import { EPSILON, GRAVITY, KAPPA, ZERO_CELSIUS_K } from './constants';
 import { lclTemperature } from './lcl';
 import { dewpointFromMixingRatio, mixingRatio } from './mixing-ratio';
-import { moistAdiabatTemperature, pseudoAdiabatTable, type MoistAscentMethod } from './moist-adiabat';
+import { moistAdiabatTemperature, PseudoAdiabatPath, pseudoAdiabatTable, type MoistAscentMethod } from './moist-adiabat';
 import { buildProfile, layerIndexAtPressure, valueAtPressure, type Profile } from './profile';
 import { saturationVaporPressure } from './saturation';
 import { equivalentPotentialTemperatureFromMixingRatio } from './thermo';
@@ -27,7 +27,7 @@ export interface ParcelResult {
   parcelDewpointC: number;
   /** Convective available potential energy: positive area from LFC to EL, J kg⁻¹ (≥ 0). */
   cape: number;
-  /** Convective inhibition: negative area from the start to the LFC, J kg⁻¹ (≤ 0). */
+  /** Convective inhibition: all negative area from the start to the LFC, J kg⁻¹ (≤ 0). */
   cin: number;
   /** Lifted condensation level pressure, hPa. */
   lclPressure: number;
@@ -35,16 +35,24 @@ export interface ParcelResult {
   lclHeight: number | null;
   /** Temperature at the LCL, °C. */
   lclTemperature: number;
-  /** Level of free convection, hPa; null when the parcel never becomes buoyant. */
+  /** Level of free convection: base of the positive area holding the most energy, hPa; null when the parcel never becomes buoyant. */
   lfcPressure: number | null;
   lfcHeight: number | null;
-  /** Equilibrium level, hPa; null without LFC or when still buoyant at the top of the data. */
+  /** Equilibrium level: the highest crossing above the LFC, hPa; null without LFC or when still buoyant at the top of the data. */
   elPressure: number | null;
   elHeight: number | null;
   /** Environment minus parcel temperature at 500 hPa, K (positive: stable); null if not computable. */
   liftedIndex: number | null;
+  /** Lifted index from virtual temperatures at 500 hPa (Tᵥ,env − Tᵥ,parcel), K; null if not computable. */
+  liftedIndexVirtual: number | null;
   /** CAPE below 3 km above ground, J kg⁻¹. */
   cape0to3km: number;
+  /** Positive area between the start and the LFC (counted in neither CAPE nor CIN), J kg⁻¹ (≥ 0). */
+  positiveAreaBelowLfc: number;
+  /** Negative area between the LFC and the EL (counted in neither CAPE nor CIN), J kg⁻¹ (≤ 0). */
+  negativeAreaLfcToEl: number;
+  /** True when the parcel is still buoyant at the top of the data: CAPE is cut there and EL is null. */
+  capeClippedAtTop: boolean;
   /** The parcel path, only when asked for with `{trace: true}`. */
   trace?: ParcelTracePoint[];
 }
@@ -88,14 +96,15 @@ export const EFFECTIVE_CIN_MIN = -250;
 /**
  * Lift a parcel through a prepared profile: the core of every parcel in the engine.
  *
- * Method (Doswell and Rasmussen 1994; conventions of SCIENCE.md): the parcel keeps its
+ * Method (DoswellRasmussen1994; conventions in docs/analysis.md): the parcel keeps its
  * potential temperature and mixing ratio up to the LCL (Bolton1980 eq. 15), then follows the
  * pseudo-adiabat, saturated, with no condensate loading. Buoyancy
  * B = g (Tᵥ,parcel − Tᵥ,env) / Tᵥ,env is integrated in height with the trapezoid rule, the
- * LCL inserted as a point and zero crossings found by linear interpolation. CAPE is the
- * positive area above the LCL between the lowest LFC and the highest EL; CIN the negative
- * area from the start to the LFC; negative layers between positive areas count in neither.
- * When `effectiveCheck` is set, it stops as soon as the Thompson2007 criteria are decided.
+ * LCL inserted as a point and zero crossings found by linear interpolation. The LFC is the
+ * base of the positive area (above the LCL) that holds the most energy; the EL the highest
+ * crossing above it; CAPE the positive area between them; CIN all negative area from the
+ * start to the LFC. When `effectiveCheck` is set, it stops as soon as the parcel is sure to
+ * fail the Thompson2007 criteria (CIN already below −250 J kg⁻¹ before any positive area).
  */
 function ascend(profile: Profile, start: ParcelStart, options: ParcelOptions, effectiveCheck: boolean): AscentOutcome {
   const table = (options.moistAscent ?? 'table') === 'table' ? pseudoAdiabatTable() : undefined;
@@ -116,7 +125,7 @@ function ascend(profile: Profile, start: ParcelStart, options: ParcelOptions, ef
   const temperatureLcl = lclTemperature(startTemperature, startDewpoint);
   const logPressureLcl = startLogPressure + Math.log(temperatureLcl / startTemperature) / K;
   const pressureLcl = Math.exp(logPressureLcl);
-  const thetaW = table ? table.thetaW(temperatureLcl, logPressureLcl) : NaN;
+  const path = table ? new PseudoAdiabatPath(table, pressureLcl, temperatureLcl) : undefined;
   let referencePressure = pressureLcl;
   let referenceTemperature = temperatureLcl;
 
@@ -157,18 +166,14 @@ function ascend(profile: Profile, start: ParcelStart, options: ParcelOptions, ef
     let parcelTemperature: number;
     let parcelVirtual: number;
     if (areas.aboveLcl) {
-      if (table) {
-        parcelTemperature = table.temperature(thetaW, lnpk);
+      if (path) {
+        parcelTemperature = path.temperatureAt(pk, lnpk);
       } else {
         referenceTemperature = moistAdiabatTemperature(referencePressure, referenceTemperature, pk, 1);
         referencePressure = pk;
         parcelTemperature = referenceTemperature;
       }
-      // Saturated: wₛ from eₛ of Bolton1980 eq. 10 (written out: hot loop).
-      const temperatureC = parcelTemperature - ZERO_C;
-      const es = 6.112 * Math.exp((17.67 * temperatureC) / (temperatureC + 243.5));
-      const ws = (EPS * es) / (pk - es);
-      parcelVirtual = (parcelTemperature * (ws + EPS)) / (EPS * (1 + ws));
+      parcelVirtual = saturatedVirtualTemperature(parcelTemperature, pk);
     } else {
       parcelTemperature = theta * Math.exp(K * (lnpk - LOG_1000));
       parcelVirtual = parcelTemperature * vaporFactor;
@@ -178,63 +183,105 @@ function ascend(profile: Profile, start: ParcelStart, options: ParcelOptions, ef
     if (trace) trace.push(tracePoint(pk, parcelTemperature, parcelVirtual));
   }
 
-  // Lifted index at 500 hPa (Galway1956), from temperatures (no virtual correction).
+  // Lifted index at 500 hPa (Galway1956), from temperatures, and its virtual-temperature form.
   let liftedIndex = NaN;
+  let liftedIndexVirtual = NaN;
   const top = p[count - 1] as number;
   if (!effectiveCheck && startPressure >= 500 && top <= 500) {
     const environment500 = valueAtPressure(profile, profile.temperatureK, 500);
+    const environmentVirtual500 = valueAtPressure(profile, profile.virtualTemperatureK, 500);
     let parcel500: number;
-    if (pressureLcl <= 500) parcel500 = theta * Math.exp(K * (LOG_500 - LOG_1000));
-    else if (table) parcel500 = table.temperature(thetaW, LOG_500);
-    else parcel500 = moistAdiabatTemperature(pressureLcl, temperatureLcl, 500, 1);
+    let parcelVirtual500: number;
+    if (pressureLcl <= 500) {
+      parcel500 = theta * Math.exp(K * (LOG_500 - LOG_1000));
+      parcelVirtual500 = parcel500 * vaporFactor;
+    } else {
+      parcel500 = table ? new PseudoAdiabatPath(table, pressureLcl, temperatureLcl).temperatureAt(500, LOG_500) : moistAdiabatTemperature(pressureLcl, temperatureLcl, 500, 1);
+      parcelVirtual500 = saturatedVirtualTemperature(parcel500, 500);
+    }
     liftedIndex = environment500 - parcel500;
+    liftedIndexVirtual = environmentVirtual500 - parcelVirtual500;
   }
 
-  const found = areas.lfcFound;
-  const hasEl = found && Number.isFinite(areas.elHeight);
+  const summary = areas.summary();
+  const found = summary.lfcFound;
   return {
     parcelPressure: startPressure,
     parcelTemperatureC: startTemperature - ZERO_C,
     parcelDewpointC: startDewpoint - ZERO_C,
-    cape: found ? areas.cape : 0,
-    cin: found ? Math.min(0, areas.cin) : 0,
+    cape: summary.cape,
+    cin: Math.min(0, summary.cin),
     lclPressure: pressureLcl,
     lclHeight: finiteOrNull(lclHeight),
     lclTemperature: temperatureLcl - ZERO_C,
-    lfcPressure: found ? Math.exp(areas.lfcLogPressure) : null,
-    lfcHeight: found ? areas.lfcHeight : null,
-    elPressure: hasEl ? Math.exp(areas.elLogPressure) : null,
-    elHeight: hasEl ? areas.elHeight : null,
+    lfcPressure: found ? Math.exp(summary.lfcLogPressure) : null,
+    lfcHeight: found ? summary.lfcHeight : null,
+    elPressure: found && summary.elFound ? Math.exp(summary.elLogPressure) : null,
+    elHeight: found && summary.elFound ? summary.elHeight : null,
     liftedIndex: finiteOrNull(liftedIndex),
-    cape0to3km: found ? areas.cape0to3km : 0,
+    liftedIndexVirtual: finiteOrNull(liftedIndexVirtual),
+    cape0to3km: summary.cape0to3km,
+    positiveAreaBelowLfc: summary.positiveBelowLfc,
+    negativeAreaLfcToEl: Math.min(0, summary.negativeLfcToEl),
+    capeClippedAtTop: found && !summary.elFound,
     ...(trace ? { trace } : {}),
-    meetsEffectiveCriteria: effectiveCheck
-      ? areas.meetsEffectiveCriteria
-      : found && areas.cape >= EFFECTIVE_CAPE_MIN && areas.cin >= EFFECTIVE_CIN_MIN,
+    meetsEffectiveCriteria: !areas.decided && found && summary.cape >= EFFECTIVE_CAPE_MIN && summary.cin >= EFFECTIVE_CIN_MIN,
   };
 }
 
+/** Virtual temperature of saturated air (wₛ from eₛ of Bolton1980 eq. 10; written out: hot loop), K. */
+function saturatedVirtualTemperature(temperatureK: number, pressureHpa: number): number {
+  const temperatureC = temperatureK - ZERO_C;
+  const es = 6.112 * Math.exp((17.67 * temperatureC) / (temperatureC + 243.5));
+  const ws = (EPS * es) / (pressureHpa - es);
+  return (temperatureK * (ws + EPS)) / (EPS * (1 + ws));
+}
+
+/** One positive area of buoyancy above the LCL. */
+interface PositiveArea {
+  baseZ: number;
+  baseLog: number;
+  /** All negative area from the start to the base, J kg⁻¹ (≤ 0). */
+  negativeBefore: number;
+  /** All positive area from the start to the base (including below the LCL), J kg⁻¹. */
+  positiveBefore: number;
+  area: number;
+  area0to3km: number;
+  /** Where the parcel stops being buoyant; NaN while still buoyant (at the top of the data). */
+  topZ: number;
+  topLog: number;
+}
+
+/** The areas of a finished ascent under the convention of docs/analysis.md. */
+interface AreasSummary {
+  lfcFound: boolean;
+  elFound: boolean;
+  cape: number;
+  cin: number;
+  cape0to3km: number;
+  lfcHeight: number;
+  lfcLogPressure: number;
+  elHeight: number;
+  elLogPressure: number;
+  positiveBelowLfc: number;
+  negativeLfcToEl: number;
+}
+
 /**
- * Accumulates the areas of a piecewise-linear buoyancy profile B(z) point by point, with the
- * conventions of SCIENCE.md: CAPE = positive area above the LCL (between the lowest LFC and
- * the highest EL), CIN = negative area from the start to the LFC, negative layers between
- * positive areas in neither, positive area below the LCL in neither.
+ * Accumulates the areas of a piecewise-linear buoyancy profile B(z) point by point and keeps
+ * every positive area above the LCL, so the convention can pick the one holding the most
+ * energy at the end (docs/analysis.md, "Parcel levels and areas").
  */
 class BuoyancyAreas {
-  cape = 0;
-  cin = 0;
-  cape0to3km = 0;
-  lfcFound = false;
-  lfcHeight = NaN;
-  lfcLogPressure = NaN;
-  elHeight = NaN;
-  elLogPressure = NaN;
+  private negative = 0;
+  private positive = 0;
+  private readonly positiveAreas: PositiveArea[] = [];
+  private current: PositiveArea | undefined;
   prevZ = 0;
   prevLog = 0;
   prevB = 0;
   aboveLcl = false;
   decided = false;
-  meetsEffectiveCriteria = false;
 
   constructor(private readonly effectiveCheck: boolean) {}
 
@@ -246,7 +293,7 @@ class BuoyancyAreas {
     if (atLcl) this.markLcl(z, logPressure, buoyancy);
   }
 
-  /** The LCL point: the segment below it counts for CIN only. */
+  /** The LCL point: the segment below it is never CAPE. */
   reachLcl(z: number, logPressure: number, buoyancy: number): void {
     this.add(z, logPressure, buoyancy);
     this.markLcl(z, logPressure, buoyancy);
@@ -254,11 +301,12 @@ class BuoyancyAreas {
 
   private markLcl(z: number, logPressure: number, buoyancy: number): void {
     this.aboveLcl = true;
-    if (buoyancy > 0 && !this.lfcFound) {
-      this.lfcFound = true;
-      this.lfcHeight = z;
-      this.lfcLogPressure = logPressure;
-    }
+    if (buoyancy > 0) this.open(z, logPressure);
+  }
+
+  private open(z: number, logPressure: number): void {
+    this.current = { baseZ: z, baseLog: logPressure, negativeBefore: this.negative, positiveBefore: this.positive, area: 0, area0to3km: 0, topZ: NaN, topLog: NaN };
+    this.positiveAreas.push(this.current);
   }
 
   /** The segment from the previous point to (z, ln p, B). */
@@ -266,49 +314,85 @@ class BuoyancyAreas {
     const za = this.prevZ;
     const ba = this.prevB;
     if (!this.aboveLcl) {
-      this.cin += negativeArea(za, ba, z, buoyancy);
-    } else if (!this.lfcFound) {
+      this.negative += negativeArea(za, ba, z, buoyancy);
+      this.positive += positiveArea(za, ba, z, buoyancy);
+    } else if (ba > 0 && buoyancy > 0) {
+      this.addPositive(za, ba, z, buoyancy);
+    } else if (ba <= 0 && buoyancy <= 0) {
+      this.negative += 0.5 * (ba + buoyancy) * (z - za);
+    } else {
+      const fraction = ba / (ba - buoyancy);
+      const zx = za + fraction * (z - za);
+      const logx = this.prevLog + fraction * (logPressure - this.prevLog);
       if (buoyancy > 0) {
-        const fraction = ba / (ba - buoyancy);
-        const zx = za + fraction * (z - za);
-        this.cin += negativeArea(za, ba, zx, 0);
-        this.lfcFound = true;
-        this.lfcHeight = zx;
-        this.lfcLogPressure = this.prevLog + fraction * (logPressure - this.prevLog);
+        this.negative += 0.5 * ba * (zx - za);
+        this.open(zx, logx);
         this.addPositive(zx, 0, z, buoyancy);
       } else {
-        this.cin += negativeArea(za, ba, z, buoyancy);
-      }
-    } else {
-      this.addPositive(za, ba, z, buoyancy);
-      if (buoyancy > 0) {
-        this.elHeight = NaN;
-        this.elLogPressure = NaN;
-      } else if (ba > 0) {
-        const fraction = ba / (ba - buoyancy);
-        this.elHeight = za + fraction * (z - za);
-        this.elLogPressure = this.prevLog + fraction * (logPressure - this.prevLog);
+        this.addPositive(za, ba, zx, 0);
+        if (this.current) {
+          this.current.topZ = zx;
+          this.current.topLog = logx;
+          this.current = undefined;
+        }
+        this.negative += 0.5 * buoyancy * (z - zx);
       }
     }
     this.prevZ = z;
     this.prevLog = logPressure;
     this.prevB = buoyancy;
-    if (this.effectiveCheck && !this.decided) {
-      if (!this.lfcFound && this.cin < EFFECTIVE_CIN_MIN) {
-        this.decided = true;
-      } else if (this.lfcFound && this.cape >= EFFECTIVE_CAPE_MIN) {
-        this.decided = true;
-        this.meetsEffectiveCriteria = this.cin >= EFFECTIVE_CIN_MIN;
-      }
-    }
+    if (this.effectiveCheck && this.positiveAreas.length === 0 && this.negative < EFFECTIVE_CIN_MIN) this.decided = true;
   }
 
   private addPositive(za: number, ba: number, zb: number, bb: number): void {
-    this.cape += positiveArea(za, ba, zb, bb);
+    const area = 0.5 * (ba + bb) * (zb - za);
+    this.positive += area;
+    const current = this.current;
+    if (!current) return;
+    current.area += area;
     if (za < THREE_KM) {
-      if (zb <= THREE_KM) this.cape0to3km += positiveArea(za, ba, zb, bb);
-      else this.cape0to3km += positiveArea(za, ba, THREE_KM, ba + ((THREE_KM - za) / (zb - za)) * (bb - ba));
+      if (zb <= THREE_KM) current.area0to3km += area;
+      else current.area0to3km += 0.5 * (ba + ba + ((THREE_KM - za) / (zb - za)) * (bb - ba)) * (THREE_KM - za);
     }
+  }
+
+  /** CAPE, CIN, LFC, EL and the side areas under the convention. */
+  summary(): AreasSummary {
+    const areas = this.positiveAreas;
+    let chosen = -1;
+    let largest = 0;
+    for (let i = 0; i < areas.length; i++) {
+      const area = (areas[i] as PositiveArea).area;
+      if (area > largest) {
+        largest = area;
+        chosen = i;
+      }
+    }
+    if (chosen < 0) {
+      return { lfcFound: false, elFound: false, cape: 0, cin: 0, cape0to3km: 0, lfcHeight: NaN, lfcLogPressure: NaN, elHeight: NaN, elLogPressure: NaN, positiveBelowLfc: 0, negativeLfcToEl: 0 };
+    }
+    const lfc = areas[chosen] as PositiveArea;
+    const last = areas[areas.length - 1] as PositiveArea;
+    let cape = 0;
+    let cape0to3km = 0;
+    for (let i = chosen; i < areas.length; i++) {
+      cape += (areas[i] as PositiveArea).area;
+      cape0to3km += (areas[i] as PositiveArea).area0to3km;
+    }
+    const elFound = Number.isFinite(last.topZ);
+    return {
+      lfcFound: true,
+      elFound,
+      cape,
+      cin: lfc.negativeBefore,
+      cape0to3km,
+      lfcHeight: lfc.baseZ,
+      lfcLogPressure: lfc.baseLog,
+      elHeight: last.topZ,
+      elLogPressure: last.topLog,
+      positiveBelowLfc: lfc.positiveBefore,
+      negativeLfcToEl: last.negativeBefore - lfc.negativeBefore,
+    };
   }
 }
 
@@ -393,7 +477,7 @@ export function surfaceBasedStart(profile: Profile): ParcelStart {
  * ratio of the lowest `depthHpa` (default 100 hPa), placed at the surface pressure.
  *
  * Notes: means are ∫ x dp / ∫ dp with the trapezoid rule, the layer top interpolated in ln p
- * (common practice, SCIENCE.md). Above the top of the moisture data w counts as 0.
+ * (common practice; docs/analysis.md). Above the top of the moisture data w counts as 0.
  */
 export function mixedLayerStart(profile: Profile, depthHpa = 100): ParcelStart {
   const p = profile.pressureHpa;

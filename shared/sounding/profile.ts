@@ -2,7 +2,7 @@ import * as constants from './constants';
 import type { SoundingLevel } from './types';
 
 // Constants copied once at load (fast access in hot loops).
-const { EPSILON, ZERO_CELSIUS_K } = constants;
+const { EPSILON, GRAVITY, RD, ZERO_CELSIUS_K } = constants;
 
 /**
  * The environment prepared once per analysis: plain arrays in engine units, sorted by
@@ -29,6 +29,34 @@ export interface Profile {
   moistureTopIndex: number;
   /** Elevation of the lowest level above mean sea level, m. */
   groundElevationM: number;
+  /**
+   * Largest difference between a reported height above ground and the hypsometric one, m;
+   * when it exceeds {@link heightTolerance} the hypsometric heights are used instead.
+   */
+  largestHeightDifferenceM: number;
+  /** Whether the reported heights were replaced by the hypsometric ones. */
+  heightsReplaced: boolean;
+  /** Pressure of the level with the largest height difference, hPa. */
+  largestHeightDifferencePressureHpa: number;
+}
+
+/** Fixed part of the height tolerance, m. */
+export const HEIGHT_TOLERANCE_FIXED_M = 50;
+/** Relative part of the height tolerance (fraction of the height above ground). */
+export const HEIGHT_TOLERANCE_FRACTION = 0.05;
+
+/**
+ * How far a reported height above ground may differ from the hypsometric one before the
+ * reported heights are replaced: 50 m + 5 % of the height. Our choice (common practice of
+ * consistency checks: a wide margin), several times what honest differences reach: using
+ * temperature instead of virtual temperature changes a layer thickness by about 0.5 %
+ * (WallaceHobbs2006 eq. 3.29 with w ≤ 20 g kg⁻¹), and geopotential versus geometric height
+ * by about 0.3 % at 10 km. A file in feet labelled metres is off by 228 %.
+ * @param heightAglM - hypsometric height above ground, m
+ * @returns tolerance, m
+ */
+export function heightTolerance(heightAglM: number): number {
+  return HEIGHT_TOLERANCE_FIXED_M + HEIGHT_TOLERANCE_FRACTION * Math.abs(heightAglM);
 }
 
 /**
@@ -49,7 +77,7 @@ export function sortByDecreasingPressure(levels: readonly SoundingLevel[]): read
  * Build the analysis profile from sounding levels.
  *
  * Missing dewpoints are interpolated linearly in ln p where a reported dewpoint lies both
- * below and above them (SCIENCE.md); above the last reported dewpoint the moisture profile
+ * below and above them (docs/analysis.md); above the last reported dewpoint the moisture profile
  * ends. A dewpoint above the temperature is capped at the temperature.
  * @param levels - at least two levels with distinct pressures, in any order
  * @returns the profile
@@ -117,6 +145,26 @@ export function buildProfile(levels: readonly SoundingLevel[]): Profile {
     mixing[i] = w;
     virtualTemperatureK[i] = (temperature * (w + EPSILON)) / (EPSILON * (1 + w));
   }
+  // Check the reported heights against the hypsometric equation (WallaceHobbs2006 eq. 3.29,
+  // virtual temperature linear in ln p inside a layer), and use the computed ones when any
+  // level is off by more than the tolerance.
+  const computed = new Float64Array(count);
+  let largestDifference = 0;
+  let largestAt = pressureHpa[0] as number;
+  let replace = false;
+  for (let i = 1; i < count; i++) {
+    const thickness =
+      ((RD * 0.5 * ((virtualTemperatureK[i - 1] as number) + (virtualTemperatureK[i] as number))) / GRAVITY) *
+      ((logPressure[i - 1] as number) - (logPressure[i] as number));
+    computed[i] = (computed[i - 1] as number) + thickness;
+    const difference = Math.abs((heightAglM[i] as number) - (computed[i] as number));
+    if (difference > largestDifference) {
+      largestDifference = difference;
+      largestAt = pressureHpa[i] as number;
+    }
+    if (difference > heightTolerance(computed[i] as number)) replace = true;
+  }
+  if (replace) heightAglM.set(computed);
   return {
     count,
     pressureHpa,
@@ -130,6 +178,9 @@ export function buildProfile(levels: readonly SoundingLevel[]): Profile {
     vMs,
     moistureTopIndex,
     groundElevationM: ground,
+    largestHeightDifferenceM: largestDifference,
+    heightsReplaced: replace,
+    largestHeightDifferencePressureHpa: largestAt,
   };
 }
 

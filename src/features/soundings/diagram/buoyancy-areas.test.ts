@@ -29,6 +29,10 @@ function parcel(temperatures: number[], lfcPressure: number | null, elPressure: 
     elHeight: elPressure === null ? null : 5000,
     liftedIndex: null,
     cape0to3km: 0,
+    liftedIndexVirtual: null,
+    positiveAreaBelowLfc: 0,
+    negativeAreaLfcToEl: 0,
+    capeClippedAtTop: false,
     trace: temperatures.map((temperatureC, i) => ({
       pressureHpa: 1000 - i * 100,
       temperatureC,
