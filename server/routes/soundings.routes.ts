@@ -2,11 +2,11 @@ import multer from 'multer';
 import type { NextFunction, Request, Response } from 'express';
 import { z } from 'zod';
 import { idParamSchema } from '../../shared/contracts/common';
-import { saveModifiedSoundingInputSchema, soundingLimits, soundingListQuerySchema } from '../../shared/contracts/soundings';
+import { saveModifiedSoundingInputSchema, soundingLimits, soundingListQuerySchema, updateSoundingMetadataInputSchema } from '../../shared/contracts/soundings';
 import { appError } from '../../shared/errors';
 import { access, actorOf } from '../auth/require-role';
 import { parseInput, sendError, sendResult } from '../middleware/error-handler';
-import { createSoundings, deleteSounding, getSounding, listSoundings, saveModifiedSounding, uploadSoundingFiles } from '../services/soundings.service';
+import { createSoundings, deleteSounding, getSounding, listSoundings, saveModifiedSounding, updateSoundingMetadata, uploadSoundingFiles } from '../services/soundings.service';
 import { route } from './route-definition';
 
 const soundingParamsSchema = z.object({ soundingId: idParamSchema });
@@ -104,6 +104,18 @@ export const soundingsRoutes = [
       const params = parseInput(soundingParamsSchema, req.params, 'address');
       if (!params.ok) return sendResult(res, params);
       sendResult(res, await deleteSounding(ctx.db, actorOf(res), params.value.soundingId));
+    },
+  }),
+  route({
+    method: 'patch',
+    path: '/api/soundings/:soundingId/metadata',
+    access: authors,
+    handler: async (ctx, req, res) => {
+      const params = parseInput(soundingParamsSchema, req.params, 'address');
+      if (!params.ok) return sendResult(res, params);
+      const input = parseInput(updateSoundingMetadataInputSchema, req.body);
+      if (!input.ok) return sendResult(res, input);
+      sendResult(res, await updateSoundingMetadata(ctx.db, actorOf(res), params.value.soundingId, input.value));
     },
   }),
   route({

@@ -242,7 +242,8 @@ export async function evidenceSoundings(db: DatabaseOrTransaction, validFrom: Da
     .select({ id: soundings.id, stationId: soundings.stationId, latitude: soundings.latitude, longitude: soundings.longitude, validTime: soundings.validTime, source: soundings.source, modifiedFromId: soundings.modifiedFromId, analysis: soundings.analysis })
     .from(soundings)
     .where(and(gte(soundings.validTime, validFrom), sql`${soundings.validTime} <= ${validUntil}`));
-  return rows.map((r) => ({
+  // A sounding without station, position or valid time stays out of evidence until an author fills them in.
+  return rows.flatMap((r) => (r.latitude === null || r.longitude === null || r.validTime === null || r.stationId === '' ? [] : [{
     id: r.id,
     stationId: r.stationId,
     latitude: r.latitude,
@@ -251,7 +252,7 @@ export async function evidenceSoundings(db: DatabaseOrTransaction, validFrom: Da
     source: r.source,
     modified: r.modifiedFromId !== null,
     figures: keyFigures(r.analysis as unknown as SoundingAnalysis | null),
-  }));
+  }]));
 }
 
 /**

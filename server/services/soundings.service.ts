@@ -1,8 +1,8 @@
+import { createHash } from 'node:crypto';
 import { and, asc, count, desc, eq, gte, ilike, isNotNull, isNull, lte, or, sql, type SQL } from 'drizzle-orm';
 import {
   analyzeSounding,
   ENGINE_VERSION,
-  parseSoundingCsv,
   validateSounding,
   type ParsedSounding,
   type SoundingAnalysis,
@@ -15,14 +15,17 @@ import type {
   SoundingList,
   SoundingListQuery,
   SoundingSummary,
+  UpdateSoundingMetadataInput,
   UploadResponse,
   UploadResult,
 } from '../../shared/contracts/soundings';
 import { appError, type AppError } from '../../shared/errors';
 import { err, ok, type Result } from '../../shared/result';
 import type { Actor } from '../auth/require-role';
-import type { Database } from '../db/client';
+import type { Database, DatabaseOrTransaction } from '../db/client';
 import { soundings, users } from '../db/schema';
+import { runSoundingTask, SOUNDING_TASK_BUDGET_MS } from '../workers/sounding-pool';
+import type { SoundingTask } from '../workers/sounding-analysis.worker';
 import { findOffice } from './office.service';
 
 type SoundingRow = typeof soundings.$inferSelect;
@@ -30,7 +33,7 @@ type SoundingRow = typeof soundings.$inferSelect;
 /** The figures the library, map and evidence panel show, read from a full analysis. */
 export function keyFigures(analysis: SoundingAnalysis | null): SoundingKeyFigures {
   if (!analysis) {
-    return { mlCape: null, muCape: null, mlCin: null, mlLclHeightM: null, precipitableWaterMm: null, bulkShear0to6kmMs: null, srh0to1km: null, stp: null, scp: null, surfaceDewpointC: null, surfaceMixingRatioGkg: null };
+    return { mlCape: null, muCape: null, mlCin: null, mlLclHeightM: null, precipitableWaterMm: null, bulkShear0to6kmMs: null, srh0to1km: null, stp: null, scp: null, surfaceDewpointC: null, surfaceMixingRatioGkg: null, flagCount: 0 };
   }
   return {
     mlCape: analysis.mixedLayer.cape,
@@ -44,6 +47,7 @@ export function keyFigures(analysis: SoundingAnalysis | null): SoundingKeyFigure
     scp: analysis.composites.supercellComposite,
     surfaceDewpointC: analysis.environment.surfaceDewpointC,
     surfaceMixingRatioGkg: analysis.environment.surfaceMixingRatio, // already g/kg
+    flagCount: Array.isArray(analysis.flags) ? analysis.flags.length : 0,
   };
 }
 
@@ -59,7 +63,7 @@ function toSummary(row: SoundingRow, uploaderName: string | null): SoundingSumma
     latitude: row.latitude,
     longitude: row.longitude,
     elevationM: row.elevationM,
-    validTime: row.validTime.toISOString(),
+    validTime: row.validTime ? row.validTime.toISOString() : null,
     source: row.source,
     modifiedFromId: row.modifiedFromId,
     modificationName: row.modificationName,
@@ -76,9 +80,28 @@ async function officeId(db: Database): Promise<string> {
   return office.id;
 }
 
-/** Stores one validated sounding with its analysis; one insert, so a file is all or nothing. */
-async function storeSounding(db: Database, office: string, actor: Actor | null, parsed: ParsedSounding, fileName: string | null, extra: Partial<typeof soundings.$inferInsert> = {}) {
-  const analysis = analyzeSounding(parsed.levels);
+/** The metadata a sounding still needs before it counts as evidence. */
+export function missingForEvidence(metadata: Pick<ParsedSounding['metadata'], 'station' | 'latitude' | 'longitude' | 'validTime'>): UploadResult['missingForEvidence'] {
+  const missing: UploadResult['missingForEvidence'] = [];
+  if (metadata.station === '') missing.push('station');
+  if (metadata.latitude === null) missing.push('latitude');
+  if (metadata.longitude === null) missing.push('longitude');
+  if (metadata.validTime === null) missing.push('validTime');
+  return missing;
+}
+
+/** SHA-256 of a sounding's parsed metadata and levels: identical content, identical hash. */
+export function soundingContentHash(parsed: ParsedSounding): string {
+  return createHash('sha256').update(JSON.stringify({ metadata: parsed.metadata, levels: parsed.levels })).digest('hex');
+}
+
+/** The analysis's quality flags as warnings of an upload result. */
+function flagIssues(analysis: SoundingAnalysis): SoundingIssue[] {
+  return analysis.flags.map((flag) => ({ severity: 'warning', code: flag.code, message: flag.message }));
+}
+
+/** Stores one validated sounding with its analysis in one insert (all or nothing). */
+async function storeSounding(db: DatabaseOrTransaction, office: string, actor: Actor | null, parsed: ParsedSounding, fileName: string | null, extra: Partial<typeof soundings.$inferInsert> = {}, analysis = analyzeSounding(parsed.levels, { latitude: parsed.metadata.latitude })) {
   const [row] = await db
     .insert(soundings)
     .values({
@@ -88,7 +111,7 @@ async function storeSounding(db: Database, office: string, actor: Actor | null, 
       latitude: parsed.metadata.latitude,
       longitude: parsed.metadata.longitude,
       elevationM: parsed.metadata.elevationM,
-      validTime: new Date(parsed.metadata.validTime),
+      validTime: parsed.metadata.validTime === null ? null : new Date(parsed.metadata.validTime),
       source: parsed.metadata.source,
       fileName,
       levels: parsed.levels,
@@ -103,29 +126,71 @@ async function storeSounding(db: Database, office: string, actor: Actor | null, 
   return row.id;
 }
 
-function resultFor(fileName: string, outcome: Result<ParsedSounding, SoundingIssue[]>, soundingId: string | null): UploadResult {
-  if (!outcome.ok) return { fileName, status: 'rejected', soundingId: null, issues: outcome.error };
-  return { fileName, status: outcome.value.warnings.length ? 'accepted-with-warnings' : 'accepted', soundingId, issues: outcome.value.warnings };
-}
-
 function summarise(results: UploadResult[]): UploadResponse {
   const rejected = results.filter((r) => r.status === 'rejected').length;
-  return { results, accepted: results.length - rejected, rejected };
+  const duplicates = results.filter((r) => r.status === 'duplicate').length;
+  return { results, accepted: results.length - rejected - duplicates, duplicates, rejected };
+}
+
+const rejected = (fileName: string, issues: SoundingIssue[]): UploadResult => ({ fileName, status: 'rejected', soundingId: null, issues, missingForEvidence: [] });
+
+/**
+ * One sounding of a batch, on its own: analysed in the worker pool within the time budget,
+ * then stored in its own transaction, or recognised as a duplicate of stored content. Any
+ * failure becomes this file's rejected result; it never touches the other files.
+ */
+async function receiveOne(db: Database, office: string, actor: Actor, name: string, task: SoundingTask, budgetMs: number): Promise<UploadResult> {
+  const outcome = await runSoundingTask(task, budgetMs);
+  if (!outcome.ok) {
+    if ('timedOut' in outcome) {
+      return rejected(name, [{ severity: 'error', code: 'ANALYSIS_TIME_EXCEEDED', message: `${name}: the analysis took longer than ${budgetMs} ms, the limit per file. Thin the levels and upload again.` }]);
+    }
+    return rejected(name, outcome.issues);
+  }
+  const { parsed, analysis } = outcome;
+  const fileName = task.kind === 'csv' ? task.fileName : null;
+  const label = task.kind === 'csv' ? name : parsed.metadata.station && parsed.metadata.validTime ? `${parsed.metadata.station} ${parsed.metadata.validTime}` : name;
+  const hash = soundingContentHash(parsed);
+  const issues = [...parsed.warnings, ...flagIssues(analysis)];
+  const missing = missingForEvidence(parsed.metadata);
+  for (const field of missing) {
+    issues.push({ severity: 'warning', code: 'NOT_YET_EVIDENCE', message: `${label}: no ${field === 'validTime' ? 'valid time' : field}; the sounding is kept in the library but stays out of evidence until an author fills it in.`, column: field });
+  }
+  const existing = async (): Promise<string | null> => {
+    const [row] = await db.select({ id: soundings.id }).from(soundings).where(and(eq(soundings.officeId, office), eq(soundings.contentHash, hash), isNull(soundings.modifiedFromId)));
+    return row?.id ?? null;
+  };
+  const duplicate = (id: string): UploadResult => ({
+    fileName: label,
+    status: 'duplicate',
+    soundingId: id,
+    issues: [{ severity: 'warning', code: 'DUPLICATE_SOUNDING', message: `${label}: the same sounding (same station, valid time and levels) is already in the library; nothing new was stored.` }],
+    missingForEvidence: missing,
+  });
+  const already = await existing();
+  if (already) return duplicate(already);
+  try {
+    const id = await db.transaction((tx) => storeSounding(tx, office, actor, parsed, fileName, { contentHash: hash }, analysis));
+    return { fileName: label, status: issues.length ? 'accepted-with-warnings' : 'accepted', soundingId: id, issues, missingForEvidence: missing };
+  } catch {
+    // A concurrent upload of the same content won the unique index: report the duplicate.
+    const raced = await existing();
+    if (raced) return duplicate(raced);
+    return rejected(label, [{ severity: 'error', code: 'NOT_STORED', message: `${label}: the sounding could not be stored (the database refused a value; check the metadata lines for unusual characters). Nothing of this file was kept; the other files are not affected.` }]);
+  }
 }
 
 /**
- * Takes a batch of exchange-CSV files. Each file is parsed and validated on its own: a rejected
- * file stores nothing and never stops the others; an accepted file is stored whole.
+ * Takes a batch of exchange-CSV files. Each file is parsed and analysed in the worker pool and
+ * stored in its own transaction: a rejected file stores nothing and never stops the others; a
+ * re-sent file is a duplicate, so a batch can be retried safely.
  */
-export async function uploadSoundingFiles(db: Database, actor: Actor, files: { name: string; content: Buffer }[]): Promise<Result<UploadResponse, AppError>> {
+export async function uploadSoundingFiles(db: Database, actor: Actor, files: { name: string; content: Buffer }[], budgetMs = SOUNDING_TASK_BUDGET_MS): Promise<Result<UploadResponse, AppError>> {
   if (files.length === 0) return err(appError('VALIDATION_FAILED', 'Choose at least one CSV file to upload.', { issues: [{ path: 'files', message: 'No files were sent.' }] }));
   const office = await officeId(db);
   const results: UploadResult[] = [];
   for (const file of files) {
-    const text = file.content.toString('utf8');
-    const parsed = parseSoundingCsv(text, file.name);
-    const id = parsed.ok ? await storeSounding(db, office, actor, parsed.value, file.name) : null;
-    results.push(resultFor(file.name, parsed, id));
+    results.push(await receiveOne(db, office, actor, file.name, { kind: 'csv', fileName: file.name, text: file.content.toString('utf8') }, budgetMs));
   }
   return ok(summarise(results));
 }
@@ -135,10 +200,7 @@ export async function createSoundings(db: Database, actor: Actor, inputs: unknow
   const office = await officeId(db);
   const results: UploadResult[] = [];
   for (const [index, input] of inputs.entries()) {
-    const parsed = validateSounding(input);
-    const name = parsed.ok ? `${parsed.value.metadata.station} ${parsed.value.metadata.validTime}` : `soundings[${index}]`;
-    const id = parsed.ok ? await storeSounding(db, office, actor, parsed.value, null) : null;
-    results.push(resultFor(name, parsed, id));
+    results.push(await receiveOne(db, office, actor, `soundings[${index}]`, { kind: 'structured', input }, SOUNDING_TASK_BUDGET_MS));
   }
   return ok(summarise(results));
 }
@@ -204,7 +266,7 @@ export async function getSounding(db: Database, soundingId: string): Promise<Res
   const levels = row.levels as SoundingLevel[];
   let analysis = storedAnalysis(row);
   if (!analysis) {
-    analysis = analyzeSounding(levels);
+    analysis = analyzeSounding(levels, { latitude: row.latitude });
     await db.update(soundings).set({ analysis: analysis as unknown as Record<string, unknown>, engineVersion: ENGINE_VERSION }).where(eq(soundings.id, row.id));
   }
   return ok({
@@ -243,8 +305,12 @@ export async function saveModifiedSounding(db: Database, actor: Actor, soundingI
   if (!surface) throw new Error(`stored sounding ${soundingId} has no levels`);
   if (input.surfaceTemperatureC !== undefined) surface.temperatureC = input.surfaceTemperatureC;
   if (input.surfaceDewpointC !== undefined) surface.dewpointC = input.surfaceDewpointC;
+  if (surface.dewpointC !== null && surface.dewpointC > surface.temperatureC) {
+    const message = `The surface dewpoint (${surface.dewpointC} °C) cannot be above the surface temperature (${surface.temperatureC} °C). Lower the dewpoint or raise the temperature.`;
+    return err(appError('VALIDATION_FAILED', message, { issues: [{ path: 'surfaceDewpointC', message }] }));
+  }
   const validated = validateSounding({
-    metadata: { station: original.stationId, name: original.stationName, latitude: original.latitude, longitude: original.longitude, elevationM: original.elevationM, validTime: original.validTime.toISOString(), source: original.source },
+    metadata: { station: original.stationId, name: original.stationName, latitude: original.latitude, longitude: original.longitude, elevationM: original.elevationM, validTime: original.validTime?.toISOString() ?? null, source: original.source },
     levels,
   });
   if (!validated.ok) {
@@ -264,12 +330,12 @@ export async function saveModifiedSounding(db: Database, actor: Actor, soundingI
 /** Re-analyses up to `limit` soundings whose cached analysis was made by another engine version. */
 export async function refreshStaleAnalyses(db: Database, limit: number): Promise<number> {
   const stale = await db
-    .select({ id: soundings.id, levels: soundings.levels })
+    .select({ id: soundings.id, levels: soundings.levels, latitude: soundings.latitude })
     .from(soundings)
     .where(or(isNull(soundings.engineVersion), sql`${soundings.engineVersion} <> ${ENGINE_VERSION}`))
     .limit(limit);
   for (const row of stale) {
-    const analysis = analyzeSounding(row.levels as SoundingLevel[]);
+    const analysis = analyzeSounding(row.levels as SoundingLevel[], { latitude: row.latitude });
     await db.update(soundings).set({ analysis: analysis as unknown as Record<string, unknown>, engineVersion: ENGINE_VERSION }).where(eq(soundings.id, row.id));
   }
   return stale.length;
@@ -290,3 +356,34 @@ export async function seedSoundings(db: Database, inputs: unknown[]): Promise<nu
   return stored;
 }
 
+
+/**
+ * Fills in or corrects a sounding's metadata from the library (station, position, valid time,
+ * source), so a sounding uploaded without them can count as evidence. Its uploader or a lead
+ * may do it; the analysis is redone (the hemisphere decides the deviant storm motion).
+ */
+export async function updateSoundingMetadata(db: Database, actor: Actor, soundingId: string, input: UpdateSoundingMetadataInput): Promise<Result<SoundingSummary, AppError>> {
+  const [row] = await db.select().from(soundings).where(eq(soundings.id, soundingId));
+  if (!row) return err(appError('NOT_FOUND', 'There is no sounding with that id. It may have been deleted.'));
+  if (actor.role !== 'lead' && row.uploadedBy !== actor.userId) {
+    return err(appError('FORBIDDEN', 'Only the forecaster who uploaded this sounding, or a lead, can change its details.'));
+  }
+  const analysis = analyzeSounding(row.levels as SoundingLevel[], { latitude: input.latitude });
+  const [updated] = await db
+    .update(soundings)
+    .set({
+      stationId: input.station,
+      stationName: input.name,
+      latitude: input.latitude,
+      longitude: input.longitude,
+      elevationM: input.elevationM ?? row.elevationM,
+      validTime: new Date(input.validTime),
+      source: input.source,
+      analysis: analysis as unknown as Record<string, unknown>,
+      engineVersion: ENGINE_VERSION,
+    })
+    .where(eq(soundings.id, soundingId))
+    .returning();
+  if (!updated) return err(appError('NOT_FOUND', 'The sounding was deleted while you edited it.'));
+  return ok(toSummary(updated, null));
+}

@@ -1,9 +1,16 @@
 import { z } from 'zod';
+import { parseValidTime } from '../sounding/validate';
 
-/** Upload limits (SCIENCE.md): 2 MB per file, 5,000 levels per sounding, 500 files per batch. */
+/** An ISO 8601 time with a zone that exists on the calendar (30 February is refused). */
+const validTimeSchema = z
+  .string()
+  .datetime({ offset: true, message: 'Valid time must be ISO 8601, e.g. 2027-04-18T18:00:00Z.' })
+  .refine((value) => parseValidTime(value) !== null, { message: 'That valid time does not exist on the calendar (check the day of the month).' });
+
+/** Upload limits (docs/sounding-format.md): 2 MB per file, 5,000 levels per sounding, 500 files per batch. */
 export const soundingLimits = { maxFileBytes: 2 * 1024 * 1024, maxLevels: 5000, maxFilesPerBatch: 500 } as const;
 
-export const soundingSourceSchema = z.enum(['observed', 'model'], { message: 'Source must be "observed" or "model".' });
+export const soundingSourceSchema = z.enum(['observed', 'model', 'unknown'], { message: 'Source must be "observed", "model" or "unknown".' });
 
 const finite = (label: string) => z.number({ message: `${label} must be a number.` }).refine(Number.isFinite, { message: `${label} must be a finite number.` });
 
@@ -26,7 +33,7 @@ export const soundingInputSchema = z.object({
       z.number().min(-180, { message: 'Longitude must be between -180 and 180.' }).max(180, { message: 'Longitude must be between -180 and 180.' }),
     ),
     elevationM: finite('Elevation').pipe(z.number().min(-500).max(9000, { message: 'Elevation must be between -500 and 9000 m.' })),
-    validTime: z.string().datetime({ offset: true, message: 'Valid time must be ISO 8601, e.g. 2027-04-18T18:00:00Z.' }),
+    validTime: validTimeSchema,
     source: soundingSourceSchema,
   }),
   levels: z.array(soundingLevelInputSchema).min(1, { message: 'A sounding needs levels.' }).max(soundingLimits.maxLevels, { message: `At most ${soundingLimits.maxLevels} levels per sounding.` }),
@@ -47,15 +54,21 @@ export const soundingIssueSchema = z.object({
 });
 export type SoundingIssueDto = z.infer<typeof soundingIssueSchema>;
 
-/** The result of one file or one sounding of a batch: stored (maybe with warnings) or rejected. */
+/**
+ * The result of one file or one sounding of a batch: stored (maybe with warnings), a duplicate
+ * of one already stored (same content: nothing new stored, `soundingId` is the stored one), or
+ * rejected. `missingForEvidence` lists the metadata a stored sounding still needs (station,
+ * latitude, longitude, validTime) before it counts as evidence.
+ */
 export const uploadResultSchema = z.object({
   fileName: z.string(),
-  status: z.enum(['accepted', 'accepted-with-warnings', 'rejected']),
+  status: z.enum(['accepted', 'accepted-with-warnings', 'duplicate', 'rejected']),
   soundingId: z.string().nullable(),
   issues: z.array(soundingIssueSchema),
+  missingForEvidence: z.array(z.enum(['station', 'latitude', 'longitude', 'validTime'])).default([]),
 });
 export type UploadResult = z.infer<typeof uploadResultSchema>;
-export const uploadResponseSchema = z.object({ results: z.array(uploadResultSchema), accepted: z.number(), rejected: z.number() });
+export const uploadResponseSchema = z.object({ results: z.array(uploadResultSchema), accepted: z.number(), duplicates: z.number().default(0), rejected: z.number() });
 export type UploadResponse = z.infer<typeof uploadResponseSchema>;
 
 /** Key figures shown in the library and on the map (SI units; null when they do not exist). */
@@ -71,17 +84,20 @@ export const soundingKeyFiguresSchema = z.object({
   scp: z.number().nullable(),
   surfaceDewpointC: z.number().nullable(),
   surfaceMixingRatioGkg: z.number().nullable(),
+  /** How many quality flags the analysis raised (0: none). */
+  flagCount: z.number().default(0),
 });
 export type SoundingKeyFigures = z.infer<typeof soundingKeyFiguresSchema>;
 
 export const soundingSummarySchema = z.object({
   id: z.string(),
+  /** Station id; empty when the uploaded file did not give one. */
   stationId: z.string(),
   stationName: z.string(),
-  latitude: z.number(),
-  longitude: z.number(),
-  elevationM: z.number(),
-  validTime: z.string(),
+  latitude: z.number().nullable(),
+  longitude: z.number().nullable(),
+  elevationM: z.number().nullable(),
+  validTime: z.string().nullable(),
   source: soundingSourceSchema,
   modifiedFromId: z.string().nullable(),
   modificationName: z.string().nullable(),
@@ -124,3 +140,15 @@ export const saveModifiedSoundingInputSchema = z.object({
   parcelStartPressureHpa: finite('Parcel start pressure').optional(),
 });
 export type SaveModifiedSoundingInput = z.infer<typeof saveModifiedSoundingInputSchema>;
+
+/** The metadata an author fills in (or corrects) in the library; all four evidence fields are required here. */
+export const updateSoundingMetadataInputSchema = z.object({
+  station: z.string().trim().min(1, { message: 'A station id is required.' }).max(16, { message: 'Keep the station id under 16 characters.' }),
+  name: z.string().trim().max(120, { message: 'Keep the name under 120 characters.' }).default(''),
+  latitude: finite('Latitude').pipe(z.number().min(-90, { message: 'Latitude must be between -90 and 90.' }).max(90, { message: 'Latitude must be between -90 and 90.' })),
+  longitude: finite('Longitude').pipe(z.number().min(-180, { message: 'Longitude must be between -180 and 180.' }).max(180, { message: 'Longitude must be between -180 and 180.' })),
+  elevationM: finite('Elevation').pipe(z.number().min(-500, { message: 'Elevation must be between -500 and 9000 m.' }).max(9000, { message: 'Elevation must be between -500 and 9000 m.' })).nullable().optional(),
+  validTime: validTimeSchema,
+  source: soundingSourceSchema,
+});
+export type UpdateSoundingMetadataInput = z.infer<typeof updateSoundingMetadataInputSchema>;

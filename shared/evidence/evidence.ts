@@ -9,12 +9,12 @@ export interface EvidenceSounding {
   latitude: number;
   longitude: number;
   validTime: string;
-  source: 'observed' | 'model';
+  source: 'observed' | 'model' | 'unknown';
   modified: boolean;
   figures: SoundingKeyFigures;
 }
 
-export type EvidenceParameterKey = Exclude<keyof SoundingKeyFigures, 'muCape' | 'scp'> | 'muCape' | 'scp';
+export type EvidenceParameterKey = Exclude<keyof SoundingKeyFigures, 'flagCount'>;
 
 /** The parameters summarised for each area, in display order, with their SI units. */
 export const evidenceParameters: { key: EvidenceParameterKey; label: string; unit: string }[] = [
@@ -49,6 +49,8 @@ export interface ParameterStats {
 export interface AreaEvidence {
   areaId: string;
   count: number;
+  /** How many of the soundings inside carry quality flags (they still count as evidence). */
+  flaggedCount: number;
   soundingIds: string[];
   stats: Partial<Record<EvidenceParameterKey, ParameterStats>>;
 }
@@ -116,7 +118,8 @@ export function areaEvidence(areaId: string, geometry: AreaGeometry, soundings: 
     const summary = summarise(values);
     if (summary) stats[key] = summary;
   }
-  return { areaId, count: inside.length, soundingIds: inside.map((s) => s.id), stats };
+  const flaggedCount = inside.filter((s) => s.figures.flagCount > 0).length;
+  return { areaId, count: inside.length, flaggedCount, soundingIds: inside.map((s) => s.id), stats };
 }
 
 /** Soundings valid within [validFrom, validUntil] (inclusive), optionally of one source. */

@@ -7,6 +7,7 @@ const stats = (median: number): ParameterStats => ({ count: 5, min: median, medi
 const evidence = (count: number, medians: Partial<Record<'mlCape' | 'bulkShear0to6kmMs' | 'srh0to1km' | 'stp', number>>): AreaEvidence => ({
   areaId: 'a',
   count,
+  flaggedCount: 0,
   soundingIds: [],
   stats: Object.fromEntries(Object.entries(medians).map(([k, v]) => [k, stats(v)])),
 });

@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { parseSoundingCsv } from './parse-csv';
-import { BASE_ROWS, buildCsv, rowLine } from './testing/csv';
+import { BASE_HEADER, BASE_ROWS, buildCsv, rowLine } from './testing/csv';
 import type { ParsedSounding, SoundingIssue } from './types';
 
 function parsed(text: string): ParsedSounding {
@@ -228,10 +228,12 @@ describe('parseSoundingCsv: one test per class of bad input', () => {
     expect(errorWith(text, 'RELATIVE_HUMIDITY_OUT_OF_RANGE')).toMatchObject({ line: rowLine(1), column: 'rh_pct' });
   });
 
-  it('DEWPOINT_ABOVE_TEMPERATURE: more than 0.5 K above is an error', () => {
+  it('DEWPOINT_ABOVE_TEMPERATURE: 1 K above is clipped to the temperature with a warning naming the line', () => {
     const rows = [...BASE_ROWS];
     rows[1] = '950,560,24,25,190,20';
-    expect(errorWith(buildCsv({ rows }), 'DEWPOINT_ABOVE_TEMPERATURE')).toMatchObject({ line: rowLine(1), column: 'dewpoint_C' });
+    const sounding = parsed(buildCsv({ rows }));
+    expect(sounding.levels[1]?.dewpointC).toBe(24);
+    expect(warningWith(buildCsv({ rows }), 'DEWPOINT_ABOVE_TEMPERATURE')).toMatchObject({ line: rowLine(1), column: 'dewpoint_C' });
   });
 
   it('DEWPOINT_ABOVE_TEMPERATURE: up to 0.5 K above is capped with a warning', () => {
@@ -256,28 +258,44 @@ describe('parseSoundingCsv: one test per class of bad input', () => {
     expect(sounding.warnings.find((w) => w.code === 'WIND_INCOMPLETE')?.column).toBe('wind_speed_kt');
   });
 
-  it('DUPLICATE_PRESSURE: two levels at 850 hPa', () => {
+  it('DUPLICATE_PRESSURE: two different levels at 850 hPa are refused, naming both lines', () => {
     const rows = [...BASE_ROWS];
     rows.splice(4, 0, '850,1530,17,11,230,35');
-    expect(errorWith(buildCsv({ rows }), 'DUPLICATE_PRESSURE')).toMatchObject({ line: rowLine(4), column: 'pressure_hPa' });
+    const issue = errorWith(buildCsv({ rows }), 'DUPLICATE_PRESSURE');
+    expect(issue).toMatchObject({ line: rowLine(4), column: 'pressure_hPa' });
+    expect(issue.message).toContain(`line ${rowLine(3)}`);
   });
 
-  it('PRESSURE_NOT_MONOTONIC: a level out of order', () => {
+  it('DUPLICATE_PRESSURE: an identical repeated level is merged with a warning', () => {
     const rows = [...BASE_ROWS];
-    [rows[2], rows[3]] = [rows[3] as string, rows[2] as string];
-    expect(errorWith(buildCsv({ rows }), 'PRESSURE_NOT_MONOTONIC').message).toMatch(/Sort the levels/);
+    rows.splice(4, 0, rows[3] as string);
+    const sounding = parsed(buildCsv({ rows }));
+    expect(sounding.levels).toHaveLength(BASE_ROWS.length);
+    expect(warningWith(buildCsv({ rows }), 'DUPLICATE_PRESSURE').line).toBe(rowLine(4));
   });
 
-  it('HEIGHT_NOT_INCREASING: a height below the level beneath', () => {
+  it('LEVELS_SORTED: levels in any order are sorted by decreasing pressure, with a warning', () => {
+    const rows = [BASE_ROWS[3], BASE_ROWS[0], BASE_ROWS[7], BASE_ROWS[1], BASE_ROWS[9], BASE_ROWS[2], BASE_ROWS[4], BASE_ROWS[8], BASE_ROWS[5], BASE_ROWS[6]] as string[];
+    const sounding = parsed(buildCsv({ rows }));
+    expect(sounding.levels.map((l) => l.pressureHpa)).toEqual([1000, 950, 900, 850, 700, 500, 400, 300, 250, 200]);
+    expect(sounding.levels).toEqual(parsed(buildCsv()).levels);
+    expect(warningWith(buildCsv({ rows }), 'LEVELS_SORTED').severity).toBe('warning');
+  });
+
+  it('HEIGHT_NOT_INCREASING: a height below the level beneath is a warning and heights are computed instead', () => {
     const rows = [...BASE_ROWS];
     rows[3] = '850,900,18,12,230,35';
-    expect(errorWith(buildCsv({ rows }), 'HEIGHT_NOT_INCREASING')).toMatchObject({ line: rowLine(3), column: 'height_m' });
+    expect(warningWith(buildCsv({ rows }), 'HEIGHT_NOT_INCREASING')).toMatchObject({ line: rowLine(3), column: 'height_m' });
+    const heights = parsed(buildCsv({ rows })).levels.map((l) => l.heightM);
+    for (let i = 1; i < heights.length; i++) expect(heights[i]).toBeGreaterThan(heights[i - 1] as number);
   });
 
-  it('MISSING_HEIGHT: no heights and no elevation', () => {
+  it('no heights and no elevation: heights above ground start at 0 m, with a warning', () => {
     const rows = BASE_ROWS.map((row) => row.replace(/^([^,]+),[^,]+,/, '$1,,'));
-    // Six metadata lines and the header: the first level is on line 8.
-    expect(errorWith(buildCsv({ rows, metadata: { elevation_m: null } }), 'MISSING_HEIGHT').line).toBe(8);
+    const sounding = parsed(buildCsv({ rows, metadata: { elevation_m: null } }));
+    expect(sounding.levels[0]?.heightM).toBe(0);
+    expect(sounding.metadata.elevationM).toBeNull();
+    expect(sounding.warnings.some((w) => w.code === 'MISSING_METADATA' && /start at 0 m/.test(w.message))).toBe(true);
   });
 
   it('ELEVATION_MISMATCH: lowest height 400 m from the station elevation (warning)', () => {
@@ -293,8 +311,8 @@ describe('parseSoundingCsv: one test per class of bad input', () => {
     expect(errorWith(buildCsv({ rows }), 'TOO_MANY_LEVELS').message).toMatch(/5000/);
   });
 
-  it('TOP_TOO_LOW: the sounding ends at 700 hPa', () => {
-    expect(errorWith(buildCsv({ rows: BASE_ROWS.slice(0, 5) }), 'TOP_TOO_LOW')).toMatchObject({ line: rowLine(4) });
+  it('TOP_TOO_LOW: a sounding that ends at 700 hPa is kept with a warning naming its top line', () => {
+    expect(warningWith(buildCsv({ rows: BASE_ROWS.slice(0, 5) }), 'TOP_TOO_LOW')).toMatchObject({ line: rowLine(4) });
   });
 
   it('SURFACE_DEWPOINT_MISSING: no dewpoint at the lowest level', () => {
@@ -308,15 +326,57 @@ describe('parseSoundingCsv: one test per class of bad input', () => {
     expect(warningWith(buildCsv({ rows }), 'DATA_GAP').line).toBe(rowLine(7));
   });
 
-  it.each(['station', 'latitude', 'longitude', 'valid'])('MISSING_METADATA: no "# %s" line is an error', (key) => {
-    const issue = errorWith(buildCsv({ metadata: { [key]: null } }), 'MISSING_METADATA');
+  it.each(['station', 'latitude', 'longitude', 'valid'])('MISSING_METADATA: no "# %s" line is a warning, never an error', (key) => {
+    const issue = warningWith(buildCsv({ metadata: { [key]: null } }), 'MISSING_METADATA');
     expect(issue.column).toBe(`# ${key}`);
   });
 
-  it('MISSING_METADATA: no source is a warning (taken as observed)', () => {
+  it('MISSING_METADATA: no source is a warning and the source is "unknown", never "observed"', () => {
     const sounding = parsed(buildCsv({ metadata: { source: null } }));
-    expect(sounding.metadata.source).toBe('observed');
+    expect(sounding.metadata.source).toBe('unknown');
     expect(sounding.warnings.some((w) => w.code === 'MISSING_METADATA')).toBe(true);
+  });
+
+  it('a file with only the header row and levels (no metadata, empty heights) parses with warnings', () => {
+    const rows = BASE_ROWS.map((row) => row.replace(/^([^,]+),[^,]+,/, '$1,,'));
+    const text = [BASE_HEADER, ...rows].join('\n');
+    const sounding = parsed(text);
+    expect(sounding.metadata).toEqual({ station: '', name: '', latitude: null, longitude: null, elevationM: null, validTime: null, source: 'unknown' });
+    expect(sounding.levels[0]?.heightM).toBe(0);
+    expect(sounding.warnings.filter((w) => w.code === 'MISSING_METADATA')).toHaveLength(6);
+  });
+
+  // Issue 11 item 12: Date.parse rolls 30 February over to 2 March; the parser must refuse it.
+  it.each(['2027-02-30T00:00:00Z', '2027-04-31T12:00Z', '2027-13-01T00:00Z', '2027-04-18T24:00Z', '2026-02-29T00:00Z'])('INVALID_METADATA: the impossible date %s is refused with a clear message', (valid) => {
+    const issue = errorWith(buildCsv({ metadata: { valid } }), 'INVALID_METADATA');
+    expect(issue.column).toBe('# valid');
+    expect(issue.message).toMatch(/not a real date/);
+  });
+
+  it('accepts 29 February of a leap year (2028)', () => {
+    expect(parsed(buildCsv({ metadata: { valid: '2028-02-29T00:00:00Z' } })).metadata.validTime).toBe('2028-02-29T00:00:00.000Z');
+  });
+
+  // Issue 11 item 12: a wind speed of 1e308 kt was accepted.
+  it('WIND_OUT_OF_RANGE: an absurd wind speed (1e308 kt) is refused, naming line and column', () => {
+    const rows = [...BASE_ROWS];
+    rows[4] = '700,3100,8,-2,250,1e308';
+    expect(errorWith(buildCsv({ rows }), 'WIND_OUT_OF_RANGE')).toMatchObject({ line: rowLine(4), column: 'wind_speed_kt' });
+  });
+
+  it('WIND_OUT_OF_RANGE: an absurd u component is refused, naming line and column', () => {
+    const header = 'pressure_hPa,height_m,temperature_C,dewpoint_C,u_ms,v_ms';
+    const rows = BASE_ROWS.map((row, i) => row.split(',').slice(0, 4).join(',') + (i === 2 ? ',1e308,3' : ',5,3'));
+    expect(errorWith(buildCsv({ header, rows }), 'WIND_OUT_OF_RANGE')).toMatchObject({ line: rowLine(2), column: 'u_ms' });
+  });
+
+  it('quoted cells may hold commas (papaparse tokenizer) and line numbers stay right', () => {
+    const text = buildCsv({ metadata: { name: 'Cedar Ford, Missouri' }, header: 'pressure_hPa,height_m,temperature_C,dewpoint_C,wind_direction_deg,wind_speed_kt,"note, free text"' , rows: BASE_ROWS.map((row, i) => `${row},"${i === 2 ? 'a, b' : 'x'}"`) });
+    const sounding = parsed(text);
+    expect(sounding.metadata.name).toBe('Cedar Ford, Missouri');
+    expect(sounding.levels).toHaveLength(BASE_ROWS.length);
+    const broken = buildCsv({ rows: BASE_ROWS.map((row, i) => (i === 3 ? row.replace('850', '"850') : row)) });
+    expect(issues(broken).some((issue) => issue.line === rowLine(3))).toBe(true);
   });
 
   it.each([

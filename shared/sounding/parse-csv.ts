@@ -1,3 +1,4 @@
+import Papa from 'papaparse';
 import { err, type Result } from '../result';
 import type { ParsedSounding, SoundingIssue } from './types';
 import {
@@ -9,7 +10,7 @@ import {
   pascalToHectopascal,
   windComponents,
 } from './units';
-import { checkSounding, IssueList, MAX_FILE_BYTES, type LevelField, type RawLevel, type RawMetadata } from './validate';
+import { checkSounding, IssueList, MAX_FILE_BYTES, MAX_WIND_SPEED_MS, type LevelField, type RawLevel, type RawMetadata } from './validate';
 
 type Quantity =
   | 'pressure'
@@ -91,9 +92,9 @@ function readCell(cells: string[], column: Column | undefined): number | null | 
 }
 
 /**
- * Parse a sounding in the exchange CSV format of SCIENCE.md.
+ * Parse a sounding in the exchange CSV format (docs/sounding-format.md).
  *
- * Reads `# key: value` metadata lines, finds columns by header name in any order, converts
+ * Tokenizes with papaparse (quoted cells may hold commas), reads `# key: value` metadata lines, finds columns by header name in any order, converts
  * units by suffix to hPa, m, °C and m s⁻¹ (winds to u/v), accepts the missing markers
  * (empty, NA, −9999), sorts levels by decreasing pressure and fills missing heights with the
  * hypsometric equation. Every problem is reported with the file, line and column; nothing throws.
@@ -108,7 +109,7 @@ export function parseSoundingCsv(text: string, fileName = 'sounding.csv'): Resul
     issues.error('FILE_TOO_LARGE', `${fileName}: the file is larger than 2 MB. Split it or thin the levels.`);
     return err(issues.issues);
   }
-  const lines = text.replace(/^\uFEFF/, '').split(/\r\n|\n|\r/);
+  const body = text.replace(/^\uFEFF/, '');
   const metadata: RawMetadata = {};
   const metadataLines: Partial<Record<keyof RawMetadata, number>> = {};
   const metadataKeys: Partial<Record<keyof RawMetadata, string>> = {};
@@ -116,30 +117,61 @@ export function parseSoundingCsv(text: string, fileName = 'sounding.csv'): Resul
   let headerCells: string[] = [];
   const rows: { line: number; cells: string[] }[] = [];
 
-  for (let i = 0; i < lines.length; i++) {
-    const raw = (lines[i] as string).trim();
-    if (raw === '') continue;
-    if (raw.startsWith('#')) {
-      const match = /^#\s*([A-Za-z_]+)\s*:\s*(.*)$/.exec(raw);
-      if (match) {
-        const key = (match[1] as string).toLowerCase();
-        const known = METADATA_KEYS[key];
-        if (known) {
-          const value = (match[2] as string).trim();
-          metadata[known.field] = known.convert ? known.convert(value) : value;
-          metadataLines[known.field] = i + 1;
-          metadataKeys[known.field] = key;
-        }
-      }
-      continue;
-    }
-    if (headerLine < 0) {
-      headerLine = i + 1;
-      headerCells = raw.split(',').map((cell) => cell.trim());
-    } else {
-      rows.push({ line: i + 1, cells: raw.split(',').map((cell) => cell.trim()) });
-    }
+  // Line starts, so each row the tokenizer returns can be named by its 1-based line.
+  const lineStarts: number[] = [0];
+  for (let i = 0; i < body.length; i++) {
+    const c = body.charCodeAt(i);
+    if (c === 10 || (c === 13 && body.charCodeAt(i + 1) !== 10)) lineStarts.push(i + 1);
   }
+  const lineAt = (offset: number): number => {
+    let low = 0;
+    let high = lineStarts.length - 1;
+    while (low < high) {
+      const middle = (low + high + 1) >> 1;
+      if ((lineStarts[middle] as number) <= offset) low = middle;
+      else high = middle - 1;
+    }
+    return low + 1;
+  };
+  // Tokenize with papaparse (quoted fields, embedded commas); keep our own validation.
+  let rowStart = 0;
+  Papa.parse<string[]>(body, {
+    delimiter: ',',
+    step: (result) => {
+      const start = rowStart;
+      rowStart = result.meta.cursor;
+      const raw = body.slice(start, result.meta.cursor).trim();
+      if (raw === '') return;
+      const line = lineAt(start);
+      if (raw.startsWith('#')) {
+        const match = /^#\s*([A-Za-z_]+)\s*:\s*(.*)$/.exec(raw);
+        if (match) {
+          const key = (match[1] as string).toLowerCase();
+          const known = METADATA_KEYS[key];
+          if (known) {
+            const value = (match[2] as string).trim();
+            metadata[known.field] = known.convert ? known.convert(value) : value;
+            metadataLines[known.field] = line;
+            metadataKeys[known.field] = key;
+          }
+        }
+        return;
+      }
+      const quoteError = result.errors.find((e) => e.type === 'Quotes');
+      if (quoteError) {
+        issues.error('FIELD_COUNT', `${fileName}, line ${line}: ${quoteError.message.toLowerCase()}; close every quoted cell with a quote.`, { line });
+        return;
+      }
+      const cells = result.data.map((cell) => cell.trim());
+      if (headerLine < 0) {
+        headerLine = line;
+        headerCells = cells;
+      } else {
+        rows.push({ line, cells });
+      }
+    },
+  });
+  if (issues.hasErrors) return err(issues.issues);
   if (headerLine < 0) {
     issues.error('EMPTY_FILE', `${fileName}: no header row found. The first line that is not a "#" line must name the columns, e.g. pressure_hPa,height_m,temperature_C,dewpoint_C.`);
     return err(issues.issues);
@@ -209,9 +241,9 @@ export function parseSoundingCsv(text: string, fileName = 'sounding.csv'): Resul
       const direction = readReported(cells, columns, 'windDirection', row.line, fileName, issues);
       const speed = readReported(cells, columns, 'windSpeed', row.line, fileName, issues);
       if (direction !== null && speed !== null) {
-        if (direction < 0 || direction > 360 || speed < 0) {
+        if (direction < 0 || direction > 360 || speed < 0 || speed > MAX_WIND_SPEED_MS) {
           const column = direction < 0 || direction > 360 ? columns.windDirection : columns.windSpeed;
-          issues.error('WIND_OUT_OF_RANGE', `${fileName}, line ${row.line}, column ${column?.header}: wind direction must be 0–360° and speed not negative.`, { line: row.line, column: column?.header });
+          issues.error('WIND_OUT_OF_RANGE', `${fileName}, line ${row.line}, column ${column?.header}: wind direction must be 0–360° and speed between 0 and ${MAX_WIND_SPEED_MS} m/s (${Math.round(MAX_WIND_SPEED_MS / 0.514444)} kt).`, { line: row.line, column: column?.header });
         } else {
           const components = windComponents(direction, speed);
           uMs = components.u;
@@ -224,6 +256,11 @@ export function parseSoundingCsv(text: string, fileName = 'sounding.csv'): Resul
     } else if (columns.u && columns.v) {
       uMs = readReported(cells, columns, 'u', row.line, fileName, issues);
       vMs = readReported(cells, columns, 'v', row.line, fileName, issues);
+      for (const [value, column] of [[uMs, columns.u], [vMs, columns.v]] as const) {
+        if (value !== null && Math.abs(value) > MAX_WIND_SPEED_MS) {
+          issues.error('WIND_OUT_OF_RANGE', `${fileName}, line ${row.line}, column ${column.header}: a wind component must be between −${MAX_WIND_SPEED_MS} and ${MAX_WIND_SPEED_MS} m/s.`, { line: row.line, column: column.header });
+        }
+      }
       if ((uMs === null) !== (vMs === null)) {
         issues.warning('WIND_INCOMPLETE', `${fileName}, line ${row.line}: only one wind component is given; the wind of this level is treated as missing.`, { line: row.line });
         uMs = null;
@@ -254,7 +291,7 @@ export function parseSoundingCsv(text: string, fileName = 'sounding.csv'): Resul
       return { ...(line !== undefined ? { line } : {}), ...(column !== undefined ? { column } : {}) };
     },
     metadata: (key) => {
-      const line = metadataLines[key];
+      const line = metadataLines[key] ?? headerLine;
       const metadataKey = metadataKeys[key] ?? { elevationM: 'elevation_m', validTime: 'valid' }[key as string] ?? key;
       return { ...(line !== undefined ? { line } : {}), column: `# ${metadataKey}` };
     },

@@ -20,24 +20,24 @@ export interface SoundingLevel {
   vMs: number | null;
 }
 
-/** Where a sounding comes from. */
-export type SoundingSource = 'observed' | 'model';
+/** Where a sounding comes from; "unknown" when the file does not say. */
+export type SoundingSource = 'observed' | 'model' | 'unknown';
 
 /** Descriptive data about a sounding (from the `# key: value` lines of the exchange CSV). */
 export interface SoundingMetadata {
-  /** Station identifier, e.g. "OAX". */
+  /** Station identifier, e.g. "OAX"; empty string when not given. */
   station: string;
   /** Human-readable station name; empty string when not given. */
   name: string;
-  /** Latitude, degrees north (−90..90). */
-  latitude: number;
-  /** Longitude, degrees east (−180..180). */
-  longitude: number;
-  /** Station (ground) elevation above mean sea level, m. */
-  elevationM: number;
-  /** Valid time, ISO 8601 in UTC, e.g. "2014-06-16T19:00:00.000Z". */
-  validTime: string;
-  /** Observed (radiosonde) or model forecast. */
+  /** Latitude, degrees north (−90..90); null when not given. */
+  latitude: number | null;
+  /** Longitude, degrees east (−180..180); null when not given. */
+  longitude: number | null;
+  /** Station (ground) elevation above mean sea level, m; null when neither it nor the lowest height is given. */
+  elevationM: number | null;
+  /** Valid time, ISO 8601 in UTC, e.g. "2014-06-16T19:00:00.000Z"; null when not given. */
+  validTime: string | null;
+  /** Observed (radiosonde), model forecast, or unknown. */
   source: SoundingSource;
 }
 

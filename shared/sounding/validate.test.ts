@@ -21,13 +21,13 @@ describe('validateSounding (structured input, same checks and codes as the CSV p
     expect(result.value.metadata.validTime).toBe('2027-04-18T18:00:00.000Z');
   });
 
-  it('reports a dewpoint above temperature with levelIndex and field name', () => {
+  it('reports a dewpoint above temperature with levelIndex and field name, and clips it', () => {
     const bad = levels.map((l, i) => (i === 2 ? { ...l, dewpointC: 25 } : l));
     const result = validateSounding({ metadata, levels: bad });
-    expect(result.ok).toBe(false);
-    if (result.ok) return;
-    expect(result.error[0]).toMatchObject({ code: 'DEWPOINT_ABOVE_TEMPERATURE', levelIndex: 2, column: 'dewpointC' });
-    expect(result.error[0]?.message).toMatch(/^sounding, levels\[2\]\.dewpointC/);
+    const value = result.ok ? result.value : undefined;
+    expect(value?.warnings[0]).toMatchObject({ code: 'DEWPOINT_ABOVE_TEMPERATURE', levelIndex: 2, column: 'dewpointC' });
+    expect(value?.warnings[0]?.message).toMatch(/^sounding, levels\[2\]\.dewpointC/);
+    expect(value?.levels[2]?.dewpointC).toBe(value?.levels[2]?.temperatureC);
   });
 
   it('reports a value that is not a number as NOT_A_NUMBER', () => {
@@ -36,9 +36,9 @@ describe('validateSounding (structured input, same checks and codes as the CSV p
     expect(!result.ok && result.error[0]).toMatchObject({ code: 'NOT_A_NUMBER', levelIndex: 1, column: 'temperatureC' });
   });
 
-  it('reports missing metadata with the field name', () => {
+  it('reports missing metadata as a warning with the field name', () => {
     const result = validateSounding({ metadata: { ...metadata, validTime: undefined }, levels });
-    expect(!result.ok && result.error.find((e) => e.code === 'MISSING_METADATA')?.column).toBe('metadata.validTime');
+    expect(result.ok && result.value.warnings.find((e) => e.code === 'MISSING_METADATA')?.column).toBe('metadata.validTime');
   });
 
   it('rejects input that is not a sounding object (INVALID_INPUT)', () => {
@@ -48,9 +48,10 @@ describe('validateSounding (structured input, same checks and codes as the CSV p
     }
   });
 
-  it('reports a mixed level order (PRESSURE_NOT_MONOTONIC) with the level index', () => {
+  it('sorts a mixed level order (LEVELS_SORTED warning)', () => {
     const shuffled = [levels[0], levels[2], levels[1], levels[3], levels[4], levels[5]];
     const result = validateSounding({ metadata, levels: shuffled });
-    expect(!result.ok && result.error.find((e) => e.code === 'PRESSURE_NOT_MONOTONIC')?.levelIndex).toBeDefined();
+    expect(result.ok && result.value.warnings.map((w) => w.code)).toContain('LEVELS_SORTED');
+    expect(result.ok && result.value.levels.map((l) => l.pressureHpa)).toEqual([...levels].map((l) => l?.pressureHpa).sort((a, b) => (b ?? 0) - (a ?? 0)));
   });
 });

@@ -6,7 +6,7 @@ import { mixingRatio } from './mixing-ratio';
 import { saturationVaporPressure } from './saturation';
 import type { ParsedSounding, SoundingIssue, SoundingLevel, SoundingMetadata, SoundingSource } from './types';
 
-/** Upload limits of SCIENCE.md. */
+/** Upload limits (docs/sounding-format.md). */
 export const MAX_FILE_BYTES = 2 * 1024 * 1024;
 export const MAX_LEVELS = 5000;
 export const MIN_LEVELS = 5;
@@ -17,8 +17,11 @@ export const MAX_PRESSURE_HPA = 1100;
 export const MIN_TEMPERATURE_C = -120;
 export const MAX_TEMPERATURE_C = 60;
 export const MIN_DEWPOINT_C = -150;
-/** Largest tolerated excess of dewpoint over temperature before it is an error, K. */
-export const DEWPOINT_EXCESS_TOLERANCE_K = 0.5;
+/**
+ * Fastest wind accepted, m s⁻¹ (about 290 kt): well above the fastest upper-air winds
+ * measured, about 110 m s⁻¹ (from memory; common practice to reject beyond ~150 m s⁻¹).
+ */
+export const MAX_WIND_SPEED_MS = 150;
 /** ln(p_lower / p_upper) above which adjacent levels count as a data gap (≈ 3.3 km; wider than any standard mandatory-level spacing). */
 const DATA_GAP_LOG_RATIO = 0.45;
 
@@ -103,33 +106,53 @@ function toNumber(value: unknown): number | null {
   return null;
 }
 
+/** Days in a month of a (proleptic Gregorian) year. */
+function daysInMonth(year: number, month: number): number {
+  return [31, year % 4 === 0 && (year % 100 !== 0 || year % 400 === 0) ? 29 : 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31][month - 1] ?? 0;
+}
+
+/**
+ * An ISO 8601 time with a time zone, checked field by field (30 February is refused rather
+ * than rolled over to 2 March), as milliseconds; null when it is not one.
+ */
+export function parseValidTime(text: string): number | null {
+  const match = /^(\d{4})-(\d\d)-(\d\d)T(\d\d):(\d\d)(?::(\d\d)(?:\.\d+)?)?(Z|[+-]\d\d:?\d\d)$/i.exec(text);
+  if (!match) return null;
+  const [year, month, day, hour, minute, second] = [1, 2, 3, 4, 5, 6].map((i) => Number(match[i] ?? 0)) as [number, number, number, number, number, number];
+  if (year < 1900 || year > 9999 || month < 1 || month > 12 || day < 1 || day > daysInMonth(year, month) || hour > 23 || minute > 59 || second > 59) return null;
+  const milliseconds = Date.parse(text);
+  return Number.isNaN(milliseconds) ? null : milliseconds;
+}
+
 function checkMetadata(raw: RawMetadata, locator: Locator, issues: IssueList, lowestHeightM: number | null): SoundingMetadata {
   const station = typeof raw.station === 'string' ? raw.station.trim() : '';
   if (station === '') {
-    issues.error('MISSING_METADATA', `the station identifier is missing. Add a line "# station: ABC".`, locator.metadata('station'));
+    issues.warning('MISSING_METADATA', `the station identifier is missing. The sounding can be analysed; a library upload keeps it out of evidence until a station is given (add "# station: ABC").`, locator.metadata('station'));
   }
   const name = typeof raw.name === 'string' ? raw.name.trim() : '';
 
-  const readCoordinate = (key: 'latitude' | 'longitude', limit: number): number => {
+  const readCoordinate = (key: 'latitude' | 'longitude', limit: number): number | null => {
     if (raw[key] === undefined || raw[key] === null || raw[key] === '') {
-      issues.error('MISSING_METADATA', `the ${key} is missing. Add a line "# ${key}: <degrees>".`, locator.metadata(key));
-      return NaN;
+      issues.warning('MISSING_METADATA', `the ${key} is missing. The sounding can be analysed; a library upload keeps it out of evidence until it is given (add "# ${key}: <degrees>").`, locator.metadata(key));
+      return null;
     }
     const value = toNumber(raw[key]);
     if (value === null || Math.abs(value) > limit) {
       issues.error('INVALID_METADATA', `the ${key} "${String(raw[key])}" is not a number between −${limit} and ${limit} degrees.`, locator.metadata(key));
-      return NaN;
+      return null;
     }
     return value;
   };
   const latitude = readCoordinate('latitude', 90);
   const longitude = readCoordinate('longitude', 180);
 
-  let elevationM = NaN;
+  let elevationM: number | null = null;
   if (raw.elevationM === undefined || raw.elevationM === null || raw.elevationM === '') {
     if (lowestHeightM !== null) {
       elevationM = lowestHeightM;
       issues.warning('MISSING_METADATA', `the station elevation is missing; the height of the lowest level (${lowestHeightM} m) is used.`, locator.metadata('elevationM'));
+    } else {
+      issues.warning('MISSING_METADATA', `the station elevation and the lowest height are missing; heights above ground start at 0 m (results above ground do not depend on the elevation).`, locator.metadata('elevationM'));
     }
   } else {
     const value = toNumber(raw.elevationM);
@@ -140,27 +163,26 @@ function checkMetadata(raw: RawMetadata, locator: Locator, issues: IssueList, lo
     }
   }
 
-  let validTime = '';
+  let validTime: string | null = null;
   if (raw.validTime === undefined || raw.validTime === null || raw.validTime === '') {
-    issues.error('MISSING_METADATA', `the valid time is missing. Add a line "# valid: 2027-04-18T18:00:00Z".`, locator.metadata('validTime'));
+    issues.warning('MISSING_METADATA', `the valid time is missing. The sounding can be analysed; a library upload keeps it out of evidence until it is given (add "# valid: 2027-04-18T18:00:00Z").`, locator.metadata('validTime'));
   } else {
     const text = String(raw.validTime).trim();
-    const hasZone = /(?:Z|[+-]\d\d:?\d\d)$/i.test(text);
-    const milliseconds = /^\d{4}-\d\d-\d\dT\d\d:\d\d/.test(text) && hasZone ? Date.parse(text) : NaN;
-    if (Number.isNaN(milliseconds)) {
-      issues.error('INVALID_METADATA', `the valid time "${text}" is not an ISO 8601 time with a time zone, e.g. 2027-04-18T18:00:00Z.`, locator.metadata('validTime'));
+    const milliseconds = parseValidTime(text);
+    if (milliseconds === null) {
+      issues.error('INVALID_METADATA', `the valid time "${text}" is not a real date and time with a time zone (ISO 8601, e.g. 2027-04-18T18:00:00Z; months have their own number of days).`, locator.metadata('validTime'));
     } else {
       validTime = new Date(milliseconds).toISOString();
     }
   }
 
-  let source: SoundingSource = 'observed';
+  let source: SoundingSource = 'unknown';
   if (raw.source === undefined || raw.source === null || raw.source === '') {
-    issues.warning('MISSING_METADATA', `the source is missing; the sounding is taken as observed. Add "# source: observed" or "# source: model".`, locator.metadata('source'));
+    issues.warning('MISSING_METADATA', `the source is missing; it is recorded as "unknown". Add "# source: observed" or "# source: model".`, locator.metadata('source'));
   } else {
     const text = String(raw.source).trim().toLowerCase();
-    if (text === 'observed' || text === 'model') source = text;
-    else issues.error('INVALID_METADATA', `the source "${String(raw.source)}" must be "observed" or "model".`, locator.metadata('source'));
+    if (text === 'observed' || text === 'model' || text === 'unknown') source = text;
+    else issues.error('INVALID_METADATA', `the source "${String(raw.source)}" must be "observed", "model" or "unknown".`, locator.metadata('source'));
   }
   return { station, name, latitude, longitude, elevationM, validTime, source };
 }
@@ -169,7 +191,7 @@ function checkMetadata(raw: RawMetadata, locator: Locator, issues: IssueList, lo
  * Check raw levels and metadata and build a sounding: the checks shared by the CSV parser
  * and the structured validator, so both report the same codes.
  *
- * Every class of bad input in SCIENCE.md gives an error or a warning with its place; no
+ * Every class of bad input in docs/sounding-format.md gives an error or a warning with its place; no
  * input throws. Heights that are missing are filled with the hypsometric equation using
  * virtual temperature (WallaceHobbs2006 eq. 3.29), starting from the station elevation.
  * @param rawLevels - the levels in input order
@@ -242,14 +264,14 @@ export function checkSounding(
         issues.error('DEWPOINT_OUT_OF_RANGE', `dewpoint ${dewpoint} °C at ${pressure} hPa is outside ${MIN_DEWPOINT_C} to ${MAX_TEMPERATURE_C} °C.`, locator.level(index, 'dewpoint'));
         continue;
       }
-      if (dewpoint > temperature + DEWPOINT_EXCESS_TOLERANCE_K) {
-        issues.error('DEWPOINT_ABOVE_TEMPERATURE', `dewpoint ${dewpoint} °C is above the temperature ${temperature} °C at ${pressure} hPa by more than ${DEWPOINT_EXCESS_TOLERANCE_K} K. Check that the columns are not swapped.`, locator.level(index, 'dewpoint'));
-        continue;
-      }
       if (dewpoint > temperature) {
-        issues.warning('DEWPOINT_ABOVE_TEMPERATURE', `dewpoint ${dewpoint} °C is slightly above the temperature ${temperature} °C at ${pressure} hPa; it is set equal to the temperature.`, locator.level(index, 'dewpoint'));
+        issues.warning('DEWPOINT_ABOVE_TEMPERATURE', `dewpoint ${dewpoint} °C is above the temperature ${temperature} °C at ${pressure} hPa; it is set equal to the temperature${dewpoint - temperature > 0.5 ? ' (check that the columns are not swapped)' : ''}.`, locator.level(index, 'dewpoint'));
         dewpoint = temperature;
       }
+    }
+    if ((level.uMs !== null && Math.abs(level.uMs) > MAX_WIND_SPEED_MS) || (level.vMs !== null && Math.abs(level.vMs) > MAX_WIND_SPEED_MS)) {
+      issues.error('WIND_OUT_OF_RANGE', `the wind at ${pressure} hPa is faster than ${MAX_WIND_SPEED_MS} m/s; check the unit.`, locator.level(index, 'wind'));
+      continue;
     }
     candidates.push({ index, pressureHpa: pressure, heightM: level.heightM, temperatureC: temperature, dewpointC: dewpoint, uMs: level.uMs, vMs: level.vMs });
   }
@@ -257,30 +279,30 @@ export function checkSounding(
     issues.warning('PRESSURE_OUT_OF_RANGE', `${droppedAbove10} level(s) above ${MIN_PRESSURE_HPA} hPa are left out (the engine works between ${MIN_PRESSURE_HPA} and ${MAX_PRESSURE_HPA} hPa).`, firstDroppedAbove10);
   }
 
-  // Order: strictly decreasing, or strictly increasing (then reversed); anything else is an error.
-  let increasing = 0;
-  let decreasing = 0;
+  // Order: any order is sorted by decreasing pressure (stable); identical duplicates merge,
+  // conflicting ones are refused (which one is right cannot be guessed).
+  let outOfOrder = 0;
   for (let i = 1; i < candidates.length; i++) {
+    if ((candidates[i] as Candidate).pressureHpa > (candidates[i - 1] as Candidate).pressureHpa) outOfOrder++;
+  }
+  if (outOfOrder > 0 && outOfOrder < candidates.length - 1) {
+    issues.warning('LEVELS_SORTED', `the levels are not in pressure order; they are sorted by decreasing pressure.`);
+  }
+  candidates.sort((a, b) => b.pressureHpa - a.pressureHpa || a.index - b.index);
+  const same = (a: Candidate, b: Candidate): boolean =>
+    a.heightM === b.heightM && a.temperatureC === b.temperatureC && a.dewpointC === b.dewpointC && a.uMs === b.uMs && a.vMs === b.vMs;
+  for (let i = candidates.length - 1; i > 0; i--) {
     const previous = candidates[i - 1] as Candidate;
     const current = candidates[i] as Candidate;
-    if (current.pressureHpa === previous.pressureHpa) {
-      issues.error('DUPLICATE_PRESSURE', `two levels have the pressure ${current.pressureHpa} hPa. Remove one of them.`, locator.level(current.index, 'pressure'));
-    } else if (current.pressureHpa > previous.pressureHpa) increasing++;
-    else decreasing++;
+    if (current.pressureHpa !== previous.pressureHpa) continue;
+    const firstLine = describeLocation(locator.inputName, locator.level(previous.index, 'pressure'));
+    if (same(previous, current)) {
+      issues.warning('DUPLICATE_PRESSURE', `the level at ${current.pressureHpa} hPa appears twice with the same values (also ${firstLine}); it is kept once.`, locator.level(current.index, 'pressure'));
+      candidates.splice(i, 1);
+    } else {
+      issues.error('DUPLICATE_PRESSURE', `two levels have the pressure ${current.pressureHpa} hPa with different values (the other is ${firstLine}). Keep the right one.`, locator.level(current.index, 'pressure'));
+    }
   }
-  if (increasing > 0 && decreasing > 0) {
-    const minority = increasing < decreasing ? 'up' : 'down';
-    const offender = candidates.find((c, i) => {
-      const previous = candidates[i - 1];
-      return previous !== undefined && (minority === 'up' ? c.pressureHpa > previous.pressureHpa : c.pressureHpa < previous.pressureHpa);
-    });
-    issues.error(
-      'PRESSURE_NOT_MONOTONIC',
-      `levels are out of order at ${offender?.pressureHpa ?? '?'} hPa: pressure must only decrease (or only increase) from one row to the next. Sort the levels and upload again.`,
-      offender ? locator.level(offender.index, 'pressure') : {},
-    );
-  }
-  if (increasing > 0 && decreasing === 0) candidates.reverse();
 
   const lowest = candidates[0];
   const metadata = checkMetadata(rawMetadata, locator, issues, lowest?.heightM ?? null);
@@ -291,7 +313,7 @@ export function checkSounding(
   }
   const top = candidates[candidates.length - 1] as Candidate;
   if (top.pressureHpa > REQUIRED_TOP_HPA) {
-    issues.error('TOP_TOO_LOW', `the sounding ends at ${top.pressureHpa} hPa; it must reach ${REQUIRED_TOP_HPA} hPa or higher for the analysis.`, locator.level(top.index, 'pressure'));
+    issues.warning('TOP_TOO_LOW', `the sounding ends at ${top.pressureHpa} hPa, below ${REQUIRED_TOP_HPA} hPa: it is analysed and flagged (no lifted index; CAPE and EL may be cut at the top).`, locator.level(top.index, 'pressure'));
   }
   if ((lowest as Candidate).dewpointC === null) {
     issues.error('SURFACE_DEWPOINT_MISSING', `the lowest level (${(lowest as Candidate).pressureHpa} hPa) has no dewpoint; a surface parcel needs one.`, locator.level((lowest as Candidate).index, 'dewpoint'));
@@ -306,13 +328,24 @@ export function checkSounding(
   };
   const base = lowest as Candidate;
   if (base.heightM === null) {
-    if (Number.isFinite(metadata.elevationM)) base.heightM = metadata.elevationM;
-    else {
-      issues.error('MISSING_HEIGHT', `the lowest level has no height and there is no "# elevation_m:" line to fill heights from.`, locator.level(base.index, 'height'));
-    }
-  } else if (Number.isFinite(metadata.elevationM) && Math.abs(base.heightM - metadata.elevationM) > 50) {
+    base.heightM = metadata.elevationM ?? 0;
+  } else if (metadata.elevationM !== null && Math.abs(base.heightM - metadata.elevationM) > 50) {
     issues.warning('ELEVATION_MISMATCH', `the lowest level height ${base.heightM} m differs from the station elevation ${metadata.elevationM} m by more than 50 m.`, locator.level(base.index, 'height'));
   }
+  // Reported heights that do not increase upward cannot be used: all heights above the lowest
+  // level are then computed with the hypsometric equation.
+  let heightsDropped = false;
+  for (let i = 1; i < candidates.length; i++) {
+    const current = candidates[i] as Candidate;
+    let below: number | null = null;
+    for (let j = i - 1; j >= 0 && below === null; j--) below = (candidates[j] as Candidate).heightM;
+    if (current.heightM !== null && below !== null && current.heightM <= below) {
+      issues.warning('HEIGHT_NOT_INCREASING', `height ${current.heightM} m at ${current.pressureHpa} hPa is not above the height ${below} m of the level below; the heights above the lowest level are computed with the hypsometric equation instead.`, locator.level(current.index, 'height'));
+      heightsDropped = true;
+      break;
+    }
+  }
+  if (heightsDropped) for (let i = 1; i < candidates.length; i++) (candidates[i] as Candidate).heightM = null;
   let windMissing = 0;
   for (let i = 0; i < candidates.length; i++) {
     const current = candidates[i] as Candidate;
@@ -321,8 +354,6 @@ export function checkSounding(
     const previous = candidates[i - 1] as Candidate;
     if (current.heightM === null && previous.heightM !== null) {
       current.heightM = previous.heightM + layerThickness(previous.pressureHpa, current.pressureHpa, virtual(previous), virtual(current));
-    } else if (current.heightM !== null && previous.heightM !== null && current.heightM <= previous.heightM) {
-      issues.error('HEIGHT_NOT_INCREASING', `height ${current.heightM} m at ${current.pressureHpa} hPa is not above the height ${previous.heightM} m of the level below. Heights must increase as pressure decreases.`, locator.level(current.index, 'height'));
     }
     if (Math.log(previous.pressureHpa / current.pressureHpa) > DATA_GAP_LOG_RATIO) {
       issues.warning('DATA_GAP', `no data between ${previous.pressureHpa} and ${current.pressureHpa} hPa (about ${Math.round((29.3 * 250 * Math.log(previous.pressureHpa / current.pressureHpa)) / 100) / 10} km); values there are interpolated.`, locator.level(current.index, 'pressure'));

@@ -34,7 +34,8 @@ const badCsv = `# station: ZZ9
 # valid: 2027-04-18T18:00:00Z
 pressure_hPa,temperature_C,dewpoint_C
 1000,25,20
-950,22,24
+950,22,18
+950,21,17
 900,18,10
 850,15,5
 700,2,-10
@@ -65,15 +66,64 @@ describe('POST /api/soundings/uploads', () => {
     const before = await rowCount();
     const res = await forecaster
       .post('/api/soundings/uploads')
-      .attach('files', fixture('oax_20140616_19z.csv'), 'again.csv')
+      .attach('files', Buffer.from(fixture('bna_20021111_00z.csv').toString('utf8').replace('# station: BNA', '# station: MIX')), 'good.csv')
       .attach('files', Buffer.from(badCsv), 'bad.csv');
     expect(res.status).toBe(200);
     const bad = res.body.results.find((r: { fileName: string }) => r.fileName === 'bad.csv');
     expect(bad.status).toBe('rejected');
     expect(bad.soundingId).toBeNull();
-    const issue = bad.issues.find((i: { code: string }) => i.code === 'DEWPOINT_ABOVE_TEMPERATURE');
-    expect(issue).toMatchObject({ severity: 'error', line: 8, column: 'dewpoint_C' });
+    const issue = bad.issues.find((i: { code: string }) => i.code === 'DUPLICATE_PRESSURE');
+    expect(issue).toMatchObject({ severity: 'error', line: 9, column: 'pressure_hPa' });
     expect(await rowCount()).toBe(before + 1);
+  });
+
+  // Issue 11 item 8: before the fix, a file the database refused (here a NUL character in the
+  // station id) made the whole request a 500 while file 1 stayed stored.
+  it('When file 2 of 3 cannot be stored, then 200 with its own rejected result, and files 1 and 3 are stored', async () => {
+    const before = await rowCount();
+    const text = fixture('bna_20021111_00z.csv').toString('utf8');
+    const res = await forecaster
+      .post('/api/soundings/uploads')
+      .attach('files', Buffer.from(text.replace('# station: BNA', '# station: AT1')), 'one.csv')
+      .attach('files', Buffer.from(text.replace('# station: BNA', '# station: A\u0000B')), 'two.csv')
+      .attach('files', Buffer.from(text.replace('# station: BNA', '# station: AT3')), 'three.csv');
+    expect(res.status).toBe(200);
+    expect(res.body.results.map((r: { status: string }) => r.status)).toEqual(['accepted-with-warnings', 'rejected', 'accepted-with-warnings']);
+    expect(res.body.results[1].soundingId).toBeNull();
+    expect(await rowCount()).toBe(before + 2);
+  });
+
+  it('When the same file is sent three times, then it is stored once and reported as a duplicate twice (issue 11 item 8)', async () => {
+    const before = await rowCount();
+    const text = Buffer.from(fixture('bna_20021111_00z.csv').toString('utf8').replace('# station: BNA', '# station: DUP'));
+    const first = await forecaster.post('/api/soundings/uploads').attach('files', text, 'dup.csv');
+    const again = await forecaster.post('/api/soundings/uploads').attach('files', text, 'dup.csv').attach('files', text, 'dup-copy.csv');
+    expect(first.body.results[0].status).toBe('accepted-with-warnings');
+    expect(again.status).toBe(200);
+    expect(again.body.results.map((r: { status: string }) => r.status)).toEqual(['duplicate', 'duplicate']);
+    expect(again.body.results[0].soundingId).toBe(first.body.results[0].soundingId);
+    expect(again.body.duplicates).toBe(2);
+    expect(await rowCount()).toBe(before + 1);
+  });
+
+  it('When a file has no metadata at all, then it is kept, reported as not yet evidence, and an author can fill the fields in', async () => {
+    const text = fixture('bna_20021111_00z.csv').toString('utf8').split('\n').filter((line) => !line.startsWith('#')).join('\n');
+    const res = await forecaster.post('/api/soundings/uploads').attach('files', Buffer.from(text), 'bare.csv');
+    expect(res.status).toBe(200);
+    const result = res.body.results[0];
+    expect(result.status).toBe('accepted-with-warnings');
+    expect(result.missingForEvidence).toEqual(['station', 'latitude', 'longitude', 'validTime']);
+    expect(result.issues.filter((i: { code: string }) => i.code === 'NOT_YET_EVIDENCE')).toHaveLength(4);
+    const detail = await forecaster.get(`/api/soundings/${result.soundingId}`);
+    expect(detail.body.source).toBe('unknown');
+    expect(detail.body.validTime).toBeNull();
+    const body = { station: 'BNA', name: 'Nashville', latitude: 36.25, longitude: -86.57, elevationM: 180, validTime: '2002-11-11T00:00:00Z', source: 'observed' };
+    const admin = await signedInAgent(sd.app, 'admin');
+    expect((await admin.patch(`/api/soundings/${result.soundingId}/metadata`).send(body)).status).toBe(403);
+    expect((await forecaster.patch(`/api/soundings/${result.soundingId}/metadata`).send({ ...body, validTime: '2002-02-30T00:00:00Z' })).status).toBe(400);
+    const saved = await forecaster.patch(`/api/soundings/${result.soundingId}/metadata`).send(body);
+    expect(saved.status).toBe(200);
+    expect(saved.body).toMatchObject({ stationId: 'BNA', latitude: 36.25, validTime: '2002-11-11T00:00:00.000Z', source: 'observed' });
   });
 
   it('When a file is larger than 2 MB, then 413 explains the limit and nothing is stored', async () => {
@@ -112,6 +162,8 @@ describe('POST /api/soundings (JSON)', () => {
     { pressureHpa: 500, temperatureC: -12, dewpointC: -30, uMs: 26, vMs: 8 },
     { pressureHpa: 400, temperatureC: -25, dewpointC: -42, uMs: 30, vMs: 6 },
     { pressureHpa: 300, temperatureC: -40, dewpointC: -55, uMs: 34, vMs: 4 },
+    { pressureHpa: 200, temperatureC: -54, dewpointC: -70, uMs: 36, vMs: 2 },
+    { pressureHpa: 150, temperatureC: -55, dewpointC: -75, uMs: 30, vMs: 0 },
   ];
   const metadata = { station: 'MP01', name: 'Model point', latitude: 38.2, longitude: -92.4, elevationM: 150, validTime: '2027-04-18T21:00:00Z', source: 'model' };
 
@@ -121,14 +173,21 @@ describe('POST /api/soundings (JSON)', () => {
     expect(res.body.results[0].status).toBe('accepted');
   });
 
-  it('When a level is out of order, then 400 names the level', async () => {
-    const res = await forecaster.post('/api/soundings').send({ metadata, levels: [...levels.slice(0, 2), levels[4], levels[3], levels[2], levels[5], levels[6]] });
+  it('When levels are out of order, then they are sorted and stored with a LEVELS_SORTED warning', async () => {
+    const res = await forecaster.post('/api/soundings').send({ metadata: { ...metadata, station: 'MP02' }, levels: [...levels.slice(0, 2), levels[4], levels[3], levels[2], ...levels.slice(5)] });
+    expect(res.status).toBe(201);
+    expect(res.body.results[0].issues.map((i: { code: string }) => i.code)).toContain('LEVELS_SORTED');
+  });
+
+  it('When two levels share a pressure with different values, then 400 names the level', async () => {
+    const res = await forecaster.post('/api/soundings').send({ metadata: { ...metadata, station: 'MP03' }, levels: [...levels, { ...levels[3], temperatureC: 4 }] });
     expect(res.status).toBe(400);
-    expect(res.body.error.issues[0].path).toMatch(/^levels\.\d/);
+    expect(res.body.error.message).toMatch(/different values/);
+    expect(res.body.error.issues.map((i: { path: string }) => i.path)).toContain('levels.9.pressureHpa');
   });
 
   it('When a batch has one good and one bad sounding, then the answer lists both results', async () => {
-    const res = await forecaster.post('/api/soundings/batch').send({ soundings: [{ metadata, levels }, { metadata: { ...metadata, latitude: 95 }, levels }] });
+    const res = await forecaster.post('/api/soundings/batch').send({ soundings: [{ metadata: { ...metadata, station: 'MP04' }, levels }, { metadata: { ...metadata, latitude: 95 }, levels }] });
     expect(res.status).toBe(200);
     expect(res.body.results.map((r: { status: string }) => r.status)).toEqual(['accepted', 'rejected']);
   });

@@ -30,7 +30,7 @@ export const evidenceSixAreas: BenchFigure = {
       modified: false,
       figures: {
         mlCape: random() * 4000, muCape: random() * 4500, mlCin: -random() * 200, mlLclHeightM: 500 + random() * 1500, precipitableWaterMm: 10 + random() * 40,
-        bulkShear0to6kmMs: random() * 35, srh0to1km: random() * 300, stp: random() * 5, scp: random() * 15, surfaceDewpointC: 5 + random() * 18, surfaceMixingRatioGkg: 6 + random() * 12,
+        bulkShear0to6kmMs: random() * 35, srh0to1km: random() * 300, stp: random() * 5, scp: random() * 15, surfaceDewpointC: 5 + random() * 18, surfaceMixingRatioGkg: 6 + random() * 12, flagCount: 0,
       },
     }));
     const core = demoOutlookAreas[demoOutlookAreas.length - 1];

@@ -1,13 +1,17 @@
-import { doublePrecision, index, jsonb, pgEnum, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { sql } from 'drizzle-orm';
+import { doublePrecision, index, jsonb, pgEnum, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 import { offices } from './offices';
 import { users } from './auth';
 
-export const soundingSourceEnum = pgEnum('sounding_source', ['observed', 'model']);
+export const soundingSourceEnum = pgEnum('sounding_source', ['observed', 'model', 'unknown']);
 
 /**
  * A balloon (observed) or model forecast sounding. Levels are stored as parsed (SI-ish units);
  * the analysis is cached with the engine version that produced it and recomputed when the
  * engine version changes. A modified (what-if) sounding points at its original.
+ * Station ('' when unknown), position and valid time may be missing after an upload: such a
+ * sounding stays out of evidence until an author fills them in. `contentHash` (SHA-256 of
+ * the parsed metadata and levels) makes a re-sent file a duplicate instead of a second row.
  */
 export const soundings = pgTable(
   'soundings',
@@ -18,10 +22,10 @@ export const soundings = pgTable(
       .references(() => offices.id, { onDelete: 'cascade' }),
     stationId: text().notNull(),
     stationName: text().notNull().default(''),
-    latitude: doublePrecision().notNull(),
-    longitude: doublePrecision().notNull(),
-    elevationM: doublePrecision().notNull(),
-    validTime: timestamp({ withTimezone: true }).notNull(),
+    latitude: doublePrecision(),
+    longitude: doublePrecision(),
+    elevationM: doublePrecision(),
+    validTime: timestamp({ withTimezone: true }),
     source: soundingSourceEnum().notNull(),
     fileName: text(),
     levels: jsonb().$type<unknown[]>().notNull(),
@@ -32,7 +36,13 @@ export const soundings = pgTable(
     modificationName: text(),
     modificationNote: text(),
     uploadedBy: text().references(() => users.id, { onDelete: 'set null' }),
+    contentHash: text(),
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index().on(t.officeId, t.validTime), index().on(t.stationId), index().on(t.modifiedFromId)],
+  (t) => [
+    index().on(t.officeId, t.validTime),
+    index().on(t.stationId),
+    index().on(t.modifiedFromId),
+    uniqueIndex('soundings_office_id_content_hash_idx').on(t.officeId, t.contentHash).where(sql`${t.modifiedFromId} is null`),
+  ],
 );

@@ -15,7 +15,7 @@ const statsSchema = z.object({
 const areaEvidenceReportSchema = z.object({
   areaId: z.string(),
   levelKey: z.string(),
-  evidence: z.object({ count: z.number(), soundingIds: z.array(z.string()), stats: z.record(z.string(), statsSchema) }),
+  evidence: z.object({ count: z.number(), flaggedCount: z.number().default(0), soundingIds: z.array(z.string()), stats: z.record(z.string(), statsSchema) }),
   support: z.object({ result: z.enum(['supported', 'thin', 'exceeds', 'none']), reasons: z.array(z.string()) }),
   checks: z.array(
     z.object({

@@ -55,6 +55,12 @@ export function EvidencePanel({ report, stale, units, stationOf }: EvidencePanel
             {evidence.count}
           </span>{' '}
           {evidence.count === 1 ? 'sounding' : 'soundings'} inside
+          {evidence.flaggedCount > 0 ? (
+            <span className="text-warning" data-testid="evidence-flagged-count">
+              {' '}
+              ({evidence.flaggedCount} with quality flags)
+            </span>
+          ) : null}
         </p>
         <SupportBadge result={support.result} />
       </div>

@@ -91,11 +91,12 @@ function Workspace({ initial, office, mayAuthor }: { initial: Outlook; office: O
   const points = useMemo<FeatureCollection<Point, PointProperties>>(
     () => ({
       type: 'FeatureCollection',
-      features: (soundings.data?.soundings ?? []).map((s) => {
+      features: (soundings.data?.soundings ?? []).flatMap((s) => {
         const value = s.figures[parameter];
+        if (s.longitude === null || s.latitude === null) return [];
         return {
-          type: 'Feature',
-          geometry: { type: 'Point', coordinates: [s.longitude, s.latitude] },
+          type: 'Feature' as const,
+          geometry: { type: 'Point' as const, coordinates: [s.longitude, s.latitude] },
           properties: { id: s.id, colour: pointColour(parameter, s.figures), label: `${s.stationId} (${s.source}): ${pointParameters[parameter].label} ${value === null ? '—' : formatNumber(value, parameter === 'stp' ? 1 : 0)}` },
         };
       }),

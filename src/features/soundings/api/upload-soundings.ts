@@ -45,12 +45,13 @@ async function postUploadBatch(files: readonly File[]): Promise<UploadResponse> 
  * answers into one result list, in the order the files were given.
  */
 export async function uploadSoundingFiles(files: readonly File[]): Promise<UploadResponse> {
-  const joined: UploadResponse = { results: [], accepted: 0, rejected: 0 };
+  const joined: UploadResponse = { results: [], accepted: 0, duplicates: 0, rejected: 0 };
   for (let start = 0; start < files.length; start += soundingLimits.maxFilesPerBatch) {
     const batch = await postUploadBatch(files.slice(start, start + soundingLimits.maxFilesPerBatch));
     joined.results.push(...batch.results);
     joined.accepted += batch.accepted;
     joined.rejected += batch.rejected;
+    joined.duplicates += batch.duplicates;
   }
   return joined;
 }

@@ -11,7 +11,9 @@ interface SoundingHeaderProps {
   units: UnitFormatters;
 }
 
-const coordinate = (value: number, positive: string, negative: string) => `${Math.abs(value).toFixed(2)}° ${value >= 0 ? positive : negative}`;
+const coordinate = (value: number | null, positive: string, negative: string) => (value === null ? `no ${positive === 'N' ? 'latitude' : 'longitude'}` : `${Math.abs(value).toFixed(2)}° ${value >= 0 ? positive : negative}`);
+
+const sourceLabel = { observed: 'Observed', model: 'Model', unknown: 'Source unknown' } as const;
 
 /** Station, place, valid time (UTC and office time), source, uploader; modified soundings link to their original. */
 export function SoundingHeader({ sounding, timeZone, units }: SoundingHeaderProps) {
@@ -23,10 +25,10 @@ export function SoundingHeader({ sounding, timeZone, units }: SoundingHeaderProp
       </Link>
       <div className="flex flex-wrap items-baseline gap-x-3 gap-y-1">
         <h1 className="text-xl font-semibold tracking-tight text-ink">
-          {sounding.stationId}
+          {sounding.stationId || 'No station'}
           {sounding.stationName ? <span className="font-normal text-ink-muted"> · {sounding.stationName}</span> : null}
         </h1>
-        <span className="rounded bg-sunken px-1.5 py-0.5 text-[12px] font-semibold text-ink-muted">{sounding.source === 'observed' ? 'Observed' : 'Model'}</span>
+        <span className="rounded bg-sunken px-1.5 py-0.5 text-[12px] font-semibold text-ink-muted">{sourceLabel[sounding.source]}</span>
         {sounding.modificationName !== null ? <ModifiedBadge name={sounding.modificationName} /> : null}
       </div>
       <dl className="mt-2 flex flex-wrap gap-x-6 gap-y-1 text-[13px] text-ink-muted">
@@ -39,7 +41,7 @@ export function SoundingHeader({ sounding, timeZone, units }: SoundingHeaderProp
         <div>
           <dt className="sr-only">Position</dt>
           <dd>
-            {coordinate(sounding.latitude, 'N', 'S')}, {coordinate(sounding.longitude, 'E', 'W')} · elevation {units.height(sounding.elevationM)}
+            {coordinate(sounding.latitude, 'N', 'S')}, {coordinate(sounding.longitude, 'E', 'W')} · elevation {sounding.elevationM === null ? 'unknown' : units.height(sounding.elevationM)}
           </dd>
         </div>
         {sounding.uploadedByName ? (

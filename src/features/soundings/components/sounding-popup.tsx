@@ -16,7 +16,7 @@ export function SoundingPopup({ sounding, units }: { sounding: SoundingSummary; 
         {sounding.stationName ? <span className="font-normal text-ink-muted"> · {sounding.stationName}</span> : null}
       </p>
       <p className="text-[12px] text-ink-muted">
-        {formatValidTimeUtc(sounding.validTime)} · {sounding.source === 'observed' ? 'Observed' : 'Model'}
+        {formatValidTimeUtc(sounding.validTime)} · {sounding.source === 'observed' ? 'Observed' : sounding.source === 'model' ? 'Model' : 'Source unknown'}
       </p>
       {sounding.modificationName !== null ? (
         <p className="mt-1">

@@ -12,6 +12,7 @@ interface UploadResultsProps {
 const statusText: Record<UploadResult['status'], string> = {
   accepted: 'Accepted',
   'accepted-with-warnings': 'Accepted with warnings',
+  duplicate: 'Already in the library (not stored again)',
   rejected: 'Rejected',
 };
 
@@ -21,6 +22,8 @@ function StatusIcon({ status }: { status: UploadResult['status'] }) {
       return <CircleCheck aria-hidden className="size-4 shrink-0 text-ok" />;
     case 'accepted-with-warnings':
       return <TriangleAlert aria-hidden className="size-4 shrink-0 text-warning" />;
+    case 'duplicate':
+      return <CircleCheck aria-hidden className="size-4 shrink-0 text-ink-muted" />;
     case 'rejected':
       return <CircleAlert aria-hidden className="size-4 shrink-0 text-danger" />;
   }

@@ -28,7 +28,7 @@ const parameterOptions = mapFigureKeys.map((key) => ({ value: key, label: figure
 
 function distinctValidTimes(soundings: readonly SoundingSummary[]): string[] {
   const times = new Set<string>();
-  for (const sounding of soundings) times.add(new Date(sounding.validTime).toISOString());
+  for (const sounding of soundings) if (sounding.validTime !== null) times.add(new Date(sounding.validTime).toISOString());
   return [...times].sort().reverse();
 }
 
@@ -53,16 +53,16 @@ export function SoundingMapPage() {
     const figure = figureDefinitions[parameter];
     return {
       type: 'FeatureCollection',
-      features: soundings.map((sounding) => ({
-        type: 'Feature',
-        geometry: { type: 'Point', coordinates: [sounding.longitude, sounding.latitude] },
+      features: soundings.flatMap((sounding) => (sounding.longitude === null || sounding.latitude === null ? [] : [{
+        type: 'Feature' as const,
+        geometry: { type: 'Point' as const, coordinates: [sounding.longitude, sounding.latitude] },
         properties: {
           id: sounding.id,
           colour: colourFor(sounding.figures[parameter], colourScales[parameter]),
           label: `${sounding.stationId}${sounding.modificationName !== null ? ` (modified: ${sounding.modificationName})` : ''}: ${figure.format(sounding.figures[parameter], units)}`,
           dashed: sounding.modificationName !== null,
         },
-      })),
+      }])),
     };
   }, [soundings, parameter, units]);
 

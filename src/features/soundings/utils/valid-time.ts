@@ -1,6 +1,7 @@
 /** Valid times as forecasters read them: UTC first ("16 Jun 2014 19:00 UTC"), office time beside. */
 
-function formatIn(iso: string, timeZone: string, withZoneName: boolean): string {
+function formatIn(iso: string | null, timeZone: string, withZoneName: boolean): string {
+  if (iso === null) return 'no valid time';
   const instant = new Date(iso);
   if (Number.isNaN(instant.getTime())) return '—';
   const text = new Intl.DateTimeFormat('en-GB', {
@@ -19,13 +20,13 @@ function formatIn(iso: string, timeZone: string, withZoneName: boolean): string 
   return `${text} ${zone}`;
 }
 
-export function formatValidTimeUtc(iso: string): string {
+export function formatValidTimeUtc(iso: string | null): string {
   const text = formatIn(iso, 'UTC', false);
   return text === '—' ? text : `${text} UTC`;
 }
 
 /** The same instant in the office's time zone, with its short zone name (e.g. "CDT"). */
-export function formatValidTimeLocal(iso: string, timeZone: string): string {
+export function formatValidTimeLocal(iso: string | null, timeZone: string): string {
   return formatIn(iso, timeZone, true);
 }
 
