@@ -52,6 +52,8 @@ export async function createApp(ctx: AppContext, clientMode: ClientMode): Promis
     legacyHeaders: false,
     // Counted in the database so that several instances agree.
     store: new DatabaseRateLimitStore(ctx.db),
+    // Ignoring X-Forwarded-For unless TRUST_PROXY names the proxy is intended, not a misconfiguration.
+    validate: { xForwardedForHeader: false },
     handler: (_req, res) => {
       res.status(429).json({ error: { code: 'RATE_LIMITED', message: 'Too many sign-in attempts. Wait a minute and try again.' } });
     },
