@@ -10,7 +10,7 @@ import { DatabaseRateLimitStore } from './auth/database-rate-limit-store';
 import { requireAccess } from './auth/require-role';
 import type { AppContext } from './context';
 import { errorHandler, sendError } from './middleware/error-handler';
-import { authEndpointAllowlist, crossSiteGuard, jsonOnlyGuard, noStore, nullCharacterGuard } from './middleware/request-guards';
+import { authEndpointAllowlist, crossSiteGuard, jsonOnlyGuard, noStore, nullCharacterGuard, refuseSourceMaps } from './middleware/request-guards';
 import { requestLogger } from './middleware/request-logger';
 import { apiRoutes } from './routes';
 
@@ -78,6 +78,8 @@ export async function createApp(ctx: AppContext, clientMode: ClientMode): Promis
     const vite = await createServer({ server: { middlewareMode: true }, appType: 'spa' });
     app.use(vite.middlewares);
   } else if (clientMode === 'dist' && existsSync(distDir)) {
+    // Source maps are not built (vite.config.ts); should one be left in dist/, it is not served.
+    app.use(refuseSourceMaps);
     app.use(express.static(distDir, { index: false, maxAge: '1h' }));
     // '/{*splat}' also matches '/' itself (Express 5 path syntax).
     app.get('/{*splat}', (_req, res) => res.sendFile(path.join(distDir, 'index.html')));

@@ -124,3 +124,12 @@ export function authEndpointAllowlist(req: Request, res: Response, next: NextFun
   if (allowedAuthEndpoints.some((e) => e.method === method && e.path.test(path))) return next();
   return sendError(res, appError('NOT_FOUND', 'There is no such API route.'));
 }
+
+/** Source maps are never served: they would publish the client's source. */
+export function refuseSourceMaps(req: Request, res: Response, next: NextFunction) {
+  if (req.path.endsWith('.map')) {
+    res.status(404).type('text').send('Not found');
+    return;
+  }
+  next();
+}

@@ -318,6 +318,22 @@ export async function exportAreasGeoJson(db: Database, outlookId: string): Promi
 }
 
 /**
+ * The geometry with each position cut to [longitude, latitude]. RFC 7946 §3.1.1 allows an
+ * altitude (third element) in a position; risk areas are flat, so it is dropped on import.
+ */
+function withoutAltitude(geometry: unknown): unknown {
+  if (typeof geometry !== 'object' || geometry === null || !('type' in geometry) || !('coordinates' in geometry)) return geometry;
+  const depth = geometry.type === 'Polygon' ? 2 : geometry.type === 'MultiPolygon' ? 3 : undefined;
+  if (depth === undefined) return geometry;
+  const strip = (value: unknown, level: number): unknown => {
+    if (!Array.isArray(value)) return value;
+    if (level === 0) return value.length > 2 && value.every((n) => typeof n === 'number') ? value.slice(0, 2) : value;
+    return value.map((child) => strip(child, level - 1));
+  };
+  return { ...geometry, coordinates: strip(geometry.coordinates, depth) };
+}
+
+/**
  * Reads risk areas from an uploaded GeoJSON document (FeatureCollection, Feature or bare
  * geometry). Each feature needs a Polygon or MultiPolygon and a `level` property that names a
  * ladder key or label; problems are reported per feature. Nothing is saved: the author adds
@@ -345,7 +361,7 @@ export async function importAreasGeoJson(db: Database, document: unknown): Promi
   const areas: RiskAreaInput[] = [];
   features.forEach((raw, index) => {
     const feature = (typeof raw === 'object' && raw !== null ? raw : {}) as { geometry?: unknown; properties?: Record<string, unknown> | null };
-    const geometry = areaGeometrySchema.safeParse(feature.geometry);
+    const geometry = areaGeometrySchema.safeParse(withoutAltitude(feature.geometry));
     if (!geometry.success) {
       issues.push({ path: `features.${index}.geometry`, message: `Feature ${index + 1}: ${geometry.error.issues[0]?.message ?? 'needs a Polygon or MultiPolygon geometry.'}` });
       return;

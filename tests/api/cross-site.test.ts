@@ -37,7 +37,7 @@ describe('issue 11 item 9: cross-site request defence', () => {
   });
 
   it('When Origin is "null" (sandboxed frame), then it is refused', async () => {
-    const res = await request(sd.app).patch('/api/me/preferences').set('Cookie', cookie).set('Origin', 'null').send({ units: { temperature: 'F', height: 'ft', speed: 'mph' } });
+    const res = await request(sd.app).put('/api/me/preferences').set('Cookie', cookie).set('Origin', 'null').send({ units: { temperature: 'F', height: 'ft', speed: 'mph' } });
     expect(res.status).toBe(403);
   });
 
