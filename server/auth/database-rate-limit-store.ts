@@ -1,5 +1,5 @@
 import type { Options, Store, ClientRateLimitInfo } from 'express-rate-limit';
-import { eq, sql } from 'drizzle-orm';
+import { eq, lt, sql } from 'drizzle-orm';
 import type { Database } from '../db/client';
 import { rateLimitHits } from '../db/schema';
 
@@ -11,6 +11,8 @@ import { rateLimitHits } from '../db/schema';
 export class DatabaseRateLimitStore implements Store {
   windowMs = 60_000;
   readonly localKeys = false;
+  /** Every this many increments, rows whose window has ended are deleted, so the table stays small. */
+  private incrementsUntilCleanup = 200;
 
   constructor(
     private readonly db: Database,
@@ -42,6 +44,10 @@ export class DatabaseRateLimitStore implements Store {
       })
       .returning();
     if (!row) throw new Error('rate limit upsert returned no row');
+    if (--this.incrementsUntilCleanup <= 0) {
+      this.incrementsUntilCleanup = 200;
+      await this.db.delete(rateLimitHits).where(lt(rateLimitHits.resetAt, now));
+    }
     return { totalHits: row.hits, resetTime: row.resetAt };
   }
 

@@ -1,4 +1,4 @@
-import { eq, sql } from 'drizzle-orm';
+import { and, eq, isNull, lt, or, sql } from 'drizzle-orm';
 import type { Database } from '../db/client';
 import { signInThrottles } from '../db/schema';
 
@@ -44,6 +44,10 @@ export async function recordFailedSignIn(db: Database, email: string, now = new 
     })
     .returning();
   if (!row) throw new Error('sign-in throttle upsert returned no row');
+  // Forget stale rows now and then (guesses at many made-up addresses must not pile up).
+  if (row.failures === 1) {
+    await db.delete(signInThrottles).where(and(lt(signInThrottles.lastFailureAt, new Date(forgetBefore)), or(isNull(signInThrottles.lockedUntil), lt(signInThrottles.lockedUntil, now))));
+  }
   const lockSeconds = lockSecondsAfter(row.failures);
   if (lockSeconds > 0) {
     await db
