@@ -4,7 +4,8 @@ import tailwindcss from '@tailwindcss/vite';
 
 export default defineConfig({
   plugins: [react(), tailwindcss()],
-  build: { outDir: 'dist', sourcemap: true },
+  // No source maps in the build: dist/ is served as is, and maps would publish the source.
+  build: { outDir: 'dist', sourcemap: false },
   server: { port: 5173 },
   test: {
     projects: [

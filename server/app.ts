@@ -3,12 +3,15 @@ import path from 'node:path';
 import express, { type Express } from 'express';
 import helmet from 'helmet';
 import { rateLimit } from 'express-rate-limit';
-import { pinoHttp } from 'pino-http';
 import { toNodeHandler } from 'better-auth/node';
 import { appError } from '../shared/errors';
+import { appOrigins } from './auth/auth';
+import { DatabaseRateLimitStore } from './auth/database-rate-limit-store';
 import { requireAccess } from './auth/require-role';
 import type { AppContext } from './context';
 import { errorHandler, sendError } from './middleware/error-handler';
+import { authEndpointAllowlist, crossSiteGuard, jsonOnlyGuard, noStore, nullCharacterGuard, refuseSourceMaps } from './middleware/request-guards';
+import { requestLogger } from './middleware/request-logger';
 import { apiRoutes } from './routes';
 
 export type ClientMode = 'vite-dev' | 'dist' | 'none';
@@ -22,8 +25,9 @@ const distDir = path.resolve(import.meta.dirname, '../dist');
 export async function createApp(ctx: AppContext, clientMode: ClientMode): Promise<Express> {
   const app = express();
   app.disable('x-powered-by');
-  app.set('trust proxy', 'loopback');
-  app.use(pinoHttp({ logger: ctx.logger, autoLogging: { ignore: (req) => !req.url?.startsWith('/api') } }));
+  // X-Forwarded-For is believed only from the proxies named in TRUST_PROXY (none by default).
+  app.set('trust proxy', ctx.config.trustProxy ?? false);
+  app.use(requestLogger(ctx.logger));
   app.use(
     helmet({
       // Vite's dev server injects inline scripts; the built client needs none.
@@ -46,15 +50,24 @@ export async function createApp(ctx: AppContext, clientMode: ClientMode): Promis
     limit: ctx.config.authRateLimitPerMinute,
     standardHeaders: 'draft-8',
     legacyHeaders: false,
+    // Counted in the database so that several instances agree.
+    store: new DatabaseRateLimitStore(ctx.db),
+    // Ignoring X-Forwarded-For unless TRUST_PROXY names the proxy is intended, not a misconfiguration.
+    validate: { xForwardedForHeader: false },
     handler: (_req, res) => {
       res.status(429).json({ error: { code: 'RATE_LIMITED', message: 'Too many sign-in attempts. Wait a minute and try again.' } });
     },
   });
-  app.all('/api/auth/*splat', authLimiter, toNodeHandler(ctx.auth));
+  // State-changing requests must come from the app's own pages (see crossSiteGuard).
+  app.use('/api', crossSiteGuard(appOrigins(ctx.config)));
+  app.all('/api/auth/*splat', noStore, authEndpointAllowlist, jsonOnlyGuard, authLimiter, toNodeHandler(ctx.auth));
 
   app.use(express.json({ limit: '5mb' }));
   for (const definition of apiRoutes) {
-    app[definition.method](definition.path, requireAccess(ctx, definition.access), ...(definition.before ?? []), async (req, res) => {
+    // Routes with their own body parser (uploads, one-click unsubscribe) choose their content types.
+    const bodyGuard = definition.before ? [] : [jsonOnlyGuard];
+    const cacheGuard = definition.access.kind === 'public' ? [] : [noStore];
+    app[definition.method](definition.path, ...bodyGuard, nullCharacterGuard, ...cacheGuard, requireAccess(ctx, definition.access), ...(definition.before ?? []), async (req, res) => {
       await definition.handler(ctx, req, res);
     });
   }
@@ -65,6 +78,8 @@ export async function createApp(ctx: AppContext, clientMode: ClientMode): Promis
     const vite = await createServer({ server: { middlewareMode: true }, appType: 'spa' });
     app.use(vite.middlewares);
   } else if (clientMode === 'dist' && existsSync(distDir)) {
+    // Source maps are not built (vite.config.ts); should one be left in dist/, it is not served.
+    app.use(refuseSourceMaps);
     app.use(express.static(distDir, { index: false, maxAge: '1h' }));
     // '/{*splat}' also matches '/' itself (Express 5 path syntax).
     app.get('/{*splat}', (_req, res) => res.sendFile(path.join(distDir, 'index.html')));

@@ -1,11 +1,12 @@
 import type { Server } from 'node:http';
 import type { Express } from 'express';
-import { pino, type Logger } from 'pino';
+import type { Logger } from 'pino';
 import { createApp, type ClientMode } from './app';
 import { createAuth } from './auth/auth';
 import type { Config } from './config';
 import type { AppContext } from './context';
 import { openDatabase } from './db/client';
+import { createLogger } from './middleware/request-logger';
 import { startMailCatcher, type MailCatcher } from './mail/mail-catcher';
 import { createMailer } from './mail/send-mail';
 import { sendPasswordResetMail, sendVerificationMail, storeCaughtMail } from './services/mail.service';
@@ -33,7 +34,7 @@ export interface Stormdraft {
  * set, seeds the office (and the demo data outside production) and builds the app.
  */
 export async function startStormdraft(config: Config, options: StartOptions): Promise<Stormdraft> {
-  const logger = options.logger ?? pino({ level: config.logLevel });
+  const logger = options.logger ?? createLogger(config.logLevel);
   const database = await openDatabase({ databaseUrl: config.databaseUrl, dataDir: config.dataDir, loadDataDir: options.loadDataDir });
   const db = database.db;
   const catcher = config.smtpUrl ? undefined : await startMailCatcher((message) => storeCaughtMail(db, message));
@@ -41,7 +42,7 @@ export async function startStormdraft(config: Config, options: StartOptions): Pr
   const auth = createAuth(config, db, {
     sendResetPassword: (input) => sendPasswordResetMail(db, mailer, input),
     sendVerificationEmail: (input) => sendVerificationMail(db, mailer, input),
-  });
+  }, logger);
   const ctx: AppContext = { config, db, auth, mailer, logger, ping: database.ping };
   if (config.seedDemo) await seedDemo(db, auth, config);
   else await ensureOffice(db);

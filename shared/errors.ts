@@ -6,10 +6,13 @@ export const errorCodes = {
   VALIDATION_FAILED: { status: 400, message: 'Some fields need attention.' },
   UNAUTHENTICATED: { status: 401, message: 'Please sign in to continue.' },
   FORBIDDEN: { status: 403, message: 'Your role does not allow this action.' },
+  CROSS_SITE_REQUEST: { status: 403, message: 'This request did not come from the Stormdraft app. Open the app and try again there.' },
   NOT_FOUND: { status: 404, message: 'We could not find that.' },
   CONFLICT: { status: 409, message: 'This was changed by someone else since you opened it.' },
   ALREADY_EXISTS: { status: 409, message: 'That already exists.' },
   PAYLOAD_TOO_LARGE: { status: 413, message: 'The upload is larger than allowed.' },
+  UNSUPPORTED_MEDIA_TYPE: { status: 415, message: 'Send the request body as JSON.' },
+  RATE_LIMITED: { status: 429, message: 'Too many attempts. Wait a little and try again.' },
   INTERNAL: { status: 500, message: 'Something went wrong on our side. Please try again.' },
 } as const;
 

@@ -1,4 +1,4 @@
-import { Feed } from 'feed';
+import { create } from 'xmlbuilder2';
 
 export interface AtomEntry {
   number: string;
@@ -10,27 +10,29 @@ export interface AtomEntry {
   publishedAt: string;
 }
 
-/** The Atom feed (RFC 4287) of an office's issuances, newest first, each linking to its permanent page. */
+/**
+ * The Atom feed (RFC 4287) of an office's issuances, newest first, each linking to its
+ * permanent page. Every text construct is `type="text"` (RFC 4287 §3.1.1.1) and escaped by the
+ * XML writer, so a headline is never read as HTML by a feed reader.
+ */
 export function buildAtomFeed(input: { officeName: string; publicUrl: string; caution: string; entries: AtomEntry[]; updated: Date }): string {
-  const feed = new Feed({
-    id: `${input.publicUrl}/archive`,
-    title: `${input.officeName}: severe-thunderstorm outlooks`,
-    description: input.caution,
-    link: `${input.publicUrl}/bulletin`,
-    feedLinks: { atom: `${input.publicUrl}/api/public/feed.atom` },
-    updated: input.updated,
-    copyright: `${input.officeName}. ${input.caution}`,
-    generator: 'Stormdraft',
-  });
+  const feed = create({ version: '1.0', encoding: 'utf-8' }).ele('feed', { xmlns: 'http://www.w3.org/2005/Atom' });
+  feed.ele('id').txt(`${input.publicUrl}/archive`);
+  feed.ele('title', { type: 'text' }).txt(`${input.officeName}: severe-thunderstorm outlooks`);
+  feed.ele('subtitle', { type: 'text' }).txt(input.caution);
+  feed.ele('updated').txt(input.updated.toISOString());
+  feed.ele('generator').txt('Stormdraft');
+  feed.ele('link', { rel: 'alternate', href: `${input.publicUrl}/bulletin` });
+  feed.ele('link', { rel: 'self', href: `${input.publicUrl}/api/public/feed.atom` });
+  feed.ele('rights', { type: 'text' }).txt(`${input.officeName}. ${input.caution}`);
   for (const entry of input.entries) {
     const url = `${input.publicUrl}/issuances/${entry.number}`;
-    feed.addItem({
-      id: url,
-      link: url,
-      title: `Day ${entry.day} outlook ${entry.number}${entry.state === 'published' ? '' : ` (${entry.state})`}: ${entry.headline || 'no headline'}`,
-      date: new Date(entry.publishedAt),
-      description: `Valid ${entry.validFrom} to ${entry.validUntil} (UTC). ${input.caution}`,
-    });
+    const item = feed.ele('entry');
+    item.ele('title', { type: 'text' }).txt(`Day ${entry.day} outlook ${entry.number}${entry.state === 'published' ? '' : ` (${entry.state})`}: ${entry.headline || 'no headline'}`);
+    item.ele('id').txt(url);
+    item.ele('link', { href: url });
+    item.ele('updated').txt(new Date(entry.publishedAt).toISOString());
+    item.ele('summary', { type: 'text' }).txt(`Valid ${entry.validFrom} to ${entry.validUntil} (UTC). ${input.caution}`);
   }
-  return feed.atom1();
+  return feed.end({ prettyPrint: true });
 }

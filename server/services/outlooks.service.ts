@@ -1,4 +1,4 @@
-import { and, asc, desc, eq, gte, lt, sql } from 'drizzle-orm';
+import { and, asc, desc, eq, gte, inArray, lt, ne, sql } from 'drizzle-orm';
 import { withRfc7946Winding } from '../../shared/geometry/winding';
 import type { Feature, FeatureCollection } from 'geojson';
 import { areaGeometrySchema, hazardFlagSchema, type CreateOutlookInput, type Outlook, type OutlookListQuery, type OutlookSummary, type RevisionSummary, type RiskArea, type RiskAreaInput, type SaveOutlookInput } from '../../shared/contracts/outlooks';
@@ -139,6 +139,15 @@ function ladderIssues(areas: RiskAreaInput[], ladderKeys: string[]): FieldIssue[
   );
 }
 
+/** Risk-area ids in a save that belong to another outlook (an id names one area of one outlook). */
+async function foreignAreaIdIssues(db: Database, outlookId: string, areas: RiskAreaInput[]): Promise<FieldIssue[]> {
+  const ids = areas.flatMap((area) => (area.id ? [area.id] : []));
+  if (!ids.length) return [];
+  const taken = await db.select({ id: riskAreas.id }).from(riskAreas).where(and(inArray(riskAreas.id, ids), ne(riskAreas.outlookId, outlookId)));
+  const takenIds = new Set(taken.map((row) => row.id));
+  return areas.flatMap((area, index) => (area.id && takenIds.has(area.id) ? [{ path: `areas.${index}.id`, message: 'This risk-area id belongs to another outlook. Leave the id out to create a new area.' }] : []));
+}
+
 /**
  * Saves the whole draft when `input.version` is still current (optimistic concurrency): areas
  * are replaced, a revision is written and the save is audited, all in one transaction. A stale
@@ -151,6 +160,8 @@ export async function saveOutlook(db: Database, actor: Actor, outlookId: string,
     office.riskLadder.map((l) => l.key),
   );
   if (issues.length) return err(appError('VALIDATION_FAILED', issues[0]?.message, { issues }));
+  const foreign = await foreignAreaIdIssues(db, outlookId, input.areas);
+  if (foreign.length) return err(appError('VALIDATION_FAILED', foreign[0]?.message, { issues: foreign }));
   return db.transaction(async (tx) => {
     const [current] = await tx.select().from(outlooks).where(eq(outlooks.id, outlookId));
     if (!current) return err(notFound());
@@ -308,6 +319,22 @@ export async function exportAreasGeoJson(db: Database, outlookId: string): Promi
 }
 
 /**
+ * The geometry with each position cut to [longitude, latitude]. RFC 7946 §3.1.1 allows an
+ * altitude (third element) in a position; risk areas are flat, so it is dropped on import.
+ */
+function withoutAltitude(geometry: unknown): unknown {
+  if (typeof geometry !== 'object' || geometry === null || !('type' in geometry) || !('coordinates' in geometry)) return geometry;
+  const depth = geometry.type === 'Polygon' ? 2 : geometry.type === 'MultiPolygon' ? 3 : undefined;
+  if (depth === undefined) return geometry;
+  const strip = (value: unknown, level: number): unknown => {
+    if (!Array.isArray(value)) return value;
+    if (level === 0) return value.length > 2 && value.every((n) => typeof n === 'number') ? value.slice(0, 2) : value;
+    return value.map((child) => strip(child, level - 1));
+  };
+  return { ...geometry, coordinates: strip(geometry.coordinates, depth) };
+}
+
+/**
  * Reads risk areas from an uploaded GeoJSON document (FeatureCollection, Feature or bare
  * geometry). Each feature needs a Polygon or MultiPolygon and a `level` property that names a
  * ladder key or label; problems are reported per feature. Nothing is saved: the author adds
@@ -335,7 +362,7 @@ export async function importAreasGeoJson(db: Database, document: unknown): Promi
   const areas: RiskAreaInput[] = [];
   features.forEach((raw, index) => {
     const feature = (typeof raw === 'object' && raw !== null ? raw : {}) as { geometry?: unknown; properties?: Record<string, unknown> | null };
-    const geometry = areaGeometrySchema.safeParse(feature.geometry);
+    const geometry = areaGeometrySchema.safeParse(withoutAltitude(feature.geometry));
     if (!geometry.success) {
       issues.push({ path: `features.${index}.geometry`, message: `Feature ${index + 1}: ${geometry.error.issues[0]?.message ?? 'needs a Polygon or MultiPolygon geometry.'}` });
       return;

@@ -5,6 +5,7 @@ import { appError, type AppError } from '../../shared/errors';
 import { err, ok, type Result } from '../../shared/result';
 import type { Actor } from '../auth/require-role';
 import type { Auth } from '../auth/auth';
+import { passwordProblem } from '../auth/password-rule';
 import type { Database } from '../db/client';
 import { sessions, userPreferences, users } from '../db/schema';
 
@@ -32,6 +33,8 @@ export async function createUser(db: Database, auth: Auth, input: CreateUserInpu
   if (existing) {
     return err(appError('ALREADY_EXISTS', `An account with ${input.email} already exists.`, { issues: [{ path: 'email', message: 'This e-mail address is already in use.' }] }));
   }
+  const weak = passwordProblem(input.password, [input.email, input.name]);
+  if (weak) return err(appError('VALIDATION_FAILED', `Check the body. password: ${weak}`, { issues: [{ path: 'password', message: weak }] }));
   const created = await auth.api.createUser({ body: { name: input.name, email: input.email, password: input.password, role: input.role } });
   const [row] = await db.update(users).set({ emailVerified: true }).where(eq(users.id, created.user.id)).returning();
   if (!row) throw new Error(`user ${created.user.id} vanished right after creation`);

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { versionSchema } from './primitives';
 
 const hexColour = z.string().regex(/^#[0-9a-fA-F]{6}$/, { message: 'Use a colour like #4a63c4.' });
 
@@ -75,7 +76,7 @@ export const officeSettingsInputSchema = z.object({
   /** Relaxes the four-eyes rule (one-person night shift); each use is audited. Left as it is when absent. */
   allowSelfApproval: z.boolean().optional(),
   /** Optimistic concurrency: the version the editor loaded. */
-  version: z.number().int().nonnegative(),
+  version: versionSchema,
 });
 export type OfficeSettingsInput = z.infer<typeof officeSettingsInputSchema>;
 

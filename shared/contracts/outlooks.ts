@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { calendarDateSchema, isoTimeSchema, versionSchema } from './primitives';
 
 export const outlookDays = [1, 2, 3] as const;
 export const outlookStates = ['draft', 'in_review', 'returned', 'approved', 'published'] as const;
@@ -42,7 +43,7 @@ export type RiskAreaInput = z.infer<typeof riskAreaInputSchema>;
 export const riskAreaSchema = riskAreaInputSchema.extend({ id: z.string(), sortOrder: z.number() });
 export type RiskArea = z.infer<typeof riskAreaSchema>;
 
-const isoTime = (label: string) => z.string().datetime({ offset: true, message: `${label} must be an ISO 8601 time, e.g. 2027-04-18T12:00:00Z.` });
+const isoTime = isoTimeSchema;
 
 export const createOutlookInputSchema = z.object({
   day: z.number({ message: 'Day must be 1, 2 or 3.' }).int().min(1, { message: 'Day must be 1, 2 or 3.' }).max(3, { message: 'Day must be 1, 2 or 3.' }),
@@ -55,7 +56,7 @@ export type CreateOutlookInput = z.infer<typeof createOutlookInputSchema>;
 /** A full save of the draft (autosave sends the whole document with the version it was loaded at). */
 export const saveOutlookInputSchema = z
   .object({
-    version: z.number().int().nonnegative(),
+    version: versionSchema,
     headline: z.string().trim().max(200, { message: 'Keep the headline under 200 characters.' }),
     discussion: z.string().max(20_000, { message: 'Keep the discussion under 20,000 characters.' }),
     hazardNotes: z.partialRecord(z.enum(hazardKinds), z.string().max(2000, { message: 'Keep each hazard note under 2,000 characters.' })).default({}),
@@ -63,7 +64,15 @@ export const saveOutlookInputSchema = z
     validUntil: isoTime('Valid until'),
     areas: z.array(riskAreaInputSchema).max(60, { message: 'At most 60 risk areas per outlook.' }),
   })
-  .refine((v) => new Date(v.validUntil) > new Date(v.validFrom), { message: 'The valid period must end after it starts.', path: ['validUntil'] });
+  .refine((v) => new Date(v.validUntil) > new Date(v.validFrom), { message: 'The valid period must end after it starts.', path: ['validUntil'] })
+  .superRefine((v, ctx) => {
+    const seen = new Set<string>();
+    v.areas.forEach((area, index) => {
+      if (area.id === undefined) return;
+      if (seen.has(area.id)) ctx.addIssue({ code: 'custom', path: ['areas', index, 'id'], message: 'This risk-area id is used twice in the save; each area needs its own.' });
+      seen.add(area.id);
+    });
+  });
 export type SaveOutlookInput = z.infer<typeof saveOutlookInputSchema>;
 
 export const outlookSummarySchema = z.object({
@@ -94,7 +103,7 @@ export type Outlook = z.infer<typeof outlookSchema>;
 export const outlookListQuerySchema = z.object({
   state: z.enum(outlookStates).optional(),
   day: z.coerce.number().int().min(1).max(3).optional(),
-  date: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, { message: 'Date must be YYYY-MM-DD.' }).optional(),
+  date: calendarDateSchema('Date').optional(),
 });
 export type OutlookListQuery = z.infer<typeof outlookListQuerySchema>;
 

@@ -1,8 +1,9 @@
 import { z } from 'zod';
 import { areaGeometrySchema, hazardKinds } from './outlooks';
+import { versionSchema } from './primitives';
 
 export const subscriptionSettingsInputSchema = z.object({
-  version: z.number().int().nonnegative(),
+  version: versionSchema,
   alertThreshold: z.string().min(1, { message: 'Choose the lowest level you want to hear about.' }),
   /** Empty means every hazard. */
   hazards: z.array(z.enum(hazardKinds, { message: 'Hazard must be tornado, hail, wind or flood.' })).max(4),

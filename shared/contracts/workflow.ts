@@ -1,11 +1,12 @@
 import { z } from 'zod';
+import { calendarDateSchema, versionSchema } from './primitives';
 
 export const workflowActions = ['submit', 'return', 'approve', 'publish'] as const;
 export type WorkflowAction = (typeof workflowActions)[number];
 
 export const transitionInputSchema = z.object({
   /** The version the person acted on; a stale one gets 409 so nobody approves what they did not see. */
-  version: z.number({ message: 'Send the version you reviewed.' }).int().nonnegative(),
+  version: versionSchema,
   comment: z.string().trim().max(4000, { message: 'Keep the comment under 4,000 characters.' }).optional(),
 });
 export type TransitionInput = z.infer<typeof transitionInputSchema>;
@@ -24,7 +25,7 @@ export const issuanceStates = ['published', 'superseded', 'withdrawn'] as const;
 
 export const archiveQuerySchema = z.object({
   q: z.string().trim().max(100).optional(),
-  date: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, { message: 'Date must be YYYY-MM-DD.' }).optional(),
+  date: calendarDateSchema('Date').optional(),
   page: z.coerce.number().int().min(1).default(1),
   pageSize: z.coerce.number().int().min(1).max(100).default(20),
 });
