@@ -5,6 +5,18 @@ CREATE TABLE "issuance_counters" (
 	CONSTRAINT "issuance_counters_office_id_year_pk" PRIMARY KEY("office_id","year")
 );
 --> statement-breakpoint
+CREATE TABLE "subscription_email_confirmations" (
+	"id" uuid PRIMARY KEY DEFAULT gen_random_uuid() NOT NULL,
+	"subscription_id" uuid NOT NULL,
+	"email" text NOT NULL,
+	"token_hash" text NOT NULL,
+	"expires_at" timestamp with time zone NOT NULL,
+	"created_at" timestamp with time zone DEFAULT now() NOT NULL,
+	CONSTRAINT "subscription_email_confirmations_tokenHash_unique" UNIQUE("token_hash"),
+	CONSTRAINT "subscription_email_confirmations_subscriptionId_email_unique" UNIQUE("subscription_id","email")
+);
+--> statement-breakpoint
 ALTER TABLE "mail_outbox" ADD COLUMN "claimed_at" timestamp with time zone;--> statement-breakpoint
 ALTER TABLE "issuance_counters" ADD CONSTRAINT "issuance_counters_office_id_offices_id_fk" FOREIGN KEY ("office_id") REFERENCES "public"."offices"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
+ALTER TABLE "subscription_email_confirmations" ADD CONSTRAINT "subscription_email_confirmations_subscription_id_subscriptions_id_fk" FOREIGN KEY ("subscription_id") REFERENCES "public"."subscriptions"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 CREATE UNIQUE INDEX "outlooks_open_amendment_idx" ON "outlooks" USING btree ("amends_issuance_id") WHERE "outlooks"."state" <> 'published';

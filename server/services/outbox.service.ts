@@ -1,7 +1,7 @@
 import { and, asc, desc, eq, inArray, isNull, lt, lte, or } from 'drizzle-orm';
 import { appError, type AppError } from '../../shared/errors';
 import { err, ok, type Result } from '../../shared/result';
-import type { Database } from '../db/client';
+import type { Database, DatabaseOrTransaction } from '../db/client';
 import { mailOutbox } from '../db/schema';
 import type { Mailer } from '../mail/send-mail';
 
@@ -19,6 +19,15 @@ export const retryDelayMs = (attempts: number) => 30_000 * 2 ** Math.max(0, atte
 export const claimLeaseMs = 15 * 60_000;
 
 type OutboxRow = typeof mailOutbox.$inferSelect;
+
+/**
+ * Queues one message in the outbox, inside the caller's transaction (so it exists exactly when
+ * the change that causes it commits); a repeated `dedupeKey` queues nothing.
+ */
+export async function queueMail(tx: DatabaseOrTransaction, message: { dedupeKey: string; toAddress: string; subject: string; html: string; text: string }): Promise<boolean> {
+  const inserted = await tx.insert(mailOutbox).values(message).onConflictDoNothing({ target: mailOutbox.dedupeKey }).returning({ id: mailOutbox.id });
+  return inserted.length > 0;
+}
 
 /**
  * Claims up to `batch` due messages in one statement: queued rows whose next attempt is due,
