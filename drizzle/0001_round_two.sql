@@ -1,4 +1,22 @@
 ALTER TYPE "public"."sounding_source" ADD VALUE 'unknown';--> statement-breakpoint
+CREATE TABLE "issuance_counters" (
+	"office_id" uuid NOT NULL,
+	"year" integer NOT NULL,
+	"last_sequence" integer NOT NULL,
+	CONSTRAINT "issuance_counters_office_id_year_pk" PRIMARY KEY("office_id","year")
+);
+--> statement-breakpoint
+CREATE TABLE "subscription_email_confirmations" (
+	"id" uuid PRIMARY KEY DEFAULT gen_random_uuid() NOT NULL,
+	"subscription_id" uuid NOT NULL,
+	"email" text NOT NULL,
+	"token_hash" text NOT NULL,
+	"expires_at" timestamp with time zone NOT NULL,
+	"created_at" timestamp with time zone DEFAULT now() NOT NULL,
+	CONSTRAINT "subscription_email_confirmations_tokenHash_unique" UNIQUE("token_hash"),
+	CONSTRAINT "subscription_email_confirmations_subscriptionId_email_unique" UNIQUE("subscription_id","email")
+);
+--> statement-breakpoint
 CREATE TABLE "rate_limit_hits" (
 	"key" text PRIMARY KEY NOT NULL,
 	"hits" integer NOT NULL,
@@ -17,4 +35,8 @@ ALTER TABLE "soundings" ALTER COLUMN "longitude" DROP NOT NULL;--> statement-bre
 ALTER TABLE "soundings" ALTER COLUMN "elevation_m" DROP NOT NULL;--> statement-breakpoint
 ALTER TABLE "soundings" ALTER COLUMN "valid_time" DROP NOT NULL;--> statement-breakpoint
 ALTER TABLE "soundings" ADD COLUMN "content_hash" text;--> statement-breakpoint
-CREATE UNIQUE INDEX "soundings_office_id_content_hash_idx" ON "soundings" USING btree ("office_id","content_hash") WHERE "soundings"."modified_from_id" is null;
+ALTER TABLE "mail_outbox" ADD COLUMN "claimed_at" timestamp with time zone;--> statement-breakpoint
+ALTER TABLE "issuance_counters" ADD CONSTRAINT "issuance_counters_office_id_offices_id_fk" FOREIGN KEY ("office_id") REFERENCES "public"."offices"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
+ALTER TABLE "subscription_email_confirmations" ADD CONSTRAINT "subscription_email_confirmations_subscription_id_subscriptions_id_fk" FOREIGN KEY ("subscription_id") REFERENCES "public"."subscriptions"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
+CREATE UNIQUE INDEX "soundings_office_id_content_hash_idx" ON "soundings" USING btree ("office_id","content_hash") WHERE "soundings"."modified_from_id" is null;--> statement-breakpoint
+CREATE UNIQUE INDEX "outlooks_open_amendment_idx" ON "outlooks" USING btree ("amends_issuance_id") WHERE "outlooks"."state" <> 'published';

@@ -11,7 +11,7 @@ import { startMailCatcher, type MailCatcher } from './mail/mail-catcher';
 import { createMailer } from './mail/send-mail';
 import { sendPasswordResetMail, sendVerificationMail, storeCaughtMail } from './services/mail.service';
 import { ensureOffice, seedDemo } from './services/seed.service';
-import { recoverOutbox, startOutboxWorker } from './services/outbox.service';
+import { startOutboxWorker } from './services/outbox.service';
 
 export interface StartOptions {
   clientMode: ClientMode;
@@ -46,7 +46,8 @@ export async function startStormdraft(config: Config, options: StartOptions): Pr
   const ctx: AppContext = { config, db, auth, mailer, logger, ping: database.ping };
   if (config.seedDemo) await seedDemo(db, auth, config);
   else await ensureOffice(db);
-  await recoverOutbox(db);
+  // No start-up re-queue of "sending" rows: another instance may still be sending them; an
+  // expired claim is re-claimed by the outbox worker instead.
   const stopWorker = config.outboxIntervalMs > 0 ? startOutboxWorker(db, mailer, config.outboxIntervalMs, (error) => logger.error({ err: error }, 'outbox worker')) : async () => {};
   const app = await createApp(ctx, options.clientMode);
   return {

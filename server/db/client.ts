@@ -80,3 +80,15 @@ export async function openDatabase(options: DatabaseOptions): Promise<DatabaseHa
     dump: () => client.dumpDataDir('none') as Promise<Blob>,
   };
 }
+
+/**
+ * True when `error` (or the driver error drizzle wraps in `cause`) is PostgreSQL's
+ * unique_violation (SQLSTATE 23505), optionally on the named constraint or index.
+ */
+export function isUniqueViolation(error: unknown, constraint?: string): boolean {
+  for (let e: unknown = error, depth = 0; e && typeof e === 'object' && depth < 4; e = (e as { cause?: unknown }).cause, depth++) {
+    const { code, constraint: name } = e as { code?: unknown; constraint?: unknown };
+    if (code === '23505') return constraint === undefined || name === constraint;
+  }
+  return false;
+}

@@ -5,12 +5,13 @@ import { areaOfInterestInputSchema, placeQuerySchema, subscriptionSettingsInputS
 import { access, actorOf } from '../auth/require-role';
 import { parseInput, sendResult } from '../middleware/error-handler';
 import { listOutbox, resendOutboxMessage } from '../services/outbox.service';
-import { addAreaOfInterest, findPlaces, getMySubscription, listSubscribers, removeAreaOfInterest, saveMySubscription, unsubscribe } from '../services/subscriptions.service';
+import { addAreaOfInterest, confirmSubscriptionEmail, findPlaces, getMySubscription, listSubscribers, removeAreaOfInterest, saveMySubscription, unsubscribe } from '../services/subscriptions.service';
 import { route } from './route-definition';
 
 const areaParamsSchema = z.object({ areaId: idParamSchema });
 const messageParamsSchema = z.object({ messageId: idParamSchema });
 const tokenQuerySchema = z.object({ token: z.string().min(10, { message: 'The unsubscribe link is incomplete.' }).max(200) });
+const confirmationQuerySchema = z.object({ token: z.string().min(20, { message: 'The confirmation link is incomplete.' }).max(200) });
 const subscriber = access.roles('subscriber');
 
 const escapeHtml = (text: string) => text.replace(/[<>&"']/g, (c) => ({ '<': '&lt;', '>': '&gt;', '&': '&amp;', '"': '&quot;', "'": '&#39;' })[c] ?? c);
@@ -31,7 +32,7 @@ export const subscriptionsRoutes = [
     handler: async (ctx, req, res) => {
       const input = parseInput(subscriptionSettingsInputSchema, req.body);
       if (!input.ok) return sendResult(res, input);
-      sendResult(res, await saveMySubscription(ctx.db, actorOf(res), input.value));
+      sendResult(res, await saveMySubscription(ctx.db, actorOf(res), input.value, { publicUrl: ctx.config.publicUrl }));
     },
   }),
   route({
@@ -99,6 +100,40 @@ export const subscriptionsRoutes = [
       const result = await unsubscribe(ctx.db, ctx.config.authSecret, query.value.token);
       if (req.is('application/json') || !req.accepts('html')) return sendResult(res, result);
       res.status(result.ok ? 200 : 400).type('html').send(result.ok ? page('You are unsubscribed', '<p>No more outlook e-mails will be sent to you for these areas.</p>') : page('This link did not work', `<p>${escapeHtml(result.error.message)}</p>`));
+    },
+  }),
+  route({
+    method: 'get',
+    path: '/api/email-confirmations',
+    access: access.public,
+    // A page with a button, not a change on GET: mail scanners open links on their own.
+    handler: (_ctx, req, res) => {
+      const query = confirmationQuerySchema.safeParse(req.query);
+      if (!query.success) return void res.status(400).type('html').send(page('This link is incomplete', '<p>Open the whole link from the confirmation e-mail.</p>'));
+      res
+        .type('html')
+        .send(
+          page(
+            'Receive outlook alerts at this address?',
+            `<p>Confirm to receive a subscriber's severe-thunderstorm outlook alerts at this address. The outlook is planning guidance, not a warning; follow warnings from the national weather service and instructions from local emergency officials.</p><form method="post" action="/api/email-confirmations?token=${encodeURIComponent(query.data.token)}"><button type="submit" style="padding:.6rem 1rem">Confirm this address</button></form>`,
+          ),
+        );
+    },
+  }),
+  route({
+    method: 'post',
+    path: '/api/email-confirmations',
+    access: access.public,
+    before: [express.urlencoded({ extended: false, limit: '2kb' })],
+    handler: async (ctx, req, res) => {
+      const query = parseInput(confirmationQuerySchema, req.query, 'link');
+      if (!query.ok) return sendResult(res, query);
+      const result = await confirmSubscriptionEmail(ctx.db, query.value.token);
+      if (req.is('application/json') || !req.accepts('html')) return sendResult(res, result);
+      res
+        .status(result.ok ? 200 : 400)
+        .type('html')
+        .send(result.ok ? page('Address confirmed', `<p>${escapeHtml(result.value.email)} will now receive the subscriber's outlook alerts.</p>`) : page('This link did not work', `<p>${escapeHtml(result.error.message)}</p>`));
     },
   }),
   route({

@@ -1,11 +1,12 @@
-import { and, count, desc, eq, ilike, or, sql, type SQL } from 'drizzle-orm';
+import { and, count, desc, eq, ilike, ne, or, sql, type SQL } from 'drizzle-orm';
 import { withRfc7946Winding } from '../../shared/geometry/winding';
 import type { Feature, FeatureCollection } from 'geojson';
 import type { ArchiveQuery } from '../../shared/contracts/workflow';
 import { appError, type AppError } from '../../shared/errors';
+import { isInForce } from '../../shared/issuances/in-force';
 import { err, ok, type Result } from '../../shared/result';
 import type { Actor } from '../auth/require-role';
-import type { Database, DatabaseOrTransaction } from '../db/client';
+import { isUniqueViolation, type Database, type DatabaseOrTransaction } from '../db/client';
 import { auditEvents, issuances, outlookRevisions, outlooks, riskAreas } from '../db/schema';
 import type { Config } from '../config';
 import { queueWithdrawalNotices } from './distribution.service';
@@ -149,40 +150,60 @@ export async function withdrawIssuance(db: Database, config: Config, actor: Acto
   });
 }
 
-/** Starts an amendment: a new draft with the issuance's content; publishing it supersedes the issuance. */
+/**
+ * Starts an amendment: a new draft with the issuance's content; publishing it supersedes the
+ * issuance. Only an issuance in force can be amended, and it has at most one open amendment:
+ * the issuance row is locked while the draft is made, so simultaneous requests queue and the
+ * later ones get a 409 naming the open draft (the partial unique index on
+ * `outlooks.amends_issuance_id` is the last line of defence).
+ */
 export async function amendIssuance(db: Database, actor: Actor, number: string): Promise<Result<{ outlookId: string }, AppError>> {
-  const found = await getIssuance(db, number);
-  if (!found.ok) return found;
-  const issuance = found.value;
-  if (issuance.state !== 'published') return err(appError('CONFLICT', `Issuance ${number} is ${issuance.state}; amend the current issuance instead.`));
   const office = await findOffice(db);
   if (!office) throw new Error('no office');
-  const s = issuance.snapshot as { headline?: string; discussion?: string; hazardNotes?: Record<string, string>; areas?: RiskArea[] };
-  return db.transaction(async (tx) => {
-    const [open] = await tx.select({ id: outlooks.id }).from(outlooks).where(and(eq(outlooks.amendsIssuanceId, issuance.id), sql`${outlooks.state} <> 'published'`));
-    if (open) return ok({ outlookId: open.id });
-    const [row] = await tx
-      .insert(outlooks)
-      .values({
-        officeId: office.id,
-        day: issuance.day,
-        validFrom: new Date(Math.max(Date.now(), Date.parse(issuance.validFrom))),
-        validUntil: new Date(issuance.validUntil),
-        headline: s.headline ?? '',
-        discussion: s.discussion ?? '',
-        hazardNotes: s.hazardNotes ?? {},
-        amendsIssuanceId: issuance.id,
-        createdBy: actor.userId,
-        lastEditedBy: actor.userId,
-        version: 1,
-      })
-      .returning();
-    if (!row) throw new Error('amendment insert returned no row');
-    const areas = s.areas ?? [];
-    if (areas.length) await tx.insert(riskAreas).values(areas.map((a, i) => ({ outlookId: row.id, levelKey: a.levelKey, hazards: a.hazards, geometry: a.geometry, label: a.label, sortOrder: i })));
-    await tx.insert(outlookRevisions).values({ outlookId: row.id, revisionNumber: 1, snapshot: { amends: number, headline: s.headline, discussion: s.discussion, areas }, authorId: actor.userId });
-    await tx.insert(auditEvents).values({ officeId: office.id, outlookId: row.id, issuanceId: issuance.id, actorId: actor.userId, action: 'amend', toState: 'draft', details: { amends: number } });
-    return ok({ outlookId: row.id });
+  try {
+    return await db.transaction(async (tx) => {
+      const [issuance] = await tx.select().from(issuances).where(eq(issuances.number, number)).for('update');
+      if (!issuance) return err(appError('NOT_FOUND', `There is no issuance ${number}.`));
+      if (!isInForce(issuance, new Date())) {
+        const why = issuance.state === 'published' ? 'its valid period has ended' : `it is ${issuance.state}`;
+        return err(appError('CONFLICT', `Issuance ${number} is not in force (${why}); only an issuance in force can be amended. Amend the current issuance instead.`, { details: { rule: 'AMENDED_ISSUANCE_NOT_IN_FORCE', issuanceState: issuance.state } }));
+      }
+      const [open] = await tx.select({ id: outlooks.id }).from(outlooks).where(and(eq(outlooks.amendsIssuanceId, issuance.id), ne(outlooks.state, 'published')));
+      if (open) return err(openAmendmentConflict(number, open.id));
+      const s = issuance.snapshot as { headline?: string; discussion?: string; hazardNotes?: Record<string, string>; areas?: RiskArea[] };
+      const [row] = await tx
+        .insert(outlooks)
+        .values({
+          officeId: office.id,
+          day: issuance.day,
+          validFrom: new Date(Math.max(Date.now(), issuance.validFrom.getTime())),
+          validUntil: issuance.validUntil,
+          headline: s.headline ?? '',
+          discussion: s.discussion ?? '',
+          hazardNotes: s.hazardNotes ?? {},
+          amendsIssuanceId: issuance.id,
+          createdBy: actor.userId,
+          lastEditedBy: actor.userId,
+          version: 1,
+        })
+        .returning();
+      if (!row) throw new Error('amendment insert returned no row');
+      const areas = s.areas ?? [];
+      if (areas.length) await tx.insert(riskAreas).values(areas.map((a, i) => ({ outlookId: row.id, levelKey: a.levelKey, hazards: a.hazards, geometry: a.geometry, label: a.label, sortOrder: i })));
+      await tx.insert(outlookRevisions).values({ outlookId: row.id, revisionNumber: 1, snapshot: { amends: number, headline: s.headline, discussion: s.discussion, areas }, authorId: actor.userId });
+      await tx.insert(auditEvents).values({ officeId: office.id, outlookId: row.id, issuanceId: issuance.id, actorId: actor.userId, action: 'amend', toState: 'draft', details: { amends: number } });
+      return ok({ outlookId: row.id });
+    });
+  } catch (error) {
+    if (!isUniqueViolation(error, 'outlooks_open_amendment_idx')) throw error;
+    const [open] = await db.select({ id: outlooks.id }).from(outlooks).innerJoin(issuances, eq(issuances.id, outlooks.amendsIssuanceId)).where(and(eq(issuances.number, number), ne(outlooks.state, 'published')));
+    return err(openAmendmentConflict(number, open?.id ?? null));
+  }
+}
+
+function openAmendmentConflict(number: string, outlookId: string | null): AppError {
+  return appError('CONFLICT', `Issuance ${number} already has an open amendment; continue that draft instead of starting another (one open amendment per issuance).`, {
+    details: { rule: 'ONE_OPEN_AMENDMENT', outlookId },
   });
 }
 

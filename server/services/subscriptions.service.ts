@@ -1,14 +1,16 @@
-import { createHmac, timingSafeEqual } from 'node:crypto';
-import { and, eq, isNull } from 'drizzle-orm';
+import { createHash, createHmac, randomBytes, timingSafeEqual } from 'node:crypto';
+import { and, asc, eq, isNull, notInArray } from 'drizzle-orm';
 import type { AreaOfInterestInput, SubscriptionSettingsInput } from '../../shared/contracts/subscriptions';
 import type { AreaGeometry } from '../../shared/contracts/outlooks';
 import { appError, type AppError } from '../../shared/errors';
 import { err, ok, type Result } from '../../shared/result';
 import type { Actor } from '../auth/require-role';
-import type { Database } from '../db/client';
-import { areasOfInterest, subscriptions, users } from '../db/schema';
+import type { Database, DatabaseOrTransaction } from '../db/client';
+import { areasOfInterest, subscriptionEmailConfirmations, subscriptions, users } from '../db/schema';
+import { renderTemplate } from '../mail/render-template';
 import { allPlaces, searchPlaces } from '../geo/places';
 import { findOffice } from './office.service';
+import { queueMail } from './outbox.service';
 
 type SubscriptionRow = typeof subscriptions.$inferSelect;
 
@@ -25,21 +27,27 @@ export interface SubscriptionView {
   alertThreshold: string;
   hazards: string[];
   days: number[];
+  /** Every address the subscriber gave: the confirmed ones (which receive alerts), then the unconfirmed. */
   emails: string[];
+  /** Extra addresses waiting for their owner to follow the confirmation link; they receive nothing yet. */
+  unconfirmedEmails: string[];
   paused: boolean;
   unsubscribed: boolean;
   version: number;
   areas: AreaOfInterestView[];
 }
 
-async function view(db: Database, row: SubscriptionRow): Promise<SubscriptionView> {
+async function view(db: DatabaseOrTransaction, row: SubscriptionRow): Promise<SubscriptionView> {
   const areas = await db.select().from(areasOfInterest).where(eq(areasOfInterest.subscriptionId, row.id));
+  const pending = await db.select({ email: subscriptionEmailConfirmations.email }).from(subscriptionEmailConfirmations).where(eq(subscriptionEmailConfirmations.subscriptionId, row.id)).orderBy(asc(subscriptionEmailConfirmations.createdAt));
+  const unconfirmed = pending.map((p) => p.email).filter((e) => !row.emails.includes(e));
   return {
     id: row.id,
     alertThreshold: row.alertThreshold,
     hazards: row.hazards,
     days: row.days,
-    emails: row.emails,
+    emails: [...row.emails, ...unconfirmed],
+    unconfirmedEmails: unconfirmed,
     paused: row.paused,
     unsubscribed: row.unsubscribedAt !== null,
     version: row.version,
@@ -64,8 +72,18 @@ export async function getMySubscription(db: Database, actor: Actor): Promise<Res
   return ok(await view(db, row));
 }
 
-/** Saves threshold, hazards, days, addresses and pause with optimistic concurrency (409 when stale). */
-export async function saveMySubscription(db: Database, actor: Actor, input: SubscriptionSettingsInput): Promise<Result<SubscriptionView, AppError>> {
+/** How long the link in an address-confirmation mail works. */
+export const addressConfirmationValidDays = 7;
+
+const tokenHash = (token: string) => createHash('sha256').update(token).digest('hex');
+
+/**
+ * Saves threshold, hazards, days, addresses and pause with optimistic concurrency (409 when
+ * stale). Alerts go only to confirmed addresses: the account's own address, and each extra
+ * address once its owner followed the link in the confirmation mail queued here (issue 11,
+ * item 10). An address removed from the list loses its confirmation.
+ */
+export async function saveMySubscription(db: Database, actor: Actor, input: SubscriptionSettingsInput, links: { publicUrl?: string } = {}): Promise<Result<SubscriptionView, AppError>> {
   const office = await findOffice(db);
   if (!office) throw new Error('no office');
   if (!office.riskLadder.some((l) => l.key === input.alertThreshold)) {
@@ -73,14 +91,58 @@ export async function saveMySubscription(db: Database, actor: Actor, input: Subs
   }
   const current = await getMySubscription(db, actor);
   if (!current.ok) return current;
-  const { version, ...fields } = input;
-  const [row] = await db
-    .update(subscriptions)
-    .set({ ...fields, unsubscribedAt: null, version: version + 1, updatedAt: new Date() })
-    .where(and(eq(subscriptions.id, current.value.id), eq(subscriptions.version, version)))
-    .returning();
-  if (!row) return err(appError('CONFLICT', 'Your alert settings were changed elsewhere since you opened them. Reload and try again.'));
-  return ok(await view(db, row));
+  const { version, emails: wanted, ...fields } = input;
+  const addresses = [...new Set(wanted)];
+  return db.transaction(async (tx) => {
+    const [before] = await tx.select().from(subscriptions).where(eq(subscriptions.id, current.value.id)).for('update');
+    if (!before || before.version !== version) return err(appError('CONFLICT', 'Your alert settings were changed elsewhere since you opened them. Reload and try again.'));
+    const known = new Set([actor.email.toLowerCase(), ...before.emails.map((e) => e.toLowerCase())]);
+    const confirmed = addresses.filter((a) => known.has(a));
+    const unconfirmed = addresses.filter((a) => !confirmed.includes(a));
+    await tx.delete(subscriptionEmailConfirmations).where(and(eq(subscriptionEmailConfirmations.subscriptionId, before.id), unconfirmed.length ? notInArray(subscriptionEmailConfirmations.email, unconfirmed) : undefined));
+    const open = await tx.select().from(subscriptionEmailConfirmations).where(eq(subscriptionEmailConfirmations.subscriptionId, before.id));
+    const now = new Date();
+    for (const email of unconfirmed) {
+      const existing = open.find((o) => o.email === email);
+      if (existing && existing.expiresAt > now) continue; // its link is still good: no second mail
+      if (!links.publicUrl) throw new Error('an unconfirmed address needs publicUrl for its confirmation link');
+      const token = randomBytes(32).toString('base64url');
+      const expiresAt = new Date(now.getTime() + addressConfirmationValidDays * 86_400_000);
+      const [row] = await tx
+        .insert(subscriptionEmailConfirmations)
+        .values({ subscriptionId: before.id, email, tokenHash: tokenHash(token), expiresAt })
+        .onConflictDoUpdate({ target: [subscriptionEmailConfirmations.subscriptionId, subscriptionEmailConfirmations.email], set: { tokenHash: tokenHash(token), expiresAt, createdAt: now } })
+        .returning({ id: subscriptionEmailConfirmations.id });
+      if (!row) throw new Error('confirmation upsert returned no row');
+      const rendered = renderTemplate('confirm-address', { name: actor.name, email, officeName: office.name, validDays: addressConfirmationValidDays, url: `${links.publicUrl}/api/email-confirmations?token=${encodeURIComponent(token)}` });
+      await queueMail(tx, { dedupeKey: `confirm-address:${row.id}:${tokenHash(token).slice(0, 16)}`, toAddress: email, ...rendered });
+    }
+    const [row] = await tx
+      .update(subscriptions)
+      .set({ ...fields, emails: confirmed, unsubscribedAt: null, version: version + 1, updatedAt: now })
+      .where(and(eq(subscriptions.id, before.id), eq(subscriptions.version, version)))
+      .returning();
+    if (!row) return err(appError('CONFLICT', 'Your alert settings were changed elsewhere since you opened them. Reload and try again.'));
+    return ok(await view(tx, row));
+  });
+}
+
+/**
+ * Confirms an extra address from the link mailed to it: from now on it receives the
+ * subscription's alerts. An unknown, used or expired link changes nothing.
+ */
+export async function confirmSubscriptionEmail(db: Database, token: string): Promise<Result<{ email: string }, AppError>> {
+  return db.transaction(async (tx) => {
+    const [pending] = await tx.select().from(subscriptionEmailConfirmations).where(eq(subscriptionEmailConfirmations.tokenHash, tokenHash(token))).for('update');
+    if (!pending || pending.expiresAt <= new Date()) {
+      return err(appError('VALIDATION_FAILED', 'This confirmation link is not valid or has expired. Ask the subscriber to save the address again in their alert settings for a new link.', { issues: [{ path: 'token', message: 'Unknown or expired link.' }] }));
+    }
+    const [sub] = await tx.select().from(subscriptions).where(eq(subscriptions.id, pending.subscriptionId)).for('update');
+    if (!sub) throw new Error('confirmation without subscription'); // cascade deletes it with the subscription
+    if (!sub.emails.includes(pending.email)) await tx.update(subscriptions).set({ emails: [...sub.emails, pending.email], updatedAt: new Date() }).where(eq(subscriptions.id, sub.id));
+    await tx.delete(subscriptionEmailConfirmations).where(eq(subscriptionEmailConfirmations.id, pending.id));
+    return ok({ email: pending.email });
+  });
 }
 
 /** Adds an area of interest: drawn, or a county/state picked by FIPS code (outline from us-atlas). */

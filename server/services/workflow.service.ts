@@ -1,13 +1,14 @@
-import { and, desc, eq, max } from 'drizzle-orm';
+import { and, desc, eq, sql } from 'drizzle-orm';
 import type { Role } from '../../shared/contracts/common';
 import type { OutlookState } from '../../shared/contracts/outlooks';
 import type { TransitionInput, WorkflowAction } from '../../shared/contracts/workflow';
 import { defaultGuidanceThresholds, type GuidanceThresholds } from '../../shared/evidence/support-check';
 import { appError, type AppError } from '../../shared/errors';
+import { isInForce } from '../../shared/issuances/in-force';
 import { err, ok, type Result } from '../../shared/result';
 import type { Actor } from '../auth/require-role';
 import type { Database, Transaction } from '../db/client';
-import { auditEvents, issuances, outlooks, users } from '../db/schema';
+import { auditEvents, issuanceCounters, issuances, outlooks, users } from '../db/schema';
 import type { Config } from '../config';
 import { queueIssuanceNotices } from './distribution.service';
 import { findOffice } from './office.service';
@@ -78,6 +79,10 @@ export async function transitionOutlook(
       }
       details.fourEyesRelaxed = true;
     }
+    if (action === 'publish' && current.amendsIssuanceId) {
+      const replaced = await lockReplacedIssuance(tx, current.amendsIssuanceId, new Date());
+      if (!replaced.ok) return replaced;
+    }
     const [updated] = await tx
       .update(outlooks)
       .set({ state: rule.to, version: current.version + 1, updatedAt: new Date() })
@@ -97,6 +102,48 @@ export async function transitionOutlook(
   });
 }
 
+/**
+ * Publishing an amendment replaces the issuance it amends, so that issuance must still be in
+ * force when the amendment is published. Its row is locked for the rest of the publish
+ * transaction, so a concurrent withdrawal or a second amendment waits and then sees it
+ * superseded (issue 11).
+ */
+async function lockReplacedIssuance(tx: Transaction, issuanceId: string, now: Date): Promise<Result<void, AppError>> {
+  const [replaced] = await tx
+    .select({ number: issuances.number, state: issuances.state, validFrom: issuances.validFrom, validUntil: issuances.validUntil })
+    .from(issuances)
+    .where(eq(issuances.id, issuanceId))
+    .for('update');
+  if (!replaced) throw new Error('the amended issuance vanished');
+  if (isInForce(replaced, now)) return ok(undefined);
+  const why = replaced.state === 'published' ? 'its valid period has ended' : `it was ${replaced.state}`;
+  return err(
+    appError('CONFLICT', `This amendment replaces issuance ${replaced.number}, which is no longer in force (${why}). Only an issuance in force can be amended: start a new outlook instead.`, {
+      details: { rule: 'AMENDED_ISSUANCE_NOT_IN_FORCE', issuanceNumber: replaced.number, issuanceState: replaced.state },
+    }),
+  );
+}
+
+/**
+ * Takes the next issuance sequence of the office's year in one atomic statement: the upsert
+ * creates the year's counter (continuing after any issuance already numbered that year) or
+ * increments it, and holds the counter row's lock until the publish transaction ends. A
+ * concurrent publish waits for that lock instead of computing the same `max + 1` (issue 11).
+ */
+export async function nextIssuanceSequence(tx: Transaction, officeId: string, year: number): Promise<number> {
+  const [row] = await tx
+    .insert(issuanceCounters)
+    .values({
+      officeId,
+      year,
+      lastSequence: sql`(select coalesce(max(${issuances.sequence}), 0) + 1 from ${issuances} where ${issuances.officeId} = ${officeId} and ${issuances.year} = ${year})`,
+    })
+    .onConflictDoUpdate({ target: [issuanceCounters.officeId, issuanceCounters.year], set: { lastSequence: sql`${issuanceCounters.lastSequence} + 1` } })
+    .returning({ value: issuanceCounters.lastSequence });
+  if (!row) throw new Error('issuance counter upsert returned no row');
+  return row.value;
+}
+
 type OfficeRow = NonNullable<Awaited<ReturnType<typeof findOffice>>>;
 
 /** Writes the issuance: next number of the office's year, frozen snapshot with evidence and support. */
@@ -106,11 +153,7 @@ async function writeIssuance(tx: Transaction, config: Config, office: OfficeRow,
   const o = outlook.value;
   const now = new Date();
   const year = now.getUTCFullYear();
-  const [last] = await tx
-    .select({ value: max(issuances.sequence) })
-    .from(issuances)
-    .where(and(eq(issuances.officeId, office.id), eq(issuances.year, year)));
-  const sequence = (last?.value ?? 0) + 1;
+  const sequence = await nextIssuanceSequence(tx, office.id, year);
   const number = `${year}-${String(sequence).padStart(4, '0')}`;
   const [approval] = await tx
     .select({ actorId: auditEvents.actorId, name: users.name })

@@ -222,22 +222,25 @@ describe('outbox faults with a real SMTP server on 127.0.0.1', () => {
     }
   });
 
-  it('When the app stopped mid-send (a row left "sending"), then start-up recovery sends it once and never twice', async () => {
-    const { recoverOutbox } = await import('../../server/services/outbox.service');
+  it('When a worker died mid-send (a row left "sending"), then no one takes it while its lease runs and one worker sends it once after', async () => {
+    const { claimLeaseMs } = await import('../../server/services/outbox.service');
     const email = 'crash@county.test';
     const number = await queueOneFor(email, 'Crash mid-send');
     const [row] = await outboxFor(email, number);
+    const claimedAt = new Date();
     // What a worker killed between claiming and sending leaves behind.
-    await sd.ctx.db.update(mailOutbox).set({ status: 'sending' }).where(eq(mailOutbox.id, row?.id ?? ''));
-    await processOutbox(sd.ctx.db, sd.ctx.mailer);
-    expect((await outboxFor(email, number))[0]?.status, 'a running worker leaves a claimed row alone').toBe('sending');
-    await recoverOutbox(sd.ctx.db);
-    await processOutbox(sd.ctx.db, sd.ctx.mailer);
-    await processOutbox(sd.ctx.db, sd.ctx.mailer);
+    await sd.ctx.db.update(mailOutbox).set({ status: 'sending', claimedAt }).where(eq(mailOutbox.id, row?.id ?? ''));
+    // Another worker polling now must not resend it: the first may still be sending.
+    await processOutbox(sd.ctx.db, sd.ctx.mailer, new Date(claimedAt.getTime() + claimLeaseMs - 1000));
+    expect((await outboxFor(email, number))[0]?.status, 'a claimed row is left alone while its lease runs').toBe('sending');
+    const afterLease = new Date(claimedAt.getTime() + claimLeaseMs + 1000);
+    await Promise.all([processOutbox(sd.ctx.db, sd.ctx.mailer, afterLease), processOutbox(sd.ctx.db, sd.ctx.mailer, afterLease)]);
+    await processOutbox(sd.ctx.db, sd.ctx.mailer, new Date(afterLease.getTime() + 1000));
     const delivered = await waitFor(async () => {
       const rows = await sd.ctx.db.select().from(caughtMail).where(like(caughtMail.subject, `%${number}%`));
       return rows.length ? rows : undefined;
-    }, 'the recovered message');
+    }, 'the re-claimed message');
     expect(delivered.filter((m) => m.toAddress === email)).toHaveLength(1);
+    expect((await outboxFor(email, number))[0]).toMatchObject({ status: 'sent', claimedAt: null });
   });
 });

@@ -2,12 +2,13 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
-import { agentFor, signedInAgent, startTestApp } from './helpers/test-app';
+import { agentFor, signedInAgent, startTestApp, testPostgresUrl } from './helpers/test-app';
 
 const dir = mkdtempSync(path.join(tmpdir(), 'stormdraft-persist-'));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
-describe('PGlite on disk', () => {
+// PGlite-specific: skipped in the PostgreSQL pass, where it would only repeat the PGlite run.
+describe.skipIf(testPostgresUrl())('PGlite on disk', () => {
   it('When the app restarts on the same DATA_DIR, then accounts and settings are still there and the seed does not duplicate them', async () => {
     const dataDir = path.join(dir, 'nested', 'data');
     const first = await startTestApp({ dataDir });

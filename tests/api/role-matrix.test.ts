@@ -82,6 +82,8 @@ const matrix: MatrixRow[] = [
   { method: 'get', route: '/api/subscriptions', url: '/api/subscriptions', expect: { anonymous: 401, subscriber: 403, forecaster: 403, lead: 200, admin: 200 } },
   { method: 'get', route: '/api/unsubscribe', url: '/api/unsubscribe?token=not-a-real-token', expect: anyone(200) },
   { method: 'post', route: '/api/unsubscribe', url: '/api/unsubscribe?token=not-a-real-token', body: {}, expect: anyone(400) },
+  { method: 'get', route: '/api/email-confirmations', url: '/api/email-confirmations?token=not-a-real-token-at-all', expect: anyone(200) },
+  { method: 'post', route: '/api/email-confirmations', url: '/api/email-confirmations?token=not-a-real-token-at-all', body: {}, expect: anyone(400) },
   { method: 'get', route: '/api/mail-outbox', url: '/api/mail-outbox', expect: staffOnly(200) },
   { method: 'post', route: '/api/mail-outbox/:messageId/resend', url: `/api/mail-outbox/${missingId}/resend`, body: {}, expect: staffOnly(409) },
 ];

@@ -1,4 +1,4 @@
-import { index, integer, jsonb, pgEnum, pgTable, text, timestamp, unique, uuid } from 'drizzle-orm/pg-core';
+import { index, integer, jsonb, pgEnum, pgTable, primaryKey, text, timestamp, unique, uuid } from 'drizzle-orm/pg-core';
 import { offices } from './offices';
 import { outlooks } from './outlooks';
 import { users } from './auth';
@@ -37,6 +37,23 @@ export const issuances = pgTable(
     publishedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [unique().on(t.officeId, t.year, t.sequence), unique().on(t.officeId, t.number), index().on(t.officeId, t.day, t.publishedAt)],
+);
+
+/**
+ * The last issuance number handed out per office and year. Publishing takes the next number
+ * with one atomic upsert on this row, which locks it until the publish commits, so concurrent
+ * publishes on PostgreSQL queue for a number instead of colliding on `max(sequence) + 1`.
+ */
+export const issuanceCounters = pgTable(
+  'issuance_counters',
+  {
+    officeId: uuid()
+      .notNull()
+      .references(() => offices.id, { onDelete: 'cascade' }),
+    year: integer().notNull(),
+    lastSequence: integer().notNull(),
+  },
+  (t) => [primaryKey({ columns: [t.officeId, t.year] })],
 );
 
 /** Append-only audit trail: every transition and every save (who, when, from, to, comment). */

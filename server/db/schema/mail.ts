@@ -20,6 +20,8 @@ export const mailOutbox = pgTable(
     status: outboxStatusEnum().notNull().default('queued'),
     attempts: integer().notNull().default(0),
     nextAttemptAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    /** When a worker claimed the row ("sending"); after the lease runs out another may re-claim it. */
+    claimedAt: timestamp({ withTimezone: true }),
     lastError: text(),
     sentAt: timestamp({ withTimezone: true }),
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),

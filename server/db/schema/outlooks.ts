@@ -1,4 +1,5 @@
-import { index, integer, jsonb, pgEnum, pgTable, text, timestamp, unique, uuid } from 'drizzle-orm/pg-core';
+import { sql } from 'drizzle-orm';
+import { index, integer, jsonb, pgEnum, pgTable, text, timestamp, unique, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 import type { Geometry } from 'geojson';
 import { offices } from './offices';
 import { users } from './auth';
@@ -36,7 +37,12 @@ export const outlooks = pgTable(
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index().on(t.officeId, t.state), index().on(t.officeId, t.validFrom)],
+  (t) => [
+    index().on(t.officeId, t.state),
+    index().on(t.officeId, t.validFrom),
+    // One open (unpublished) amendment per issuance: a second "amend" finds the first.
+    uniqueIndex('outlooks_open_amendment_idx').on(t.amendsIssuanceId).where(sql`${t.state} <> 'published'`),
+  ],
 );
 
 /** A risk area of an outlook: a polygon (GeoJSON, WGS 84) at one ladder level, with hazards. */

@@ -66,3 +66,24 @@ export const notifications = pgTable(
   },
   (t) => [unique().on(t.issuanceId, t.subscriptionId)],
 );
+
+/**
+ * An extra address a subscriber added that has not been confirmed yet. It receives nothing
+ * until its owner follows the link mailed to it; confirming moves it into
+ * `subscriptions.emails` (the addresses alerts go to) and deletes this row. Only a hash of the
+ * link's token is stored.
+ */
+export const subscriptionEmailConfirmations = pgTable(
+  'subscription_email_confirmations',
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    subscriptionId: uuid()
+      .notNull()
+      .references(() => subscriptions.id, { onDelete: 'cascade' }),
+    email: text().notNull(),
+    tokenHash: text().notNull().unique(),
+    expiresAt: timestamp({ withTimezone: true }).notNull(),
+    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [unique().on(t.subscriptionId, t.email)],
+);

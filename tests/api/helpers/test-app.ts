@@ -1,4 +1,6 @@
+import { randomUUID } from 'node:crypto';
 import { existsSync, readFileSync } from 'node:fs';
+import pg from 'pg';
 import { pino } from 'pino';
 import { inject } from 'vitest';
 import request from 'supertest';
@@ -31,22 +33,59 @@ export function testConfig(overrides: Partial<Config> = {}): Config {
   };
 }
 
-/** Where the global setup left a migrated, seeded database for test files to copy (none outside vitest's setup). */
-function templatePath(): string | undefined {
+/** What the global setup left for test files to start from (nothing outside vitest's setup). */
+function injected<K extends 'testTemplatePath' | 'testTemplateDatabase'>(key: K): string | undefined {
   try {
-    return inject('testTemplatePath');
+    return inject(key) || undefined;
   } catch {
     return undefined;
   }
 }
 
 /**
- * Starts the real app (real PGlite, real better-auth, real SMTP catcher), seeded with the demo
- * office. An in-memory database starts from the template the global setup made, when there is one.
+ * The PostgreSQL server the API suite runs against for its second pass (`TEST_POSTGRES_URL`, a
+ * connection string to a throw-away cluster's maintenance database, set by
+ * tests/ensure-postgres.sh); undefined for the usual PGlite pass.
+ */
+export function testPostgresUrl(): string | undefined {
+  return process.env.TEST_POSTGRES_URL || undefined;
+}
+
+/**
+ * Creates a fresh database on the test PostgreSQL server, as a copy of `template` when given
+ * (CREATE DATABASE … TEMPLATE copies files, so a migrated and seeded database costs well under a
+ * second), and returns its connection string.
+ */
+export async function createPostgresDatabase(template?: string): Promise<string> {
+  const adminUrl = testPostgresUrl();
+  if (!adminUrl) throw new Error('TEST_POSTGRES_URL is not set');
+  const name = `stormdraft_${randomUUID().replaceAll('-', '')}`;
+  const client = new pg.Client({ connectionString: adminUrl });
+  await client.connect();
+  try {
+    await client.query(`create database ${name}${template ? ` template ${pg.escapeIdentifier(template)}` : ''}`);
+  } finally {
+    await client.end();
+  }
+  const url = new URL(adminUrl);
+  url.pathname = `/${name}`;
+  return url.toString();
+}
+
+/**
+ * Starts the real app (real database, real better-auth, real SMTP catcher), seeded with the demo
+ * office. An in-memory PGlite starts from the template the global setup made, when there is one.
+ * With TEST_POSTGRES_URL set, an app without its own `dataDir` or `databaseUrl` gets a fresh
+ * database of its own on that PostgreSQL server instead (a copy of the seeded template).
  */
 export async function startTestApp(overrides: Partial<Config> = {}, clientMode: ClientMode = 'none', options: { useTemplate?: boolean } = {}): Promise<Stormdraft> {
-  const config = testConfig(overrides);
-  const template = (options.useTemplate ?? true) && config.dataDir === undefined && config.seedDemo ? templatePath() : undefined;
+  let config = testConfig(overrides);
+  const useTemplate = (options.useTemplate ?? true) && config.seedDemo;
+  if (testPostgresUrl() && config.dataDir === undefined && config.databaseUrl === undefined) {
+    const template = useTemplate ? injected('testTemplateDatabase') : undefined;
+    config = { ...config, databaseUrl: await createPostgresDatabase(template) };
+  }
+  const template = useTemplate && config.dataDir === undefined && config.databaseUrl === undefined ? injected('testTemplatePath') : undefined;
   const loadDataDir = template && existsSync(template) ? new Blob([readFileSync(template)]) : undefined;
   return startStormdraft(config, { clientMode, logger: pino({ level: 'silent' }), ...(loadDataDir ? { loadDataDir } : {}) });
 }

@@ -17,6 +17,8 @@ export const subscriptionSchema = z.object({
   hazards: z.array(z.enum(hazardKinds)),
   days: z.array(z.number().int()),
   emails: z.array(z.string()),
+  /** Extra addresses whose owner has not followed the confirmation link yet: they receive nothing. */
+  unconfirmedEmails: z.array(z.string()).default([]),
   paused: z.boolean(),
   unsubscribed: z.boolean(),
   version: z.number().int(),

@@ -96,7 +96,10 @@ export function AlertSettingsFormPanel({ subscription, ladder }: AlertSettingsFo
         <ul className="mb-2 space-y-1">
           {form.emails.map((address) => (
             <li key={address} className="flex items-center justify-between gap-2 rounded-md bg-sunken px-2 py-1 text-sm">
-              <span className="truncate">{address}</span>
+              <span className="truncate">
+                {address}
+                {subscription.unconfirmedEmails.includes(address) ? <span className="ml-2 text-[12px] text-ink-muted">awaiting confirmation: nothing is sent here until the link we mailed is followed</span> : null}
+              </span>
               <Button
                 variant="ghost"
                 size="sm"

@@ -10,6 +10,7 @@ const subscription: Subscription = {
   hazards: ['wind', 'hail'],
   days: [2, 1],
   emails: ['em@county.test'],
+  unconfirmedEmails: [],
   paused: false,
   unsubscribed: false,
   version: 3,

@@ -1,0 +1,68 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { randomUUID } from 'node:crypto';
+import { and, count, eq } from 'drizzle-orm';
+import type { Stormdraft } from '../../server/start';
+import { mailOutbox, subscriptions, users } from '../../server/db/schema';
+import { findOffice } from '../../server/services/office.service';
+import { startMailCatcher, type MailCatcher } from '../../server/mail/mail-catcher';
+import { startTestApp, testPostgresUrl, waitFor } from './helpers/test-app';
+
+// "Several instances on one PostgreSQL" (issue 11): two app instances, each with its own outbox
+// worker and database pool, share one PostgreSQL database and one SMTP relay. Runs in the
+// PostgreSQL pass only (tests/ensure-postgres.sh); PGlite is one process's embedded database.
+
+const subscriberCount = 1000;
+const received = new Map<string, number>();
+let catcher: MailCatcher;
+const instances: Stormdraft[] = [];
+
+beforeAll(async () => {
+  if (!testPostgresUrl()) return;
+  catcher = await startMailCatcher(async (message) => {
+    for (const to of message.to.split(',').map((a) => a.trim())) received.set(to, (received.get(to) ?? 0) + 1);
+  });
+});
+afterAll(async () => {
+  for (const instance of instances) await instance.close();
+  await catcher?.close();
+});
+
+describe.skipIf(!testPostgresUrl())('two app instances on one PostgreSQL', () => {
+  it('When 1,000 subscribers are alerted and two instances drain the outbox, then each gets exactly one message and a live claim is left alone', async () => {
+    // The first instance seeds the database; its worker is off while the distribution is queued.
+    const first = await startTestApp({ smtpUrl: catcher.url, outboxIntervalMs: 0 });
+    instances.push(first);
+    const { db } = first.ctx;
+    const databaseUrl = first.ctx.config.databaseUrl;
+    expect(databaseUrl).toMatch(/^postgres:/);
+    const office = await findOffice(db);
+    const people = Array.from({ length: subscriberCount }, (_, i) => ({ id: randomUUID(), name: `Subscriber ${i}`, email: `em${i}@county.test`, emailVerified: true, role: 'subscriber' }));
+    await db.insert(users).values(people);
+    const subs = await db
+      .insert(subscriptions)
+      .values(people.map((p) => ({ officeId: office!.id, userId: p.id, alertThreshold: 'level1', emails: [p.email] }))) // the seeded office exists
+      .returning({ id: subscriptions.id, emails: subscriptions.emails });
+    // What publishing an issuance that reaches all of them leaves in the outbox: one message each.
+    const issuanceId = randomUUID();
+    await db.insert(mailOutbox).values(subs.map((s) => ({ dedupeKey: `alert:${issuanceId}:${s.id}`, toAddress: s.emails.join(', '), subject: 'Your area is at Level 1 · Isolated · Day 1 outlook 2027-0001', html: '<p>Alert</p>', text: 'Alert' })));
+    // A message another instance claimed a moment ago and is still sending: nobody else may send it.
+    await db.insert(mailOutbox).values({ dedupeKey: `alert:${issuanceId}:in-flight`, toAddress: 'in-flight@county.test', subject: 'In flight', html: '<p>x</p>', text: 'x', status: 'sending', claimedAt: new Date() });
+
+    for (let i = 0; i < 2; i++) instances.push(await startTestApp({ databaseUrl, smtpUrl: catcher.url, outboxIntervalMs: 25, seedDemo: false }));
+    await waitFor(
+      async () => {
+        const [sent] = await db.select({ value: count() }).from(mailOutbox).where(and(eq(mailOutbox.status, 'sent')));
+        return (sent?.value ?? 0) >= subscriberCount && received.size >= subscriberCount ? true : undefined;
+      },
+      'the two instances to send 1,000 messages',
+      1200,
+    );
+    for (const instance of instances.splice(1)) await instance.close();
+
+    const counts = people.map((p) => received.get(p.email) ?? 0);
+    expect(counts.filter((c) => c === 1)).toHaveLength(subscriberCount);
+    expect(received.get('in-flight@county.test')).toBeUndefined();
+    const [inFlight] = await db.select().from(mailOutbox).where(eq(mailOutbox.toAddress, 'in-flight@county.test'));
+    expect(inFlight?.status).toBe('sending');
+  });
+});
