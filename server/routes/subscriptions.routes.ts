@@ -7,11 +7,12 @@ import { parseInput, sendResult } from '../middleware/error-handler';
 import { listOutbox, resendOutboxMessage } from '../services/outbox.service';
 import { addAreaOfInterest, findPlaces, getMySubscription, listSubscribers, removeAreaOfInterest, saveMySubscription, unsubscribe } from '../services/subscriptions.service';
 import { route } from './route-definition';
+import { subscriberOverseerRoles, subscriberRoles } from '../../shared/workflow/roles';
 
 const areaParamsSchema = z.object({ areaId: idParamSchema });
 const messageParamsSchema = z.object({ messageId: idParamSchema });
 const tokenQuerySchema = z.object({ token: z.string().min(10, { message: 'The unsubscribe link is incomplete.' }).max(200) });
-const subscriber = access.roles('subscriber');
+const subscriber = access.roles(...subscriberRoles);
 
 const escapeHtml = (text: string) => text.replace(/[<>&"']/g, (c) => ({ '<': '&lt;', '>': '&gt;', '&': '&amp;', '"': '&quot;', "'": '&#39;' })[c] ?? c);
 const page = (title: string, body: string) =>
@@ -67,7 +68,7 @@ export const subscriptionsRoutes = [
   route({
     method: 'get',
     path: '/api/subscriptions',
-    access: access.roles('lead', 'admin'),
+    access: access.roles(...subscriberOverseerRoles),
     handler: async (ctx, _req, res) => sendResult(res, await listSubscribers(ctx.db)),
   }),
   route({

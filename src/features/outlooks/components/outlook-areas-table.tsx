@@ -1,7 +1,7 @@
 import { clsx } from 'clsx';
 import { RiskSwatch } from '../../../components/ui/risk-swatch';
 import type { RiskLadder } from '../../../../shared/contracts/office';
-import type { AreaEvidenceReport } from '../api/get-outlook-evidence';
+import type { AreaEvidenceReport } from '../../../../shared/contracts/outlooks';
 import { levelOf } from '../utils/area-display';
 import type { DraftArea } from '../utils/outlook-document';
 import { SupportBadge } from './evidence-panel';

@@ -11,7 +11,7 @@ import { AreaEditorMap } from '../../../lib/map/area-editor-map';
 import type { PointProperties } from '../../../lib/map/point-map';
 import { hazardKinds, hazardLabels } from '../../../../shared/contracts/outlooks';
 import { formatTimestampUtc } from '../../../utils/time';
-import { useRevision } from '../api/get-revision';
+import { useRevision } from '../../../api/outlooks/get-revision';
 import { DiscussionPreview } from '../components/discussion-editor';
 import { areaFeatures, levelOf } from '../utils/area-display';
 import { formatPeriod } from '../utils/valid-period';

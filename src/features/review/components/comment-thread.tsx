@@ -6,8 +6,8 @@ import { Button } from '../../../components/ui/button';
 import { FieldError, SelectField, inputClasses } from '../../../components/ui/field';
 import { Notice } from '../../../components/ui/notice';
 import { formatTimestampUtc } from '../../../utils/time';
-import { useAddComment } from '../api/add-comment';
-import { useComments } from '../api/get-comments';
+import { useAddComment } from '../../../api/outlooks/add-comment';
+import { useComments } from '../../../api/outlooks/get-comments';
 import { areaName } from '../utils/review-map-areas';
 
 /** The review conversation: general comments and comments pinned to one area. */
