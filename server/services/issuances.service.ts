@@ -12,6 +12,7 @@ import { queueWithdrawalNotices } from './distribution.service';
 import { findOffice } from './office.service';
 import { writeRevision } from './outlooks.service';
 import { publicCaution } from '../../shared/workflow/caution';
+import { levelLabel } from '../../shared/workflow/levels';
 import { issuanceSnapshotSchema, type Archive, type Bulletin, type Issuance, type IssuanceSnapshot } from '../../shared/contracts/issuances';
 import type { RiskArea } from '../../shared/contracts/outlooks';
 import type { Region, RiskLevel } from '../../shared/contracts/office';
@@ -106,7 +107,7 @@ export async function issuanceGeoJson(db: Database, number: string): Promise<Res
         properties: {
           issuance: view.number,
           level: area.levelKey,
-          levelLabel: ladder.find((l) => l.key === area.levelKey)?.label ?? area.levelKey,
+          levelLabel: levelLabel(ladder, area.levelKey),
           colour: ladder.find((l) => l.key === area.levelKey)?.colour ?? null,
           hazards: area.hazards,
           validFrom: view.validFrom,

@@ -2,11 +2,12 @@ import { isDeepStrictEqual } from 'node:util';
 import { and, asc, desc, eq, gt, gte, inArray, lt, max, sql } from 'drizzle-orm';
 import { withRfc7946Winding } from '../../shared/geometry/winding';
 import type { Feature, FeatureCollection } from 'geojson';
-import { areaGeometrySchema, hazardFlagSchema, revisionSnapshotSchema, type CreateOutlookInput, type Outlook, type OutlookListQuery, type OutlookRevision, type OutlookSummary, type RevisionSnapshot, type RevisionSummary, type RiskArea, type RiskAreaInput, type SaveOutlookInput } from '../../shared/contracts/outlooks';
+import { areaGeometrySchema, hazardFlagSchema, revisionSnapshotSchema, type CreateOutlookInput, type Outlook, type OutlookListQuery, type AreaImportResult, type OutlookEvidence, type OutlookList, type OutlookRevision, type OutlookSummary, type RevisionList, type RevisionSnapshot, type RiskArea, type RiskAreaInput, type SaveOutlookInput } from '../../shared/contracts/outlooks';
 import { isEditableState } from '../../shared/workflow/transitions';
 import { outlookStatePhrases } from '../../shared/workflow/states';
 import { areaEvidence, soundingsInPeriod, type AreaEvidence, type EvidenceSounding } from '../../shared/evidence/evidence';
-import { checkSupport, defaultGuidanceThresholds, type GuidanceThresholds, type SupportCheck } from '../../shared/evidence/support-check';
+import { checkSupport, defaultGuidanceThresholds, type SupportCheck } from '../../shared/evidence/support-check';
+import type { GuidanceThresholds } from '../../shared/contracts/office';
 import { checkAreas, type AreaCheck } from '../../shared/geometry/area-checks';
 import { validPeriod } from '../../shared/time/valid-period';
 import { appError, type AppError, type FieldIssue } from '../../shared/errors';
@@ -100,7 +101,7 @@ async function loadOutlook(db: DatabaseOrTransaction, outlookId: string): Promis
 const notFound = () => appError('NOT_FOUND', 'There is no outlook with that id.');
 
 /** Drafts, reviews and published drafts, newest valid time first, filtered by state, day and local date. */
-export async function listOutlooks(db: Database, query: OutlookListQuery): Promise<Result<{ outlooks: OutlookSummary[] }, AppError>> {
+export async function listOutlooks(db: Database, query: OutlookListQuery): Promise<Result<OutlookList, AppError>> {
   const office = await requireOffice(db);
   const filters = [eq(outlooks.officeId, office.id)];
   if (query.state) filters.push(eq(outlooks.state, query.state));
@@ -258,7 +259,7 @@ export async function saveOutlook(db: Database, actor: Actor, outlookId: string,
   });
 }
 
-export async function listRevisions(db: Database, outlookId: string): Promise<Result<{ revisions: RevisionSummary[] }, AppError>> {
+export async function listRevisions(db: Database, outlookId: string): Promise<Result<RevisionList, AppError>> {
   const rows = await db
     .select({ id: outlookRevisions.id, revisionNumber: outlookRevisions.revisionNumber, authorId: outlookRevisions.authorId, authorName: users.name, createdAt: outlookRevisions.createdAt })
     .from(outlookRevisions)
@@ -342,13 +343,13 @@ export function buildEvidenceReport(outlook: Pick<Outlook, 'areas' | 'validFrom'
   });
 }
 
-export async function getOutlookEvidence(db: Database, outlookId: string, source?: 'observed' | 'model'): Promise<Result<{ areas: AreaEvidenceReport[]; soundingCount: number }, AppError>> {
+export async function getOutlookEvidence(db: Database, outlookId: string, source?: 'observed' | 'model'): Promise<Result<OutlookEvidence, AppError>> {
   const outlook = await loadOutlook(db, outlookId);
   if (!outlook) return err(notFound());
   const office = await requireOffice(db);
   const candidates = await evidenceSoundings(db, new Date(outlook.validFrom), new Date(outlook.validUntil));
   const guidance = Object.keys(office.guidanceThresholds).length ? office.guidanceThresholds : defaultGuidanceThresholds;
-  const areas = buildEvidenceReport(outlook, candidates, office.riskLadder, guidance as GuidanceThresholds, office.region, source);
+  const areas = buildEvidenceReport(outlook, candidates, office.riskLadder, guidance, office.region, source);
   return ok({ areas, soundingCount: candidates.filter((s) => !s.modified && (!source || s.source === source)).length });
 }
 
@@ -378,7 +379,7 @@ export async function exportAreasGeoJson(db: Database, outlookId: string): Promi
  * ladder key or label; problems are reported per feature. Nothing is saved: the author adds
  * the areas to the draft, which autosaves.
  */
-export async function importAreasGeoJson(db: Database, document: unknown): Promise<Result<{ areas: RiskAreaInput[] }, AppError>> {
+export async function importAreasGeoJson(db: Database, document: unknown): Promise<Result<AreaImportResult, AppError>> {
   const office = await requireOffice(db);
   const byKeyOrLabel = new Map<string, string>();
   for (const l of office.riskLadder) {

@@ -16,7 +16,7 @@ import { formatTimestampUtc } from '../../../utils/time';
 import { createOutlookInputSchema, outlookStates, type OutlookListQuery, type OutlookState } from '../../../../shared/contracts/outlooks';
 import { useCreateOutlook } from '../../../api/outlooks/create-outlook';
 import { useOutlooks } from '../../../api/outlooks/get-outlooks';
-import { levelOf } from '../utils/area-display';
+import { ladderLevel } from '../../../../shared/workflow/levels';
 import { authoringRoles, hasRole } from '../../../../shared/workflow/roles';
 import { outlookStateLabels } from '../../../../shared/workflow/states';
 import { formatPeriod } from '../utils/valid-period';
@@ -154,7 +154,7 @@ export function DeskPage() {
               </thead>
               <tbody>
                 {outlooks.data.outlooks.map((outlook) => {
-                  const highest = outlook.highestLevelKey ? levelOf(ladder, outlook.highestLevelKey) : null;
+                  const highest = outlook.highestLevelKey ? ladderLevel(ladder, outlook.highestLevelKey) : null;
                   return (
                     <tr key={outlook.id} className="border-b border-line last:border-0 hover:bg-sunken/60">
                       <th scope="row" className="px-3 py-2 text-left font-normal">

@@ -4,7 +4,8 @@ import type { OfficeSettings } from '../../../../shared/contracts/office';
 import type { Outlook } from '../../../../shared/contracts/outlooks';
 import { RiskSwatch } from '../../../components/ui/risk-swatch';
 import type { AreaEvidenceReport } from '../../../../shared/contracts/outlooks';
-import { levelColour, levelLabel } from '../utils/review-map-areas';
+import { levelLabel } from '../../../../shared/workflow/levels';
+import { levelColour } from '../utils/review-map-areas';
 
 const resultStyle: Record<SupportResult, string> = {
   supported: 'bg-ok-soft text-ok',
