@@ -1,6 +1,6 @@
 import { z } from 'zod';
 
-/** Upload limits (SCIENCE.md): 2 MB per file, 5,000 levels per sounding, 500 files per batch. */
+/** Upload limits (docs/, sounding exchange format): 2 MB per file, 5,000 levels per sounding, 500 files per batch. */
 export const soundingLimits = { maxFileBytes: 2 * 1024 * 1024, maxLevels: 5000, maxFilesPerBatch: 500 } as const;
 
 export const soundingSourceSchema = z.enum(['observed', 'model'], { message: 'Source must be "observed" or "model".' });
