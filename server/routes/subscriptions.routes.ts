@@ -8,13 +8,13 @@ import { listOutbox, resendOutboxMessage } from '../services/outbox.service';
 import { addAreaOfInterest, findPlaces, getMySubscription, listSubscribers, removeAreaOfInterest, saveMySubscription, unsubscribe } from '../services/subscriptions.service';
 import { route } from './route-definition';
 import { subscriberOverseerRoles, subscriberRoles } from '../../shared/workflow/roles';
+import { escapeHtml } from '../../shared/text/escape-html';
 
 const areaParamsSchema = z.object({ areaId: idParamSchema });
 const messageParamsSchema = z.object({ messageId: idParamSchema });
 const tokenQuerySchema = z.object({ token: z.string().min(10, { message: 'The unsubscribe link is incomplete.' }).max(200) });
 const subscriber = access.roles(...subscriberRoles);
 
-const escapeHtml = (text: string) => text.replace(/[<>&"']/g, (c) => ({ '<': '&lt;', '>': '&gt;', '&': '&amp;', '"': '&quot;', "'": '&#39;' })[c] ?? c);
 const page = (title: string, body: string) =>
   `<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width"><title>${escapeHtml(title)}</title></head><body style="font-family:system-ui,sans-serif;max-width:36rem;margin:3rem auto;padding:0 1rem;color:#1f2a44"><h1 style="font-size:1.4rem">${escapeHtml(title)}</h1>${body}</body></html>`;
 
