@@ -9,6 +9,7 @@ import { buffer } from '@turf/turf';
 import type { Region, RiskLevel } from '../../shared/contracts/office';
 import type { AreaGeometry, RiskArea } from '../../shared/contracts/outlooks';
 import { withRfc7946Winding } from '../../shared/geometry/winding';
+import { escapeHtml } from '../../shared/text/escape-html';
 
 const require = createRequire(import.meta.url);
 const fontFiles = ['PublicSans-Regular.ttf', 'PublicSans-SemiBold.ttf'].map((f) => require.resolve(`public-sans/binaries/webfonts/${f}`));
@@ -50,7 +51,6 @@ function forD3(geometry: AreaGeometry): Geometry {
 /** How far inside an area its significant-hazard outline runs. */
 const insetKm = 6;
 
-const escapeXml = (text: string) => text.replace(/[<>&"']/g, (c) => ({ '<': '&lt;', '>': '&gt;', '&': '&amp;', '"': '&quot;', "'": '&apos;' })[c] ?? c);
 
 /**
  * The risk map as SVG: offline state and county lines, risk areas in ladder order with their
@@ -86,7 +86,7 @@ export function renderMapSvg(input: MapImageInput): string {
     .map((level, i) => {
       const x = 16 + (i % 3) * ((width - 32) / 3);
       const y = header + mapHeight + 12 + Math.floor(i / 3) * 28;
-      return `<rect x="${x}" y="${y}" width="22" height="18" rx="3" fill="${level.colour}" stroke="#1f2a44" stroke-width="0.5"/><text x="${x + 30}" y="${y + 14}" font-size="14" fill="#1f2a44">${escapeXml(level.label)}</text>`;
+      return `<rect x="${x}" y="${y}" width="22" height="18" rx="3" fill="${level.colour}" stroke="#1f2a44" stroke-width="0.5"/><text x="${x + 30}" y="${y + 14}" font-size="14" fill="#1f2a44">${escapeHtml(level.label)}</text>`;
     })
     .join('');
   const highlight = input.highlight ? `<path d="${path(forD3(input.highlight)) ?? ''}" fill="none" stroke="#b45309" stroke-width="3" stroke-dasharray="8 4"/>` : '';
@@ -94,8 +94,8 @@ export function renderMapSvg(input: MapImageInput): string {
   return [
     `<svg xmlns="http://www.w3.org/2000/svg" width="${width}" height="${height}" viewBox="0 0 ${width} ${height}" font-family="Public Sans">`,
     `<rect width="${width}" height="${height}" fill="#ffffff"/>`,
-    `<text x="16" y="28" font-size="20" font-weight="600" fill="#1f2a44">${escapeXml(input.title)}</text>`,
-    `<text x="16" y="50" font-size="14" fill="#4b5563">${escapeXml(input.subtitle)}</text>`,
+    `<text x="16" y="28" font-size="20" font-weight="600" fill="#1f2a44">${escapeHtml(input.title)}</text>`,
+    `<text x="16" y="50" font-size="14" fill="#4b5563">${escapeHtml(input.subtitle)}</text>`,
     `<clipPath id="${clipId}"><rect x="12" y="${header}" width="${width - 24}" height="${mapHeight}"/></clipPath>`,
     `<g clip-path="url(#${clipId})"><rect x="12" y="${header}" width="${width - 24}" height="${mapHeight}" fill="#f5f7fa"/>`,
     areaPaths,
@@ -105,7 +105,7 @@ export function renderMapSvg(input: MapImageInput): string {
     `</g>`,
     `<rect x="12" y="${header}" width="${width - 24}" height="${mapHeight}" fill="none" stroke="#d6dbe4"/>`,
     legend,
-    `<text x="16" y="${height - 30}" font-size="12" fill="#3f2a05">${escapeXml(input.caution)}</text>`,
+    `<text x="16" y="${height - 30}" font-size="12" fill="#3f2a05">${escapeHtml(input.caution)}</text>`,
     `<text x="16" y="${height - 12}" font-size="11" fill="#6b7280">Stormdraft · map data: US Census Bureau boundaries via us-atlas</text>`,
     `</svg>`,
   ].join('');

@@ -1,6 +1,7 @@
 import { readFileSync, readdirSync } from 'node:fs';
 import path from 'node:path';
 import Handlebars from 'handlebars';
+import { publicCaution as caution } from '../../shared/workflow/caution';
 
 const templatesDir = path.resolve(import.meta.dirname, '../../templates');
 
@@ -10,8 +11,6 @@ export interface RenderedMail {
   text: string;
 }
 
-const caution =
-  'This outlook is planning guidance, not a warning. Follow warnings from the national weather service and instructions from your local emergency officials.';
 
 function createEngine(): typeof Handlebars {
   const engine = Handlebars.create();

@@ -5,6 +5,7 @@ import { parseInput, sendResult } from '../middleware/error-handler';
 import { amendIssuance, atomFeed, currentBulletin, getIssuance, issuanceGeoJson, issuanceKml, issuanceMap, listArchive, withdrawIssuance } from '../services/issuances.service';
 import { sendError } from '../middleware/error-handler';
 import { route } from './route-definition';
+import { authoringRoles, reviewingRoles } from '../../shared/workflow/roles';
 
 const numberParamsSchema = z.object({ issuanceNumber: issuanceNumberSchema });
 
@@ -96,7 +97,7 @@ export const issuancesRoutes = [
   route({
     method: 'post',
     path: '/api/issuances/:issuanceNumber/withdraw',
-    access: access.roles('lead'),
+    access: access.roles(...reviewingRoles),
     handler: async (ctx, req, res) => {
       const params = parseInput(numberParamsSchema, req.params, 'address');
       if (!params.ok) return sendResult(res, params);
@@ -108,7 +109,7 @@ export const issuancesRoutes = [
   route({
     method: 'post',
     path: '/api/issuances/:issuanceNumber/amend',
-    access: access.roles('forecaster', 'lead'),
+    access: access.roles(...authoringRoles),
     handler: async (ctx, req, res) => {
       const params = parseInput(numberParamsSchema, req.params, 'address');
       if (!params.ok) return sendResult(res, params);

@@ -5,17 +5,18 @@ import { access, actorOf } from '../auth/require-role';
 import { parseInput, sendResult } from '../middleware/error-handler';
 import { createOutlook, exportAreasGeoJson, getOutlook, getOutlookEvidence, getRevision, importAreasGeoJson, listOutlooks, listRevisions, saveOutlook } from '../services/outlooks.service';
 import { route } from './route-definition';
+import { authoringRoles, officeReaderRoles } from '../../shared/workflow/roles';
 
 const outlookParamsSchema = z.object({ outlookId: idParamSchema });
 const revisionParamsSchema = z.object({ revisionId: idParamSchema });
-const staff = access.roles('forecaster', 'lead', 'admin');
-const authors = access.roles('forecaster', 'lead');
+const officeReaders = access.roles(...officeReaderRoles);
+const authors = access.roles(...authoringRoles);
 
 export const outlooksRoutes = [
   route({
     method: 'get',
     path: '/api/outlooks',
-    access: staff,
+    access: officeReaders,
     handler: async (ctx, req, res) => {
       const query = parseInput(outlookListQuerySchema, req.query, 'filters');
       if (!query.ok) return sendResult(res, query);
@@ -45,7 +46,7 @@ export const outlooksRoutes = [
   route({
     method: 'get',
     path: '/api/outlooks/:outlookId',
-    access: staff,
+    access: officeReaders,
     handler: async (ctx, req, res) => {
       const params = parseInput(outlookParamsSchema, req.params, 'address');
       if (!params.ok) return sendResult(res, params);
@@ -67,7 +68,7 @@ export const outlooksRoutes = [
   route({
     method: 'get',
     path: '/api/outlooks/:outlookId/evidence',
-    access: staff,
+    access: officeReaders,
     handler: async (ctx, req, res) => {
       const params = parseInput(outlookParamsSchema, req.params, 'address');
       if (!params.ok) return sendResult(res, params);
@@ -79,7 +80,7 @@ export const outlooksRoutes = [
   route({
     method: 'get',
     path: '/api/outlooks/:outlookId/geojson',
-    access: staff,
+    access: officeReaders,
     handler: async (ctx, req, res) => {
       const params = parseInput(outlookParamsSchema, req.params, 'address');
       if (!params.ok) return sendResult(res, params);
@@ -91,7 +92,7 @@ export const outlooksRoutes = [
   route({
     method: 'get',
     path: '/api/outlooks/:outlookId/revisions',
-    access: staff,
+    access: officeReaders,
     handler: async (ctx, req, res) => {
       const params = parseInput(outlookParamsSchema, req.params, 'address');
       if (!params.ok) return sendResult(res, params);
@@ -101,7 +102,7 @@ export const outlooksRoutes = [
   route({
     method: 'get',
     path: '/api/outlook-revisions/:revisionId',
-    access: staff,
+    access: officeReaders,
     handler: async (ctx, req, res) => {
       const params = parseInput(revisionParamsSchema, req.params, 'address');
       if (!params.ok) return sendResult(res, params);

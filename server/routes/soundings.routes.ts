@@ -8,10 +8,11 @@ import { access, actorOf } from '../auth/require-role';
 import { parseInput, sendError, sendResult } from '../middleware/error-handler';
 import { createSoundings, deleteSounding, getSounding, listSoundings, saveModifiedSounding, updateSoundingMetadata, uploadSoundingFiles } from '../services/soundings.service';
 import { route } from './route-definition';
+import { authoringRoles, officeReaderRoles } from '../../shared/workflow/roles';
 
 const soundingParamsSchema = z.object({ soundingId: idParamSchema });
-const readers = access.roles('forecaster', 'lead', 'admin');
-const authors = access.roles('forecaster', 'lead');
+const readers = access.roles(...officeReaderRoles);
+const authors = access.roles(...authoringRoles);
 
 const upload = multer({
   storage: multer.memoryStorage(),

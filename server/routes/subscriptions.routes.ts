@@ -7,14 +7,15 @@ import { parseInput, sendResult } from '../middleware/error-handler';
 import { listOutbox, resendOutboxMessage } from '../services/outbox.service';
 import { addAreaOfInterest, confirmSubscriptionEmail, findPlaces, getMySubscription, listSubscribers, removeAreaOfInterest, saveMySubscription, unsubscribe } from '../services/subscriptions.service';
 import { route } from './route-definition';
+import { subscriberOverseerRoles, subscriberRoles } from '../../shared/workflow/roles';
+import { escapeHtml } from '../../shared/text/escape-html';
 
 const areaParamsSchema = z.object({ areaId: idParamSchema });
 const messageParamsSchema = z.object({ messageId: idParamSchema });
 const tokenQuerySchema = z.object({ token: z.string().min(10, { message: 'The unsubscribe link is incomplete.' }).max(200) });
 const confirmationQuerySchema = z.object({ token: z.string().min(20, { message: 'The confirmation link is incomplete.' }).max(200) });
-const subscriber = access.roles('subscriber');
+const subscriber = access.roles(...subscriberRoles);
 
-const escapeHtml = (text: string) => text.replace(/[<>&"']/g, (c) => ({ '<': '&lt;', '>': '&gt;', '&': '&amp;', '"': '&quot;', "'": '&#39;' })[c] ?? c);
 const page = (title: string, body: string) =>
   `<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width"><title>${escapeHtml(title)}</title></head><body style="font-family:system-ui,sans-serif;max-width:36rem;margin:3rem auto;padding:0 1rem;color:#1f2a44"><h1 style="font-size:1.4rem">${escapeHtml(title)}</h1>${body}</body></html>`;
 
@@ -68,7 +69,7 @@ export const subscriptionsRoutes = [
   route({
     method: 'get',
     path: '/api/subscriptions',
-    access: access.roles('lead', 'admin'),
+    access: access.roles(...subscriberOverseerRoles),
     handler: async (ctx, _req, res) => sendResult(res, await listSubscribers(ctx.db)),
   }),
   route({

@@ -4,11 +4,13 @@ import { commentInputSchema, transitionInputSchema, workflowActions } from '../.
 import { access, actorOf } from '../auth/require-role';
 import { parseInput, sendResult } from '../middleware/error-handler';
 import { addComment, listAudit, listComments } from '../services/review.service';
-import { transitionOutlook, transitions } from '../services/workflow.service';
+import { transitionOutlook } from '../services/workflow.service';
 import { route } from './route-definition';
+import { authoringRoles, officeReaderRoles } from '../../shared/workflow/roles';
+import { transitions } from '../../shared/workflow/transitions';
 
 const outlookParamsSchema = z.object({ outlookId: idParamSchema });
-const staff = access.roles('forecaster', 'lead', 'admin');
+const officeReaders = access.roles(...officeReaderRoles);
 
 /** POST /api/outlooks/:outlookId/{submit,return,approve,publish}: one route per transition of the table. */
 const transitionRoutes = workflowActions.map((action) =>
@@ -31,7 +33,7 @@ export const workflowRoutes = [
   route({
     method: 'get',
     path: '/api/outlooks/:outlookId/comments',
-    access: staff,
+    access: officeReaders,
     handler: async (ctx, req, res) => {
       const params = parseInput(outlookParamsSchema, req.params, 'address');
       if (!params.ok) return sendResult(res, params);
@@ -41,7 +43,7 @@ export const workflowRoutes = [
   route({
     method: 'post',
     path: '/api/outlooks/:outlookId/comments',
-    access: access.roles('forecaster', 'lead'),
+    access: access.roles(...authoringRoles),
     handler: async (ctx, req, res) => {
       const params = parseInput(outlookParamsSchema, req.params, 'address');
       if (!params.ok) return sendResult(res, params);
@@ -53,7 +55,7 @@ export const workflowRoutes = [
   route({
     method: 'get',
     path: '/api/outlooks/:outlookId/audit',
-    access: staff,
+    access: officeReaders,
     handler: async (ctx, req, res) => {
       const params = parseInput(outlookParamsSchema, req.params, 'address');
       if (!params.ok) return sendResult(res, params);

@@ -4,6 +4,7 @@ import { hazardLabels } from '../../shared/contracts/outlooks';
 import type { RiskLevel } from '../../shared/contracts/office';
 import { decideNotice, matchAreas, type NoticeKind } from '../../shared/distribution/match';
 import { unionOf } from '../../shared/geometry/area-checks';
+import { publicCautionShort } from '../../shared/workflow/caution';
 import type { Config } from '../config';
 import type { Transaction } from '../db/client';
 import { areasOfInterest, mailOutbox, notifications, subscriptions } from '../db/schema';
@@ -155,7 +156,7 @@ async function queueMessages(
             region: office.region,
             ladder: office.riskLadder,
             areas: issuance.areas,
-            caution: 'Planning guidance, not a warning. Follow official warnings and local emergency officials.',
+            caution: publicCautionShort,
             ...(highlight ? { highlight } : {}),
             width: 600,
           }).toString('base64'),

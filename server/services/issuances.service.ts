@@ -7,35 +7,28 @@ import { isInForce } from '../../shared/issuances/in-force';
 import { err, ok, type Result } from '../../shared/result';
 import type { Actor } from '../auth/require-role';
 import { isUniqueViolation, type Database, type DatabaseOrTransaction } from '../db/client';
-import { auditEvents, issuances, outlookRevisions, outlooks, riskAreas } from '../db/schema';
+import { auditEvents, issuances, outlooks, riskAreas } from '../db/schema';
 import type { Config } from '../config';
 import { queueWithdrawalNotices } from './distribution.service';
 import { findOffice } from './office.service';
+import { writeRevision } from './outlooks.service';
+import { publicCaution } from '../../shared/workflow/caution';
+import { levelLabel } from '../../shared/workflow/levels';
+import { issuanceSnapshotSchema, type Archive, type Bulletin, type Issuance, type IssuanceSnapshot } from '../../shared/contracts/issuances';
 import type { RiskArea } from '../../shared/contracts/outlooks';
 import type { Region, RiskLevel } from '../../shared/contracts/office';
 import { buildAtomFeed } from '../exports/atom';
 import { buildKml } from '../exports/kml';
 import { renderMapPng, renderMapSvg } from '../exports/map-image';
 
-export const publicCaution =
-  'This outlook is planning guidance, not a warning. Follow warnings from the national weather service and instructions from your local emergency officials.';
 
 type IssuanceRow = typeof issuances.$inferSelect;
 
-export interface IssuanceView {
-  id: string;
-  number: string;
-  day: number;
-  state: IssuanceRow['state'];
-  validFrom: string;
-  validUntil: string;
-  publishedAt: string;
-  supersedesNumber: string | null;
-  supersededByNumber: string | null;
-  withdrawnReason: string | null;
-  withdrawnAt: string | null;
-  snapshot: Record<string, unknown>;
-  caution: string;
+export type IssuanceView = Issuance;
+
+/** The frozen snapshot, read through its schema (older snapshots get their defaults). */
+function snapshotOfRow(row: IssuanceRow): IssuanceSnapshot {
+  return issuanceSnapshotSchema.parse(row.snapshot);
 }
 
 async function numberOf(db: DatabaseOrTransaction, id: string | null): Promise<string | null> {
@@ -57,13 +50,13 @@ async function toView(db: DatabaseOrTransaction, row: IssuanceRow): Promise<Issu
     supersededByNumber: await numberOf(db, row.supersededById),
     withdrawnReason: row.withdrawnReason,
     withdrawnAt: row.withdrawnAt?.toISOString() ?? null,
-    snapshot: row.snapshot,
+    snapshot: snapshotOfRow(row),
     caution: publicCaution,
   };
 }
 
 /** The bulletin: the latest published (current) issuance for each of Days 1–3. */
-export async function currentBulletin(db: Database): Promise<Result<{ issuances: IssuanceView[]; caution: string }, AppError>> {
+export async function currentBulletin(db: Database): Promise<Result<Bulletin, AppError>> {
   const rows = await db.select().from(issuances).where(eq(issuances.state, 'published')).orderBy(desc(issuances.publishedAt));
   const latest = new Map<number, IssuanceRow>();
   for (const row of rows) if (!latest.has(row.day)) latest.set(row.day, row);
@@ -72,7 +65,7 @@ export async function currentBulletin(db: Database): Promise<Result<{ issuances:
 }
 
 /** The archive: every issuance (superseded and withdrawn included), newest first, searchable. */
-export async function listArchive(db: Database, query: ArchiveQuery): Promise<Result<{ issuances: (Omit<IssuanceView, 'snapshot'> & { headline: string })[]; total: number; caution: string }, AppError>> {
+export async function listArchive(db: Database, query: ArchiveQuery): Promise<Result<Archive, AppError>> {
   const filters: SQL[] = [];
   if (query.q) {
     const text = or(ilike(issuances.number, `%${query.q}%`), sql`${issuances.snapshot}->>'headline' ilike ${`%${query.q}%`}`, sql`${issuances.snapshot}->>'discussion' ilike ${`%${query.q}%`}`);
@@ -86,7 +79,7 @@ export async function listArchive(db: Database, query: ArchiveQuery): Promise<Re
   const rows = await db.select().from(issuances).where(where).orderBy(desc(issuances.publishedAt)).limit(query.pageSize).offset((query.page - 1) * query.pageSize);
   const [total] = await db.select({ value: count() }).from(issuances).where(where);
   const views = await Promise.all(rows.map((r) => toView(db, r)));
-  return ok({ issuances: views.map(({ snapshot: _snapshot, ...rest }) => ({ ...rest, headline: String(_snapshot.headline ?? '') })), total: total?.value ?? 0, caution: publicCaution });
+  return ok({ issuances: views.map(({ snapshot, ...rest }) => ({ ...rest, headline: snapshot.headline })), total: total?.value ?? 0, caution: publicCaution });
 }
 
 export async function getIssuance(db: DatabaseOrTransaction, number: string): Promise<Result<IssuanceView, AppError>> {
@@ -100,8 +93,8 @@ export async function issuanceGeoJson(db: Database, number: string): Promise<Res
   const found = await getIssuance(db, number);
   if (!found.ok) return found;
   const view = found.value;
-  const ladder = (view.snapshot.riskLadder as { key: string; label: string; colour: string }[] | undefined) ?? [];
-  const areas = (view.snapshot.areas as RiskArea[] | undefined) ?? [];
+  const ladder = view.snapshot.riskLadder;
+  const areas = view.snapshot.areas;
   return ok({
     type: 'FeatureCollection',
     // RFC 7946 allows foreign members; these carry the identity of the issuance.
@@ -115,7 +108,7 @@ export async function issuanceGeoJson(db: Database, number: string): Promise<Res
         properties: {
           issuance: view.number,
           level: area.levelKey,
-          levelLabel: ladder.find((l) => l.key === area.levelKey)?.label ?? area.levelKey,
+          levelLabel: levelLabel(ladder, area.levelKey),
           colour: ladder.find((l) => l.key === area.levelKey)?.colour ?? null,
           hazards: area.hazards,
           validFrom: view.validFrom,
@@ -144,8 +137,8 @@ export async function withdrawIssuance(db: Database, config: Config, actor: Acto
       return err(appError('CONFLICT', `Issuance ${number} is ${exists.value.state}; only a current (published) issuance can be withdrawn.`));
     }
     await tx.insert(auditEvents).values({ officeId: office.id, issuanceId: row.id, outlookId: row.outlookId, actorId: actor.userId, action: 'withdraw', fromState: 'published', toState: 'withdrawn', comment: reason });
-    const s = row.snapshot as { headline?: string; discussion?: string; areas?: RiskArea[] };
-    await queueWithdrawalNotices(tx, config, office, { id: row.id, number: row.number, day: row.day, validFrom: row.validFrom.toISOString(), validUntil: row.validUntil.toISOString(), supersedesId: row.supersedesId, headline: s.headline ?? '', discussion: s.discussion ?? '', areas: s.areas ?? [] }, reason);
+    const s = snapshotOfRow(row);
+    await queueWithdrawalNotices(tx, config, office, { id: row.id, number: row.number, day: row.day, validFrom: row.validFrom.toISOString(), validUntil: row.validUntil.toISOString(), supersedesId: row.supersedesId, headline: s.headline, discussion: s.discussion, areas: s.areas.map((a, i) => ({ ...a, sortOrder: a.sortOrder ?? i })) }, reason);
     return ok(await toView(tx, row));
   });
 }
@@ -170,7 +163,7 @@ export async function amendIssuance(db: Database, actor: Actor, number: string):
       }
       const [open] = await tx.select({ id: outlooks.id }).from(outlooks).where(and(eq(outlooks.amendsIssuanceId, issuance.id), ne(outlooks.state, 'published')));
       if (open) return err(openAmendmentConflict(number, open.id));
-      const s = issuance.snapshot as { headline?: string; discussion?: string; hazardNotes?: Record<string, string>; areas?: RiskArea[] };
+      const s = issuanceSnapshotSchema.parse(issuance.snapshot);
       const [row] = await tx
         .insert(outlooks)
         .values({
@@ -190,7 +183,8 @@ export async function amendIssuance(db: Database, actor: Actor, number: string):
       if (!row) throw new Error('amendment insert returned no row');
       const areas = s.areas ?? [];
       if (areas.length) await tx.insert(riskAreas).values(areas.map((a, i) => ({ outlookId: row.id, levelKey: a.levelKey, hazards: a.hazards, geometry: a.geometry, label: a.label, sortOrder: i })));
-      await tx.insert(outlookRevisions).values({ outlookId: row.id, revisionNumber: 1, snapshot: { amends: number, headline: s.headline, discussion: s.discussion, areas }, authorId: actor.userId });
+      // The first revision carries the whole document, valid period included (#12 item 3).
+      await writeRevision(tx, row.id, 1, actor.userId, { amends: number });
       await tx.insert(auditEvents).values({ officeId: office.id, outlookId: row.id, issuanceId: issuance.id, actorId: actor.userId, action: 'amend', toState: 'draft', details: { amends: number } });
       return ok({ outlookId: row.id });
     });
@@ -214,9 +208,15 @@ interface SnapshotParts {
   office: { name: string; timeZone: string; region: Region };
 }
 
+/** What the map and KML exports need from a snapshot (a region for snapshots written without one). */
 function snapshotParts(view: IssuanceView): SnapshotParts {
-  const s = view.snapshot as Partial<SnapshotParts>;
-  return { riskLadder: s.riskLadder ?? [], areas: s.areas ?? [], headline: s.headline ?? '', office: s.office ?? { name: 'Stormdraft', timeZone: 'UTC', region: { west: -125, south: 24, east: -66, north: 50 } } };
+  const s = view.snapshot;
+  return {
+    riskLadder: s.riskLadder,
+    areas: s.areas.map((a, i) => ({ ...a, sortOrder: a.sortOrder ?? i })),
+    headline: s.headline,
+    office: { name: s.office.name, timeZone: s.office.timeZone, region: s.office.region ?? { west: -125, south: 24, east: -66, north: 50 } },
+  };
 }
 
 export async function issuanceKml(db: Database, number: string): Promise<Result<string, AppError>> {
@@ -254,7 +254,7 @@ export async function atomFeed(db: Database, publicUrl: string): Promise<Result<
       publicUrl,
       caution: publicCaution,
       updated: rows[0]?.publishedAt ?? new Date(0),
-      entries: rows.map((r) => ({ number: r.number, day: r.day, state: r.state, headline: String(r.snapshot.headline ?? ''), validFrom: r.validFrom.toISOString(), validUntil: r.validUntil.toISOString(), publishedAt: r.publishedAt.toISOString() })),
+      entries: rows.map((r) => ({ number: r.number, day: r.day, state: r.state, headline: r.snapshot.headline, validFrom: r.validFrom.toISOString(), validUntil: r.validUntil.toISOString(), publishedAt: r.publishedAt.toISOString() })),
     }),
   );
 }

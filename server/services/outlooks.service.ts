@@ -1,9 +1,13 @@
-import { and, asc, desc, eq, gte, inArray, lt, ne, sql } from 'drizzle-orm';
+import { isDeepStrictEqual } from 'node:util';
+import { and, asc, desc, eq, gt, gte, inArray, lt, max, ne, sql } from 'drizzle-orm';
 import { withRfc7946Winding } from '../../shared/geometry/winding';
 import type { Feature, FeatureCollection } from 'geojson';
-import { areaGeometrySchema, hazardFlagSchema, type CreateOutlookInput, type Outlook, type OutlookListQuery, type OutlookSummary, type RevisionSummary, type RiskArea, type RiskAreaInput, type SaveOutlookInput } from '../../shared/contracts/outlooks';
+import { areaGeometrySchema, hazardFlagSchema, revisionSnapshotSchema, type CreateOutlookInput, type Outlook, type OutlookListQuery, type AreaImportResult, type OutlookEvidence, type OutlookList, type OutlookRevision, type OutlookSummary, type RevisionList, type RevisionSnapshot, type RiskArea, type RiskAreaInput, type SaveOutlookInput } from '../../shared/contracts/outlooks';
+import { isEditableState } from '../../shared/workflow/transitions';
+import { outlookStatePhrases } from '../../shared/workflow/states';
 import { areaEvidence, soundingsInPeriod, type AreaEvidence, type EvidenceSounding } from '../../shared/evidence/evidence';
-import { checkSupport, defaultGuidanceThresholds, type GuidanceThresholds, type SupportCheck } from '../../shared/evidence/support-check';
+import { checkSupport, defaultGuidanceThresholds, type SupportCheck } from '../../shared/evidence/support-check';
+import type { GuidanceThresholds } from '../../shared/contracts/office';
 import { checkAreas, type AreaCheck } from '../../shared/geometry/area-checks';
 import { validPeriod } from '../../shared/time/valid-period';
 import { appError, type AppError, type FieldIssue } from '../../shared/errors';
@@ -17,9 +21,6 @@ import type { SoundingAnalysis } from '../../shared/sounding';
 
 type OutlookRow = typeof outlooks.$inferSelect;
 type AreaRow = typeof riskAreas.$inferSelect;
-
-/** States in which the author may still change the draft (editing an approved draft sends it back). */
-const editableStates: OutlookRow['state'][] = ['draft', 'returned', 'approved'];
 
 async function requireOffice(db: DatabaseOrTransaction) {
   const office = await findOffice(db);
@@ -58,6 +59,24 @@ function toSummary(row: OutlookRow, areas: AreaRow[], ladderKeys: string[], edit
   };
 }
 
+/**
+ * Everyone who edited the content of the version under review: the authors of every revision
+ * written since the outlook was last approved or returned (all revisions when it never was).
+ * The four-eyes rule keeps each of them from approving that version.
+ */
+export async function reviewEditorIds(db: DatabaseOrTransaction, outlookId: string): Promise<string[]> {
+  const [lastReview] = await db
+    .select({ at: max(auditEvents.createdAt) })
+    .from(auditEvents)
+    .where(and(eq(auditEvents.outlookId, outlookId), inArray(auditEvents.action, ['approve', 'return'])));
+  const since = lastReview?.at ?? null;
+  const rows = await db
+    .selectDistinct({ authorId: outlookRevisions.authorId })
+    .from(outlookRevisions)
+    .where(since ? and(eq(outlookRevisions.outlookId, outlookId), gt(outlookRevisions.createdAt, since)) : eq(outlookRevisions.outlookId, outlookId));
+  return rows.flatMap((r) => (r.authorId ? [r.authorId] : []));
+}
+
 async function loadOutlook(db: DatabaseOrTransaction, outlookId: string): Promise<Outlook | null> {
   const [found] = await db.select({ outlook: outlooks, editor: users.name }).from(outlooks).leftJoin(users, eq(users.id, outlooks.lastEditedBy)).where(eq(outlooks.id, outlookId));
   if (!found) return null;
@@ -75,13 +94,14 @@ async function loadOutlook(db: DatabaseOrTransaction, outlookId: string): Promis
     hazardNotes: row.hazardNotes,
     areas: areas.map(toArea),
     amendsIssuanceId: row.amendsIssuanceId,
+    reviewEditorIds: await reviewEditorIds(db, outlookId),
   };
 }
 
 const notFound = () => appError('NOT_FOUND', 'There is no outlook with that id.');
 
 /** Drafts, reviews and published drafts, newest valid time first, filtered by state, day and local date. */
-export async function listOutlooks(db: Database, query: OutlookListQuery): Promise<Result<{ outlooks: OutlookSummary[] }, AppError>> {
+export async function listOutlooks(db: Database, query: OutlookListQuery): Promise<Result<OutlookList, AppError>> {
   const office = await requireOffice(db);
   const filters = [eq(outlooks.officeId, office.id)];
   if (query.state) filters.push(eq(outlooks.state, query.state));
@@ -105,9 +125,43 @@ export async function listOutlooks(db: Database, query: OutlookListQuery): Promi
   });
 }
 
-function snapshotOf(outlook: Outlook): Record<string, unknown> {
+function snapshotOf(outlook: Outlook): RevisionSnapshot {
   const { headline, discussion, hazardNotes, validFrom, validUntil, areas, day, state } = outlook;
   return { day, state, headline, discussion, hazardNotes, validFrom, validUntil, areas };
+}
+
+/**
+ * Writes revision `revisionNumber` of an outlook from its stored content: the one way a
+ * revision is made (creating, saving and starting an amendment), so every revision carries the
+ * whole document, valid period included.
+ */
+export async function writeRevision(tx: DatabaseOrTransaction, outlookId: string, revisionNumber: number, authorId: string, extra: Pick<RevisionSnapshot, 'amends'> = {}): Promise<Outlook> {
+  const outlook = await loadOutlook(tx, outlookId);
+  if (!outlook) throw new Error('outlook vanished while writing a revision');
+  const snapshot: RevisionSnapshot = { ...snapshotOf(outlook), ...extra };
+  await tx.insert(outlookRevisions).values({ outlookId, revisionNumber, snapshot, authorId });
+  return outlook;
+}
+
+/** Whether a save would change the content (a save that changes nothing writes no revision). */
+function changesContent(current: Outlook, input: SaveOutlookInput): boolean {
+  const before = {
+    headline: current.headline,
+    discussion: current.discussion,
+    hazardNotes: current.hazardNotes,
+    validFrom: Date.parse(current.validFrom),
+    validUntil: Date.parse(current.validUntil),
+    areas: current.areas.map((a) => ({ id: a.id, levelKey: a.levelKey, hazards: a.hazards, geometry: a.geometry, label: a.label })),
+  };
+  const after = {
+    headline: input.headline,
+    discussion: input.discussion,
+    hazardNotes: input.hazardNotes,
+    validFrom: Date.parse(input.validFrom),
+    validUntil: Date.parse(input.validUntil),
+    areas: input.areas.map((a) => ({ id: a.id, levelKey: a.levelKey, hazards: a.hazards, geometry: a.geometry, label: a.label })),
+  };
+  return !isDeepStrictEqual(before, after);
 }
 
 /** Starts a new draft for Day 1, 2 or 3 with its valid period from the office time zone. */
@@ -120,10 +174,10 @@ export async function createOutlook(db: Database, actor: Actor, input: CreateOut
       .values({ officeId: office.id, day: input.day, headline: input.headline, validFrom: period.validFrom, validUntil: period.validUntil, createdBy: actor.userId, lastEditedBy: actor.userId, version: 1 })
       .returning();
     if (!row) throw new Error('outlook insert returned no row');
+    await writeRevision(tx, row.id, 1, actor.userId);
+    await tx.insert(auditEvents).values({ officeId: office.id, outlookId: row.id, actorId: actor.userId, action: 'create', toState: 'draft' });
     const outlook = await loadOutlook(tx, row.id);
     if (!outlook) throw new Error('outlook vanished after insert');
-    await tx.insert(outlookRevisions).values({ outlookId: row.id, revisionNumber: 1, snapshot: snapshotOf(outlook), authorId: actor.userId });
-    await tx.insert(auditEvents).values({ officeId: office.id, outlookId: row.id, actorId: actor.userId, action: 'create', toState: 'draft' });
     return ok(outlook);
   });
 }
@@ -163,12 +217,12 @@ export async function saveOutlook(db: Database, actor: Actor, outlookId: string,
   const foreign = await foreignAreaIdIssues(db, outlookId, input.areas);
   if (foreign.length) return err(appError('VALIDATION_FAILED', foreign[0]?.message, { issues: foreign }));
   return db.transaction(async (tx) => {
-    const [current] = await tx.select().from(outlooks).where(eq(outlooks.id, outlookId));
+    const current = await loadOutlook(tx, outlookId);
     if (!current) return err(notFound());
-    if (!editableStates.includes(current.state)) {
-      return err(appError('CONFLICT', `This outlook is ${current.state.replace('_', ' ')} and cannot be edited. ${current.state === 'in_review' ? 'Ask the reviewer to return it first.' : 'Start an amendment instead.'}`));
+    if (!isEditableState(current.state)) {
+      return err(appError('CONFLICT', `This outlook is ${outlookStatePhrases[current.state]} and cannot be edited. ${current.state === 'published' ? 'Start an amendment instead.' : 'Ask a lead to return it first.'}`));
     }
-    const nextState = current.state === 'approved' ? 'draft' : current.state;
+    if (current.version === input.version && !changesContent(current, input)) return ok(current);
     const [updated] = await tx
       .update(outlooks)
       .set({
@@ -177,7 +231,6 @@ export async function saveOutlook(db: Database, actor: Actor, outlookId: string,
         hazardNotes: input.hazardNotes,
         validFrom: new Date(input.validFrom),
         validUntil: new Date(input.validUntil),
-        state: nextState,
         version: input.version + 1,
         lastEditedBy: actor.userId,
         updatedAt: new Date(),
@@ -201,23 +254,23 @@ export async function saveOutlook(db: Database, actor: Actor, outlookId: string,
         })),
       );
     }
-    const outlook = await loadOutlook(tx, outlookId);
-    if (!outlook) throw new Error('outlook vanished during save');
-    await tx.insert(outlookRevisions).values({ outlookId, revisionNumber: updated.version, snapshot: snapshotOf(outlook), authorId: actor.userId });
+    await writeRevision(tx, outlookId, updated.version, actor.userId);
     await tx.insert(auditEvents).values({
       officeId: office.id,
       outlookId,
       actorId: actor.userId,
       action: 'save',
       fromState: current.state,
-      toState: nextState,
+      toState: current.state,
       details: { version: updated.version, areas: input.areas.length },
     });
+    const outlook = await loadOutlook(tx, outlookId);
+    if (!outlook) throw new Error('outlook vanished during save');
     return ok(outlook);
   });
 }
 
-export async function listRevisions(db: Database, outlookId: string): Promise<Result<{ revisions: RevisionSummary[] }, AppError>> {
+export async function listRevisions(db: Database, outlookId: string): Promise<Result<RevisionList, AppError>> {
   const rows = await db
     .select({ id: outlookRevisions.id, revisionNumber: outlookRevisions.revisionNumber, authorId: outlookRevisions.authorId, authorName: users.name, createdAt: outlookRevisions.createdAt })
     .from(outlookRevisions)
@@ -228,7 +281,20 @@ export async function listRevisions(db: Database, outlookId: string): Promise<Re
   return ok({ revisions: rows.map((r) => ({ ...r, createdAt: r.createdAt.toISOString() })) });
 }
 
-export async function getRevision(db: Database, revisionId: string): Promise<Result<{ id: string; outlookId: string; revisionNumber: number; snapshot: Record<string, unknown>; authorName: string | null; createdAt: string }, AppError>> {
+/**
+ * Revisions written before every revision carried the whole document (an amendment's first
+ * revision lacked its valid period, state and hazard notes): completed from the outlook row.
+ */
+async function completeLegacySnapshot(db: Database, outlookId: string, stored: unknown): Promise<RevisionSnapshot> {
+  const parsed = revisionSnapshotSchema.safeParse(stored);
+  if (parsed.success) return parsed.data;
+  const [row] = await db.select().from(outlooks).where(eq(outlooks.id, outlookId));
+  if (!row) throw new Error('revision without its outlook');
+  const partial = typeof stored === 'object' && stored !== null ? stored : {};
+  return revisionSnapshotSchema.parse({ day: row.day, state: 'draft', headline: '', discussion: '', hazardNotes: {}, validFrom: row.validFrom.toISOString(), validUntil: row.validUntil.toISOString(), areas: [], ...partial });
+}
+
+export async function getRevision(db: Database, revisionId: string): Promise<Result<OutlookRevision, AppError>> {
   const [row] = await db
     .select({ revision: outlookRevisions, authorName: users.name })
     .from(outlookRevisions)
@@ -236,7 +302,8 @@ export async function getRevision(db: Database, revisionId: string): Promise<Res
     .where(eq(outlookRevisions.id, revisionId));
   if (!row) return err(appError('NOT_FOUND', 'That revision does not exist.'));
   const r = row.revision;
-  return ok({ id: r.id, outlookId: r.outlookId, revisionNumber: r.revisionNumber, snapshot: r.snapshot, authorName: row.authorName, createdAt: r.createdAt.toISOString() });
+  const snapshot = await completeLegacySnapshot(db, r.outlookId, r.snapshot);
+  return ok({ id: r.id, outlookId: r.outlookId, revisionNumber: r.revisionNumber, snapshot, authorName: row.authorName, createdAt: r.createdAt.toISOString() });
 }
 
 export interface AreaEvidenceReport {
@@ -288,13 +355,13 @@ export function buildEvidenceReport(outlook: Pick<Outlook, 'areas' | 'validFrom'
   });
 }
 
-export async function getOutlookEvidence(db: Database, outlookId: string, source?: 'observed' | 'model'): Promise<Result<{ areas: AreaEvidenceReport[]; soundingCount: number }, AppError>> {
+export async function getOutlookEvidence(db: Database, outlookId: string, source?: 'observed' | 'model'): Promise<Result<OutlookEvidence, AppError>> {
   const outlook = await loadOutlook(db, outlookId);
   if (!outlook) return err(notFound());
   const office = await requireOffice(db);
   const candidates = await evidenceSoundings(db, new Date(outlook.validFrom), new Date(outlook.validUntil));
   const guidance = Object.keys(office.guidanceThresholds).length ? office.guidanceThresholds : defaultGuidanceThresholds;
-  const areas = buildEvidenceReport(outlook, candidates, office.riskLadder, guidance as GuidanceThresholds, office.region, source);
+  const areas = buildEvidenceReport(outlook, candidates, office.riskLadder, guidance, office.region, source);
   return ok({ areas, soundingCount: candidates.filter((s) => !s.modified && (!source || s.source === source)).length });
 }
 
@@ -340,7 +407,7 @@ function withoutAltitude(geometry: unknown): unknown {
  * ladder key or label; problems are reported per feature. Nothing is saved: the author adds
  * the areas to the draft, which autosaves.
  */
-export async function importAreasGeoJson(db: Database, document: unknown): Promise<Result<{ areas: RiskAreaInput[] }, AppError>> {
+export async function importAreasGeoJson(db: Database, document: unknown): Promise<Result<AreaImportResult, AppError>> {
   const office = await requireOffice(db);
   const byKeyOrLabel = new Map<string, string>();
   for (const l of office.riskLadder) {

@@ -1,5 +1,5 @@
 import { asc, desc, eq } from 'drizzle-orm';
-import type { CommentInput } from '../../shared/contracts/workflow';
+import type { AuditTrail, CommentInput, CommentList, ReviewComment } from '../../shared/contracts/workflow';
 import { appError, type AppError } from '../../shared/errors';
 import { err, ok, type Result } from '../../shared/result';
 import type { Actor } from '../auth/require-role';
@@ -7,16 +7,8 @@ import type { Database } from '../db/client';
 import { auditEvents, outlookComments, outlooks, riskAreas, users } from '../db/schema';
 import { findOffice } from './office.service';
 
-export interface CommentView {
-  id: string;
-  body: string;
-  riskAreaId: string | null;
-  revisionNumber: number | null;
-  authorName: string | null;
-  createdAt: string;
-}
 
-export async function listComments(db: Database, outlookId: string): Promise<Result<{ comments: CommentView[] }, AppError>> {
+export async function listComments(db: Database, outlookId: string): Promise<Result<CommentList, AppError>> {
   const [exists] = await db.select({ id: outlooks.id }).from(outlooks).where(eq(outlooks.id, outlookId));
   if (!exists) return err(appError('NOT_FOUND', 'There is no outlook with that id.'));
   const rows = await db
@@ -31,7 +23,7 @@ export async function listComments(db: Database, outlookId: string): Promise<Res
 }
 
 /** Adds a review comment, general or pinned to one of the outlook's areas, against the current version. */
-export async function addComment(db: Database, actor: Actor, outlookId: string, input: CommentInput): Promise<Result<CommentView, AppError>> {
+export async function addComment(db: Database, actor: Actor, outlookId: string, input: CommentInput): Promise<Result<ReviewComment, AppError>> {
   const [outlook] = await db.select().from(outlooks).where(eq(outlooks.id, outlookId));
   if (!outlook) return err(appError('NOT_FOUND', 'There is no outlook with that id.'));
   if (input.riskAreaId) {
@@ -47,19 +39,9 @@ export async function addComment(db: Database, actor: Actor, outlookId: string, 
   return ok({ id: row.id, body: row.body, riskAreaId: row.riskAreaId, revisionNumber: row.revisionNumber, authorName: actor.name, createdAt: row.createdAt.toISOString() });
 }
 
-export interface AuditView {
-  id: string;
-  action: string;
-  fromState: string | null;
-  toState: string | null;
-  comment: string | null;
-  details: Record<string, unknown>;
-  actorName: string | null;
-  createdAt: string;
-}
 
 /** The append-only audit trail of one outlook, newest first. */
-export async function listAudit(db: Database, outlookId: string): Promise<Result<{ events: AuditView[] }, AppError>> {
+export async function listAudit(db: Database, outlookId: string): Promise<Result<AuditTrail, AppError>> {
   const [exists] = await db.select({ id: outlooks.id }).from(outlooks).where(eq(outlooks.id, outlookId));
   if (!exists) return err(appError('NOT_FOUND', 'There is no outlook with that id.'));
   const rows = await db

@@ -1,8 +1,8 @@
 import { and, desc, eq, sql } from 'drizzle-orm';
-import type { Role } from '../../shared/contracts/common';
-import type { OutlookState } from '../../shared/contracts/outlooks';
-import type { TransitionInput, WorkflowAction } from '../../shared/contracts/workflow';
-import { defaultGuidanceThresholds, type GuidanceThresholds } from '../../shared/evidence/support-check';
+import type { IssuanceSnapshotInput } from '../../shared/contracts/issuances';
+import type { TransitionInput, TransitionResult, WorkflowAction } from '../../shared/contracts/workflow';
+import { defaultGuidanceThresholds } from '../../shared/evidence/support-check';
+import { checkTransition, transitions } from '../../shared/workflow/transitions';
 import { appError, type AppError } from '../../shared/errors';
 import { isInForce } from '../../shared/issuances/in-force';
 import { err, ok, type Result } from '../../shared/result';
@@ -12,36 +12,17 @@ import { auditEvents, issuanceCounters, issuances, outlooks, users } from '../db
 import type { Config } from '../config';
 import { queueIssuanceNotices } from './distribution.service';
 import { findOffice } from './office.service';
-import { buildEvidenceReport, evidenceSoundings, getOutlook } from './outlooks.service';
-
-interface TransitionRule {
-  from: readonly OutlookState[];
-  to: OutlookState;
-  roles: readonly Role[];
-  commentRequired?: boolean;
-}
-
-/**
- * The one table of workflow transitions. Each names the states it leaves from, the state it
- * reaches and the roles allowed; rules beyond that (four-eyes, comments) are checked below.
- */
-export const transitions: Record<WorkflowAction, TransitionRule> = {
-  submit: { from: ['draft', 'returned'], to: 'in_review', roles: ['forecaster', 'lead'] },
-  return: { from: ['in_review', 'approved'], to: 'returned', roles: ['lead'], commentRequired: true },
-  approve: { from: ['in_review'], to: 'approved', roles: ['lead'] },
-  publish: { from: ['approved'], to: 'published', roles: ['lead'] },
-};
+import { buildEvidenceReport, evidenceSoundings, getOutlook, reviewEditorIds } from './outlooks.service';
 
 export interface PublishHooks {
   /** Test hook: runs inside the publish transaction right after the issuance row is written. */
   afterIssuanceWritten?: () => void | Promise<void>;
 }
 
-const stateWords: Record<OutlookState, string> = { draft: 'a draft', in_review: 'in review', returned: 'returned', approved: 'approved', published: 'published' };
-
 /**
- * Moves an outlook through the workflow. Role, state, version and the four-eyes rule are
- * checked; the change and its audit event are written in one transaction. Publishing also
+ * Moves an outlook through the workflow. Role, state and the four-eyes rule are checked by the
+ * shared transition rules (shared/workflow/transitions.ts, the same function that draws the
+ * client's buttons), then the version; the change and its audit event are written in one transaction. Publishing also
  * writes the immutable issuance in that same transaction (and supersedes the issuance an
  * amendment replaces).
  */
@@ -53,32 +34,29 @@ export async function transitionOutlook(
   action: WorkflowAction,
   input: TransitionInput,
   hooks: PublishHooks = {},
-): Promise<Result<{ outlookId: string; state: OutlookState; version: number; issuanceNumber?: string }, AppError>> {
+): Promise<Result<TransitionResult, AppError>> {
   const rule = transitions[action];
-  if (!rule.roles.includes(actor.role)) {
-    return err(appError('FORBIDDEN', `Your role (${actor.role}) cannot ${action} an outlook; ${rule.roles.join(' or ')} can.`));
-  }
-  if (rule.commentRequired && !input.comment) {
-    return err(appError('VALIDATION_FAILED', 'Say what needs changing: a comment is required to return an outlook.', { issues: [{ path: 'comment', message: 'A comment is required.' }] }));
-  }
   const office = await findOffice(db);
   if (!office) throw new Error('no office');
   return db.transaction(async (tx) => {
     const [current] = await tx.select().from(outlooks).where(eq(outlooks.id, outlookId));
     if (!current) return err(appError('NOT_FOUND', 'There is no outlook with that id.'));
-    if (!rule.from.includes(current.state)) {
-      return err(appError('CONFLICT', `This outlook is ${stateWords[current.state]}; it cannot be ${action === 'return' ? 'returned' : `${action}${action.endsWith('e') ? 'd' : 'ed'}`} now.`));
+    const verdict = checkTransition(action, {
+      state: current.state,
+      role: actor.role,
+      userId: actor.userId,
+      reviewEditorIds: action === 'approve' ? await reviewEditorIds(tx, outlookId) : [],
+      allowSelfApproval: office.allowSelfApproval,
+    });
+    if (!verdict.allowed) return err(appError(verdict.reason === 'state' ? 'CONFLICT' : 'FORBIDDEN', verdict.message));
+    if (rule.commentRequired && !input.comment) {
+      return err(appError('VALIDATION_FAILED', 'Say what needs changing: a comment is required to return an outlook.', { issues: [{ path: 'comment', message: 'A comment is required.' }] }));
     }
     if (current.version !== input.version) {
       return err(appError('CONFLICT', 'The outlook changed since you opened it. Reload and look again before you act.', { details: { currentVersion: current.version } }));
     }
     const details: Record<string, unknown> = {};
-    if (action === 'approve' && current.lastEditedBy === actor.userId) {
-      if (!office.allowSelfApproval) {
-        return err(appError('FORBIDDEN', 'You edited this draft last, so another lead must approve it (four-eyes rule).'));
-      }
-      details.fourEyesRelaxed = true;
-    }
+    if (verdict.fourEyesRelaxed) details.fourEyesRelaxed = true;
     if (action === 'publish' && current.amendsIssuanceId) {
       const replaced = await lockReplacedIssuance(tx, current.amendsIssuanceId, new Date());
       if (!replaced.ok) return replaced;
@@ -163,7 +141,7 @@ async function writeIssuance(tx: Transaction, config: Config, office: OfficeRow,
     .orderBy(desc(auditEvents.createdAt))
     .limit(1);
   const [author] = o.createdBy ? await tx.select({ name: users.name }).from(users).where(eq(users.id, o.createdBy)) : [];
-  const guidance = (Object.keys(office.guidanceThresholds).length ? office.guidanceThresholds : defaultGuidanceThresholds) as GuidanceThresholds;
+  const guidance = Object.keys(office.guidanceThresholds).length ? office.guidanceThresholds : defaultGuidanceThresholds;
   const candidates = await evidenceSoundings(tx, new Date(o.validFrom), new Date(o.validUntil));
   const evidence = buildEvidenceReport(o, candidates, office.riskLadder, guidance, office.region).map((r) => ({
     areaId: r.areaId,
@@ -172,7 +150,7 @@ async function writeIssuance(tx: Transaction, config: Config, office: OfficeRow,
     medians: Object.fromEntries(Object.entries(r.evidence.stats).map(([k, v]) => [k, v?.median ?? null])),
     support: r.support,
   }));
-  const snapshot = {
+  const snapshot: IssuanceSnapshotInput = {
     number,
     office: { name: office.name, timeZone: office.timeZone, region: office.region },
     riskLadder: office.riskLadder,

@@ -56,7 +56,7 @@ export const timeZoneSchema = z
   .min(1, { message: 'A time zone is required.' })
   .refine(isTimeZone, { message: 'Use an IANA time zone such as America/Chicago.' });
 
-/** Parameters an office may set a guidance threshold for (minimum medians per level, SI units). */
+/** Parameters an office may set a guidance threshold for (minimum medians per level, SI units); labels and units in shared/evidence/support-check.ts. */
 export const thresholdParameterKeys = ['mlCape', 'muCape', 'bulkShear0to6kmMs', 'srh0to1km', 'stp', 'scp'] as const;
 export type ThresholdParameterKey = (typeof thresholdParameterKeys)[number];
 
@@ -64,7 +64,8 @@ export const guidanceThresholdsSchema = z.record(
   z.string(),
   z.partialRecord(z.enum(thresholdParameterKeys), z.number({ message: 'Thresholds are numbers.' }).min(0, { message: 'Thresholds are 0 or more.' }).max(100_000)),
 );
-export type GuidanceThresholdsInput = z.infer<typeof guidanceThresholdsSchema>;
+/** Per ladder key, the minimum median of each parameter expected at that level. */
+export type GuidanceThresholds = z.infer<typeof guidanceThresholdsSchema>;
 
 export const officeSettingsInputSchema = z.object({
   name: z.string().trim().min(2, { message: 'The office name needs at least 2 characters.' }).max(120, { message: 'Keep the office name under 120 characters.' }),

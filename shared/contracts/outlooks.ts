@@ -97,6 +97,11 @@ export const outlookSchema = outlookSummarySchema.extend({
   hazardNotes: z.record(z.string(), z.string()),
   areas: z.array(riskAreaSchema),
   amendsIssuanceId: z.string().nullable(),
+  /**
+   * Everyone who edited the content of the version under review (authors of the revisions since
+   * the last approval or return): the four-eyes rule keeps them from approving it.
+   */
+  reviewEditorIds: z.array(z.string()),
 });
 export type Outlook = z.infer<typeof outlookSchema>;
 
@@ -107,8 +112,78 @@ export const outlookListQuerySchema = z.object({
 });
 export type OutlookListQuery = z.infer<typeof outlookListQuerySchema>;
 
+export const outlookListSchema = z.object({ outlooks: z.array(outlookSummarySchema) });
+export type OutlookList = z.infer<typeof outlookListSchema>;
+
 export const revisionSummarySchema = z.object({ id: z.string(), revisionNumber: z.number(), authorId: z.string().nullable(), authorName: z.string().nullable(), createdAt: z.string() });
 export type RevisionSummary = z.infer<typeof revisionSummarySchema>;
+
+export const revisionListSchema = z.object({ revisions: z.array(revisionSummarySchema) });
+export type RevisionList = z.infer<typeof revisionListSchema>;
+
+/**
+ * The full content of an outlook at one revision, as every save (and the start of an amendment)
+ * stores it. Written and read through this one schema, so a revision always opens.
+ */
+export const revisionSnapshotSchema = z.object({
+  day: z.number(),
+  state: z.enum(outlookStates),
+  headline: z.string(),
+  discussion: z.string(),
+  hazardNotes: z.record(z.string(), z.string()),
+  validFrom: z.string(),
+  validUntil: z.string(),
+  areas: z.array(riskAreaSchema),
+  /** The issuance number an amendment started from (its first revision only). */
+  amends: z.string().optional(),
+});
+export type RevisionSnapshot = z.infer<typeof revisionSnapshotSchema>;
+
+export const outlookRevisionSchema = z.object({
+  id: z.string(),
+  outlookId: z.string(),
+  revisionNumber: z.number(),
+  authorName: z.string().nullable(),
+  createdAt: z.string(),
+  snapshot: revisionSnapshotSchema,
+});
+export type OutlookRevision = z.infer<typeof outlookRevisionSchema>;
+
+export const supportResults = ['supported', 'thin', 'exceeds', 'none'] as const;
+export const supportCheckSchema = z.object({ result: z.enum(supportResults), reasons: z.array(z.string()) });
+
+const parameterStatsSchema = z.object({
+  count: z.number(),
+  min: z.number(),
+  median: z.number(),
+  p90: z.number(),
+  max: z.number(),
+  histogram: z.array(z.object({ from: z.number(), to: z.number(), count: z.number() })),
+});
+export type ParameterStatsReport = z.infer<typeof parameterStatsSchema>;
+
+export const areaCheckSchema = z.object({
+  code: z.enum(['SELF_INTERSECTION', 'OUTSIDE_REGION', 'SLIVER', 'NOT_NESTED']),
+  severity: z.enum(['error', 'warning']),
+  message: z.string(),
+  fix: z.enum(['unkink', 'clip-to-region', 'expand-lower-level']).optional(),
+});
+
+export const areaEvidenceReportSchema = z.object({
+  areaId: z.string(),
+  levelKey: z.string(),
+  evidence: z.object({ areaId: z.string(), count: z.number(), flaggedCount: z.number().default(0), soundingIds: z.array(z.string()), stats: z.partialRecord(z.string(), parameterStatsSchema) }),
+  support: supportCheckSchema,
+  checks: z.array(areaCheckSchema),
+});
+export type AreaEvidenceReport = z.infer<typeof areaEvidenceReportSchema>;
+
+/** GET /api/outlooks/:outlookId/evidence */
+export const outlookEvidenceSchema = z.object({ soundingCount: z.number(), areas: z.array(areaEvidenceReportSchema) });
+export type OutlookEvidence = z.infer<typeof outlookEvidenceSchema>;
+
+export const areaImportResultSchema = z.object({ areas: z.array(riskAreaInputSchema) });
+export type AreaImportResult = z.infer<typeof areaImportResultSchema>;
 
 export const evidenceQuerySchema = z.object({ source: z.enum(['observed', 'model'], { message: 'Source must be observed or model.' }).optional() });
 

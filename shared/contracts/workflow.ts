@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { calendarDateSchema, versionSchema } from './primitives';
+import { outlookStates } from './outlooks';
 
 export const workflowActions = ['submit', 'return', 'approve', 'publish'] as const;
 export type WorkflowAction = (typeof workflowActions)[number];
@@ -22,6 +23,39 @@ export const withdrawInputSchema = z.object({
 });
 
 export const issuanceStates = ['published', 'superseded', 'withdrawn'] as const;
+export type IssuanceState = (typeof issuanceStates)[number];
+
+/** What a workflow action answers. */
+export const transitionResultSchema = z.object({ outlookId: z.string(), state: z.enum(outlookStates), version: z.number(), issuanceNumber: z.string().optional() });
+export type TransitionResult = z.infer<typeof transitionResultSchema>;
+
+export const reviewCommentSchema = z.object({
+  id: z.string(),
+  body: z.string(),
+  riskAreaId: z.string().nullable(),
+  revisionNumber: z.number().nullable(),
+  authorName: z.string().nullable(),
+  createdAt: z.string(),
+});
+export type ReviewComment = z.infer<typeof reviewCommentSchema>;
+
+export const commentListSchema = z.object({ comments: z.array(reviewCommentSchema) });
+export type CommentList = z.infer<typeof commentListSchema>;
+
+export const auditEventSchema = z.object({
+  id: z.string(),
+  action: z.string(),
+  fromState: z.string().nullable(),
+  toState: z.string().nullable(),
+  comment: z.string().nullable(),
+  details: z.record(z.string(), z.unknown()),
+  actorName: z.string().nullable(),
+  createdAt: z.string(),
+});
+export type AuditEvent = z.infer<typeof auditEventSchema>;
+
+export const auditTrailSchema = z.object({ events: z.array(auditEventSchema) });
+export type AuditTrail = z.infer<typeof auditTrailSchema>;
 
 export const archiveQuerySchema = z.object({
   q: z.string().trim().max(100).optional(),

@@ -1,4 +1,4 @@
-import type { RiskLadder, ThresholdParameterKey } from '../contracts/office';
+import type { GuidanceThresholds, RiskLadder, ThresholdParameterKey } from '../contracts/office';
 import type { AreaEvidence } from './evidence';
 
 /** Parameters an office may set a guidance threshold for; each is a minimum median expected for a level. */
@@ -10,10 +10,7 @@ export const thresholdParameters = {
   stp: { label: 'STP', unit: '', digits: 1 },
   scp: { label: 'SCP', unit: '', digits: 1 },
 } as const satisfies Record<ThresholdParameterKey, { label: string; unit: string; digits: number }>;
-export type ThresholdParameter = keyof typeof thresholdParameters;
-
-/** Per ladder key, the minimum median of each parameter expected at that level. */
-export type GuidanceThresholds = Record<string, Partial<Record<ThresholdParameter, number>>>;
+type ThresholdParameter = ThresholdParameterKey;
 
 /**
  * Invented default guidance for the demo office: a starting point that an admin tunes to the

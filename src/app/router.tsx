@@ -4,7 +4,8 @@ import { Loading } from '../components/ui/loading';
 import { meQueryOptions } from '../hooks/use-me';
 import { officeQueryOptions } from '../hooks/use-office';
 import type { Role } from '../../shared/contracts/common';
-import { homePathFor, roleAllowed } from '../utils/roles';
+import { adminRoles, authoringRoles, officeReaderRoles, hasRole, reviewingRoles, subscriberOverseerRoles, subscriberRoles } from '../../shared/workflow/roles';
+import { homePathFor } from '../utils/roles';
 import { NotFoundPage } from './not-found';
 import { RoleGate } from './layouts/role-gate';
 import { RouteErrorPage } from './route-error';
@@ -18,7 +19,7 @@ type PageLoader = () => Promise<unknown>;
 function loaderForRoles(queryClient: QueryClient, roles: readonly Role[], load?: PageLoader) {
   return async () => {
     const me = await queryClient.ensureQueryData(meQueryOptions());
-    if (me && roleAllowed(me.user.role, roles) && load) await load();
+    if (me && hasRole(me.user.role, roles) && load) await load();
     return null;
   };
 }
@@ -31,13 +32,6 @@ function InitialLoading() {
   );
 }
 
-const staff = ['forecaster', 'lead'] as const satisfies readonly Role[];
-const leads = ['lead'] as const satisfies readonly Role[];
-const subscribers = ['subscriber'] as const satisfies readonly Role[];
-const admins = ['admin'] as const satisfies readonly Role[];
-const soundingReaders = ['forecaster', 'lead', 'admin'] as const satisfies readonly Role[];
-const outlookReaders = ['forecaster', 'lead', 'admin'] as const satisfies readonly Role[];
-const subscriberReaders = ['lead', 'admin'] as const satisfies readonly Role[];
 
 /** Every page, lazy-loaded so the public bulletin never downloads staff pages. */
 export function createRoutes(queryClient: QueryClient): RouteObject[] {
@@ -116,124 +110,124 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
           },
           children: [
             {
-              element: <RoleGate roles={staff} />,
+              element: <RoleGate roles={authoringRoles} />,
               children: [
                 {
                   path: 'desk',
-                  loader: loaderForRoles(queryClient, staff),
+                  loader: loaderForRoles(queryClient, authoringRoles),
                   lazy: async () => ({ Component: (await import('../features/outlooks/routes/desk')).DeskPage }),
                 },
               ],
             },
             {
-              element: <RoleGate roles={outlookReaders} />,
+              element: <RoleGate roles={officeReaderRoles} />,
               children: [
                 {
                   path: 'outlooks/:outlookId',
                   lazy: async () => {
                     const page = await import('../features/outlooks/routes/workspace');
-                    return { Component: page.OutlookWorkspacePage, loader: (args: LoaderFunctionArgs) => loaderForRoles(queryClient, outlookReaders, () => page.workspaceLoader(queryClient)(args))() };
+                    return { Component: page.OutlookWorkspacePage, loader: (args: LoaderFunctionArgs) => loaderForRoles(queryClient, officeReaderRoles, () => page.workspaceLoader(queryClient)(args))() };
                   },
                 },
                 {
                   path: 'outlooks/:outlookId/revisions/:revisionId',
-                  loader: loaderForRoles(queryClient, outlookReaders),
+                  loader: loaderForRoles(queryClient, officeReaderRoles),
                   lazy: async () => ({ Component: (await import('../features/outlooks/routes/revision')).OutlookRevisionPage }),
                 },
               ],
             },
             {
-              element: <RoleGate roles={staff} />,
+              element: <RoleGate roles={authoringRoles} />,
               children: [
                 {
                   path: 'soundings/upload',
-                  loader: loaderForRoles(queryClient, staff),
+                  loader: loaderForRoles(queryClient, authoringRoles),
                   lazy: async () => ({ Component: (await import('../features/soundings/routes/upload')).SoundingUploadPage }),
                 },
               ],
             },
             {
-              element: <RoleGate roles={soundingReaders} />,
+              element: <RoleGate roles={officeReaderRoles} />,
               children: [
                 {
                   path: 'soundings',
                   lazy: async () => {
                     const page = await import('../features/soundings/routes/library');
-                    return { Component: page.SoundingLibraryPage, loader: (args: LoaderFunctionArgs) => loaderForRoles(queryClient, soundingReaders, () => page.soundingLibraryLoader(queryClient)(args))() };
+                    return { Component: page.SoundingLibraryPage, loader: (args: LoaderFunctionArgs) => loaderForRoles(queryClient, officeReaderRoles, () => page.soundingLibraryLoader(queryClient)(args))() };
                   },
                 },
                 {
                   path: 'soundings/map',
-                  loader: loaderForRoles(queryClient, soundingReaders),
+                  loader: loaderForRoles(queryClient, officeReaderRoles),
                   lazy: async () => ({ Component: (await import('../features/soundings/routes/map')).SoundingMapPage }),
                 },
                 {
                   path: 'soundings/:soundingId',
                   lazy: async () => {
                     const page = await import('../features/soundings/routes/sounding');
-                    return { Component: page.SoundingPage, loader: (args: LoaderFunctionArgs) => loaderForRoles(queryClient, soundingReaders, () => page.soundingLoader(queryClient)(args))() };
+                    return { Component: page.SoundingPage, loader: (args: LoaderFunctionArgs) => loaderForRoles(queryClient, officeReaderRoles, () => page.soundingLoader(queryClient)(args))() };
                   },
                 },
               ],
             },
             {
-              element: <RoleGate roles={leads} />,
+              element: <RoleGate roles={reviewingRoles} />,
               children: [
                 {
                   path: 'review',
                   lazy: async () => {
                     const page = await import('../features/review/routes/review-queue');
-                    return { Component: page.ReviewQueuePage, loader: loaderForRoles(queryClient, leads, page.reviewQueueLoader(queryClient)) };
+                    return { Component: page.ReviewQueuePage, loader: loaderForRoles(queryClient, reviewingRoles, page.reviewQueueLoader(queryClient)) };
                   },
                 },
               ],
             },
             {
-              element: <RoleGate roles={staff} />,
+              element: <RoleGate roles={authoringRoles} />,
               children: [
                 {
                   path: 'review/:outlookId',
                   lazy: async () => {
                     const page = await import('../features/review/routes/review');
-                    return { Component: page.ReviewPage, loader: (args: LoaderFunctionArgs) => loaderForRoles(queryClient, staff, () => page.reviewLoader(queryClient)(args))() };
+                    return { Component: page.ReviewPage, loader: (args: LoaderFunctionArgs) => loaderForRoles(queryClient, authoringRoles, () => page.reviewLoader(queryClient)(args))() };
                   },
                 },
               ],
             },
             {
-              element: <RoleGate roles={subscribers} />,
+              element: <RoleGate roles={subscriberRoles} />,
               children: [
                 {
                   path: 'alerts',
                   lazy: async () => {
                     const page = await import('../features/subscriptions/routes/my-alerts');
-                    return { Component: page.MyAlertsPage, loader: loaderForRoles(queryClient, subscribers, page.myAlertsLoader(queryClient)) };
+                    return { Component: page.MyAlertsPage, loader: loaderForRoles(queryClient, subscriberRoles, page.myAlertsLoader(queryClient)) };
                   },
                 },
               ],
             },
             {
-              element: <RoleGate roles={subscriberReaders} />,
+              element: <RoleGate roles={subscriberOverseerRoles} />,
               children: [
                 {
                   path: 'subscribers',
                   lazy: async () => {
                     const page = await import('../features/subscriptions/routes/subscribers');
-                    return { Component: page.SubscribersPage, loader: loaderForRoles(queryClient, subscriberReaders, page.subscribersLoader(queryClient)) };
+                    return { Component: page.SubscribersPage, loader: loaderForRoles(queryClient, subscriberOverseerRoles, page.subscribersLoader(queryClient)) };
                   },
                 },
               ],
             },
             {
               path: 'admin',
-              element: <RoleGate roles={admins} />,
+              element: <RoleGate roles={adminRoles} />,
               children: [
                 { index: true, Component: InitialLoading, loader: () => redirect('/admin/users') },
                 {
                   path: 'users',
                   lazy: async () => {
                     const page = await import('../features/admin/routes/users');
-                    return { Component: page.UsersPage, loader: loaderForRoles(queryClient, admins, page.usersLoader(queryClient)) };
+                    return { Component: page.UsersPage, loader: loaderForRoles(queryClient, adminRoles, page.usersLoader(queryClient)) };
                   },
                 },
                 {
@@ -242,7 +236,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
                     const page = await import('../features/admin/routes/office-settings');
                     return {
                       Component: page.OfficeSettingsPage,
-                      loader: loaderForRoles(queryClient, admins, page.officeSettingsLoader(queryClient)),
+                      loader: loaderForRoles(queryClient, adminRoles, page.officeSettingsLoader(queryClient)),
                     };
                   },
                 },
@@ -250,14 +244,14 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
                   path: 'outbox',
                   lazy: async () => {
                     const page = await import('../features/admin/routes/outbox');
-                    return { Component: page.OutboxPage, loader: loaderForRoles(queryClient, admins, page.outboxLoader(queryClient)) };
+                    return { Component: page.OutboxPage, loader: loaderForRoles(queryClient, adminRoles, page.outboxLoader(queryClient)) };
                   },
                 },
                 {
                   path: 'mail',
                   lazy: async () => {
                     const page = await import('../features/admin/routes/mail');
-                    return { Component: page.MailPage, loader: loaderForRoles(queryClient, admins, page.mailLoader(queryClient)) };
+                    return { Component: page.MailPage, loader: loaderForRoles(queryClient, adminRoles, page.mailLoader(queryClient)) };
                   },
                 },
               ],

@@ -1,4 +1,5 @@
 import type { Role } from '../../shared/contracts/common';
+import { roleLabels } from '../../shared/workflow/roles';
 
 /** Where each role lands after signing in, and where `/` sends them. */
 export function homePathFor(role: Role): string {
@@ -14,19 +15,8 @@ export function homePathFor(role: Role): string {
   }
 }
 
-const roleNames: Record<Role, string> = {
-  forecaster: 'Forecaster',
-  lead: 'Lead forecaster',
-  subscriber: 'Subscriber',
-  admin: 'Administrator',
-};
-
 export function roleName(role: Role): string {
-  return roleNames[role];
-}
-
-export function roleAllowed(role: Role, allowed: readonly Role[]): boolean {
-  return allowed.includes(role);
+  return roleLabels[role];
 }
 
 /**

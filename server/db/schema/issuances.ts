@@ -2,8 +2,10 @@ import { index, integer, jsonb, pgEnum, pgTable, primaryKey, text, timestamp, un
 import { offices } from './offices';
 import { outlooks } from './outlooks';
 import { users } from './auth';
+import type { IssuanceSnapshotInput } from '../../../shared/contracts/issuances';
+import { issuanceStates } from '../../../shared/contracts/workflow';
 
-export const issuanceStateEnum = pgEnum('issuance_state', ['published', 'superseded', 'withdrawn']);
+export const issuanceStateEnum = pgEnum('issuance_state', issuanceStates);
 
 /**
  * A published, immutable version of an outlook, numbered per office and year (`2027-0142`).
@@ -25,7 +27,7 @@ export const issuances = pgTable(
     day: integer().notNull(),
     validFrom: timestamp({ withTimezone: true }).notNull(),
     validUntil: timestamp({ withTimezone: true }).notNull(),
-    snapshot: jsonb().$type<Record<string, unknown>>().notNull(),
+    snapshot: jsonb().$type<IssuanceSnapshotInput>().notNull(),
     state: issuanceStateEnum().notNull().default('published'),
     supersedesId: uuid(),
     supersededById: uuid(),

@@ -1,8 +1,5 @@
 import { boolean, integer, jsonb, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
-import type { Region, RiskLadder } from '../../../shared/contracts/office';
-
-/** Guidance thresholds per risk level (filled by the authoring work; keyed by ladder key). */
-export type GuidanceThresholds = Record<string, Record<string, number>>;
+import type { GuidanceThresholds, Region, RiskLadder } from '../../../shared/contracts/office';
 
 /** Mail settings an admin may set in the app (the SMTP URL itself comes from the environment). */
 export interface OfficeMailSettings {

@@ -2,9 +2,10 @@ import { sql } from 'drizzle-orm';
 import { index, integer, jsonb, pgEnum, pgTable, text, timestamp, unique, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 import type { Geometry } from 'geojson';
 import { offices } from './offices';
+import { outlookStates, type RevisionSnapshot } from '../../../shared/contracts/outlooks';
 import { users } from './auth';
 
-export const outlookStateEnum = pgEnum('outlook_state', ['draft', 'in_review', 'returned', 'approved', 'published']);
+export const outlookStateEnum = pgEnum('outlook_state', outlookStates);
 
 export interface HazardFlag {
   hazard: 'tornado' | 'hail' | 'wind' | 'flood';
@@ -71,7 +72,7 @@ export const outlookRevisions = pgTable(
       .notNull()
       .references(() => outlooks.id, { onDelete: 'cascade' }),
     revisionNumber: integer().notNull(),
-    snapshot: jsonb().$type<Record<string, unknown>>().notNull(),
+    snapshot: jsonb().$type<RevisionSnapshot>().notNull(),
     authorId: text().references(() => users.id, { onDelete: 'set null' }),
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },

@@ -3,7 +3,8 @@ import { Outlet } from 'react-router';
 import { ButtonLink } from '../../components/ui/button';
 import { useMe } from '../../hooks/use-me';
 import type { Role } from '../../../shared/contracts/common';
-import { homePathFor, roleAllowed } from '../../utils/roles';
+import { hasRole } from '../../../shared/workflow/roles';
+import { homePathFor } from '../../utils/roles';
 
 /** Shown instead of a page the signed-in role may not open. The server refuses it too. */
 export function AccessDenied({ role }: { role: Role }) {
@@ -33,5 +34,5 @@ export function RoleGate({ roles }: { roles: readonly Role[] }) {
   const me = useMe();
   const role = me.data?.user.role;
   if (role === undefined) return null;
-  return roleAllowed(role, roles) ? <Outlet /> : <AccessDenied role={role} />;
+  return hasRole(role, roles) ? <Outlet /> : <AccessDenied role={role} />;
 }

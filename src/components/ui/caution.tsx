@@ -1,7 +1,6 @@
 import { TriangleAlert } from 'lucide-react';
+import { publicCaution } from '../../../shared/workflow/caution';
 
-export const CAUTION_TEXT =
-  'This outlook is planning guidance, not a warning. Follow warnings from the national weather service and instructions from your local emergency officials.';
 
 /** Carried by every public page (and every e-mail, server side). */
 export function Caution() {
@@ -11,7 +10,7 @@ export function Caution() {
       className="flex gap-2.5 rounded-md border border-warning-line border-l-4 bg-warning-soft px-3.5 py-2.5 text-sm text-ink"
     >
       <TriangleAlert aria-hidden className="mt-0.5 size-4 shrink-0 text-warning" />
-      <p>{CAUTION_TEXT}</p>
+      <p>{publicCaution}</p>
     </aside>
   );
 }

@@ -8,6 +8,7 @@ import { CircleMarker, MapContainer, Pane, Popup, TileLayer, Tooltip, useMap } f
 import { insetOutline, labelAnchor } from './inset-outline';
 import { BoundaryLines, FitBounds, useOfflineBoundaries } from './base-map';
 import type { MapRegion, PointProperties } from './point-map';
+import { escapeHtml } from '../../../shared/text/escape-html';
 
 /** What the editor is doing: selecting, drawing a new area, editing vertices, moving or cutting a hole. */
 export type EditorMode = 'select' | 'draw' | 'edit' | 'move' | 'cut';
@@ -60,10 +61,6 @@ function shapeOf(layer: L.Layer): AreaShape | null {
 }
 
 const keyOf = (geometry: AreaShape) => JSON.stringify(geometry);
-
-function escapeHtml(text: string): string {
-  return text.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
-}
 
 function labelHtml(properties: EditorAreaProperties): string {
   const badges = properties.badges.map((b) => `<span class="sd-area-badge">${escapeHtml(b)}</span>`).join('');

@@ -3,7 +3,7 @@ import type { Feature, MultiPolygon, Polygon } from 'geojson';
 
 /**
  * An outline drawn just inside an area, for the bold inner outline that marks significant
- * hazards (PRODUCT.md: no hatching). The inset scales with the area's size (2–10 km); when the
+ * hazards (docs/vocabulary.md: no hatching). The inset scales with the area's size (2–10 km); when the
  * area is too small to shrink, the area's own outline is returned.
  */
 export function insetOutline(geometry: Polygon | MultiPolygon): Polygon | MultiPolygon {

@@ -6,6 +6,6 @@ import './map.css';
 
 /**
  * Leaflet finds its default marker images by reading a CSS path, which breaks once Vite hashes
- * the files (STACK.md). Point it at the bundled images instead; imported once by the map wrapper.
+ * the files (docs/architecture.md, "Library notes"). Point it at the bundled images instead; imported once by the map wrapper.
  */
 L.Icon.Default.mergeOptions({ iconUrl: markerIconUrl, iconRetinaUrl: markerIcon2xUrl, shadowUrl: markerShadowUrl });

@@ -2,7 +2,8 @@ import { useState, type FormEvent } from 'react';
 import { Button } from '../../../components/ui/button';
 import { SelectField, TextField } from '../../../components/ui/field';
 import { Notice } from '../../../components/ui/notice';
-import { staffRoles, type Role } from '../../../../shared/contracts/common';
+import type { Role } from '../../../../shared/contracts/common';
+import { adminCreatedRoles } from '../../../../shared/workflow/roles';
 import { createUserInputSchema } from '../../../../shared/contracts/users';
 import { formFailureFrom, parseForm } from '../../../utils/form';
 import { roleName } from '../../../utils/roles';
@@ -78,10 +79,10 @@ export function CreateUserForm() {
         name="role"
         value={values.role}
         onChange={(e) => {
-          const role = staffRoles.find((r) => r === e.target.value);
+          const role = adminCreatedRoles.find((r) => r === e.target.value);
           if (role) set('role', role);
         }}
-        options={staffRoles.map((role) => ({ value: role, label: roleName(role) }))}
+        options={adminCreatedRoles.map((role) => ({ value: role, label: roleName(role) }))}
         error={fieldErrors.role}
       />
       <Button type="submit" busy={createUser.isPending}>

@@ -2,7 +2,7 @@ import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query'
 import { z } from 'zod';
 import { apiClient } from '../../../lib/api-client';
 import type { ArchiveQuery } from '../../../../shared/contracts/workflow';
-import { bulletinKeys } from './bulletin-keys';
+import { issuancesKeys } from '../../../api/issuances/issuances-keys';
 import { archiveEntrySchema } from './issuance-schema';
 
 const archiveSchema = z.object({ issuances: z.array(archiveEntrySchema), total: z.number(), caution: z.string() });
@@ -16,7 +16,7 @@ export const getArchive = (query: ArchiveQuery, signal?: AbortSignal) => {
 
 export const archiveQuery = (query: ArchiveQuery) =>
   queryOptions({
-    queryKey: bulletinKeys.list(query),
+    queryKey: issuancesKeys.list(query),
     queryFn: ({ signal }) => getArchive(query, signal),
   });
 

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
-import { bulletinKeys } from './bulletin-keys';
+import { issuancesKeys } from '../../../api/issuances/issuances-keys';
 import { issuanceSchema } from './issuance-schema';
 
 export const getIssuance = (issuanceNumber: string, signal?: AbortSignal) =>
@@ -8,7 +8,7 @@ export const getIssuance = (issuanceNumber: string, signal?: AbortSignal) =>
 
 export const issuanceQuery = (issuanceNumber: string) =>
   queryOptions({
-    queryKey: bulletinKeys.detail(issuanceNumber),
+    queryKey: issuancesKeys.detail(issuanceNumber),
     queryFn: ({ signal }) => getIssuance(issuanceNumber, signal),
   });
 

@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { apiClient } from '../../../lib/api-client';
 import { withdrawInputSchema } from '../../../../shared/contracts/workflow';
-import { bulletinKeys } from './bulletin-keys';
+import { issuancesKeys } from '../../../api/issuances/issuances-keys';
 import { issuanceSchema } from './issuance-schema';
 
 export type WithdrawInput = z.infer<typeof withdrawInputSchema>;
@@ -15,6 +15,6 @@ export function useWithdrawIssuance(issuanceNumber: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (input: WithdrawInput) => withdrawIssuance(issuanceNumber, input),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: bulletinKeys.all }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: issuancesKeys.all }),
   });
 }

@@ -11,7 +11,7 @@ import { Notice } from '../../../components/ui/notice';
 import { RiskSwatch } from '../../../components/ui/risk-swatch';
 import { useMe } from '../../../hooks/use-me';
 import { useOffice } from '../../../hooks/use-office';
-import { bulletinQuery, useBulletin } from '../api/get-bulletin';
+import { bulletinQuery, useBulletin } from '../../../api/issuances/get-bulletin';
 import { IssuanceDetails } from '../components/issuance-details';
 import { dayLabel } from '../utils/issuance-format';
 

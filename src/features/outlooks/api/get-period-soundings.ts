@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { soundingListSchema } from '../../../../shared/contracts/soundings';
-import { outlooksKeys } from './outlooks-keys';
+import { outlooksKeys } from '../../../api/outlooks/outlooks-keys';
 
 /** The soundings layer: up to 500 soundings valid within the outlook period. */
 export const getPeriodSoundings = (validFrom: string, validUntil: string, signal?: AbortSignal) => {

@@ -4,7 +4,7 @@ import { buttonClasses } from '../../../components/ui/button';
 import { Notice } from '../../../components/ui/notice';
 import { isApiError } from '../../../lib/api-client';
 import type { RiskAreaInput } from '../../../../shared/contracts/outlooks';
-import { useImportAreas } from '../api/import-areas';
+import { useImportAreas } from '../../../api/outlooks/import-areas';
 
 /** GeoJSON out (the saved areas, RFC 7946) and in (a file → the server checks it → areas added to the draft). */
 export function AreaImportExport({ outlookId, readOnly, onImported }: { outlookId: string; readOnly: boolean; onImported: (areas: RiskAreaInput[]) => void }) {

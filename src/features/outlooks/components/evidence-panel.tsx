@@ -2,7 +2,7 @@ import { Link } from 'react-router';
 import { evidenceParameters } from '../../../../shared/evidence/evidence';
 import { supportResultLabels, type SupportResult } from '../../../../shared/evidence/support-check';
 import type { UnitFormatters } from '../../../hooks/use-units';
-import type { AreaEvidenceReport, ParameterStatsReport } from '../api/get-outlook-evidence';
+import type { AreaEvidenceReport, ParameterStatsReport } from '../../../../shared/contracts/outlooks';
 import { formatEvidenceValue } from '../utils/evidence-format';
 
 export const supportTones: Record<SupportResult, string> = {

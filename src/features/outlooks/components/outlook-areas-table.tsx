@@ -1,8 +1,8 @@
 import { clsx } from 'clsx';
 import { RiskSwatch } from '../../../components/ui/risk-swatch';
 import type { RiskLadder } from '../../../../shared/contracts/office';
-import type { AreaEvidenceReport } from '../api/get-outlook-evidence';
-import { levelOf } from '../utils/area-display';
+import type { AreaEvidenceReport } from '../../../../shared/contracts/outlooks';
+import { ladderLevel } from '../../../../shared/workflow/levels';
 import type { DraftArea } from '../utils/outlook-document';
 import { SupportBadge } from './evidence-panel';
 
@@ -27,7 +27,7 @@ export function OutlookAreasTable({ areas, ladder, reports, selectedId, onSelect
       </thead>
       <tbody>
         {areas.map((area) => {
-          const level = levelOf(ladder, area.levelKey);
+          const level = ladderLevel(ladder, area.levelKey);
           const report = reports.get(area.id);
           return (
             <tr key={area.id} className={clsx('border-t border-line', area.id === selectedId && 'bg-accent-soft')}>

@@ -1,6 +1,6 @@
 import { StatusStripContent } from '../../../app/layouts/status-strip';
 import type { OutlookState } from '../../../../shared/contracts/outlooks';
-import { outlookStateLabels } from '../utils/outlook-states';
+import { outlookStateLabels } from '../../../../shared/workflow/states';
 import { formatPeriod } from '../utils/valid-period';
 
 /** The outlook's state and valid time (UTC and office local) in the status strip. */

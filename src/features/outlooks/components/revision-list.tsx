@@ -1,6 +1,6 @@
 import { Link } from 'react-router';
 import { formatTimestampUtc } from '../../../utils/time';
-import { useRevisions } from '../api/get-revisions';
+import { useRevisions } from '../../../api/outlooks/get-revisions';
 
 /** Every save is a revision (who, when); each opens read-only. */
 export function RevisionList({ outlookId }: { outlookId: string }) {

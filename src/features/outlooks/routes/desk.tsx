@@ -14,10 +14,11 @@ import { useOffice } from '../../../hooks/use-office';
 import { fieldErrorsFrom, isApiError, issuesFromZod, type FieldErrors } from '../../../lib/api-client';
 import { formatTimestampUtc } from '../../../utils/time';
 import { createOutlookInputSchema, outlookStates, type OutlookListQuery, type OutlookState } from '../../../../shared/contracts/outlooks';
-import { useCreateOutlook } from '../api/create-outlook';
-import { useOutlooks } from '../api/get-outlooks';
-import { levelOf } from '../utils/area-display';
-import { canAuthor, outlookStateLabels } from '../utils/outlook-states';
+import { useCreateOutlook } from '../../../api/outlooks/create-outlook';
+import { useOutlooks } from '../../../api/outlooks/get-outlooks';
+import { ladderLevel } from '../../../../shared/workflow/levels';
+import { authoringRoles, hasRole } from '../../../../shared/workflow/roles';
+import { outlookStateLabels } from '../../../../shared/workflow/states';
 import { formatPeriod } from '../utils/valid-period';
 
 const dayOptions = [
@@ -88,7 +89,7 @@ export function DeskPage() {
   const outlooks = useOutlooks(filters);
   const timeZone = office.data?.timeZone ?? 'UTC';
   const ladder = office.data?.riskLadder ?? [];
-  const mayAuthor = canAuthor(me.data?.user.role);
+  const mayAuthor = me.data ? hasRole(me.data.user.role, authoringRoles) : false;
 
   return (
     <>
@@ -153,7 +154,7 @@ export function DeskPage() {
               </thead>
               <tbody>
                 {outlooks.data.outlooks.map((outlook) => {
-                  const highest = outlook.highestLevelKey ? levelOf(ladder, outlook.highestLevelKey) : null;
+                  const highest = outlook.highestLevelKey ? ladderLevel(ladder, outlook.highestLevelKey) : null;
                   return (
                     <tr key={outlook.id} className="border-b border-line last:border-0 hover:bg-sunken/60">
                       <th scope="row" className="px-3 py-2 text-left font-normal">

@@ -11,9 +11,10 @@ import { AreaEditorMap } from '../../../lib/map/area-editor-map';
 import type { PointProperties } from '../../../lib/map/point-map';
 import { hazardKinds, hazardLabels } from '../../../../shared/contracts/outlooks';
 import { formatTimestampUtc } from '../../../utils/time';
-import { useRevision } from '../api/get-revision';
+import { useRevision } from '../../../api/outlooks/get-revision';
 import { DiscussionPreview } from '../components/discussion-editor';
-import { areaFeatures, levelOf } from '../utils/area-display';
+import { ladderLevel } from '../../../../shared/workflow/levels';
+import { areaFeatures } from '../utils/area-display';
 import { formatPeriod } from '../utils/valid-period';
 
 const noPoints: FeatureCollection<Point, PointProperties> = { type: 'FeatureCollection', features: [] };
@@ -73,7 +74,7 @@ export function OutlookRevisionPage() {
             <h2 className="mb-1 text-[13px] font-semibold text-ink-muted">Risk areas</h2>
             <ul className="space-y-1">
               {areas.map((area) => {
-                const level = levelOf(ladder, area.levelKey);
+                const level = ladderLevel(ladder, area.levelKey);
                 return (
                   <li key={area.id} className="text-[13px]">
                     <RiskSwatch label={level.label} colour={level.colour} /> {area.label}

@@ -16,9 +16,10 @@ import type { OfficeSettings } from '../../../../shared/contracts/office';
 import type { Outlook, RiskAreaInput } from '../../../../shared/contracts/outlooks';
 import { areaKm2, checkAreas } from '../../../../shared/geometry/area-checks';
 import { formatNumber } from '../../../utils/units';
-import { outlookQuery, useOutlook } from '../api/get-outlook';
-import { useOutlookEvidence, type AreaEvidenceReport } from '../api/get-outlook-evidence';
-import type { EvidenceSource } from '../api/outlooks-keys';
+import { outlookQuery, useOutlook } from '../../../api/outlooks/get-outlook';
+import type { AreaEvidenceReport } from '../../../../shared/contracts/outlooks';
+import { useOutlookEvidence } from '../../../api/outlooks/get-outlook-evidence';
+import type { EvidenceSource } from '../../../api/outlooks/outlooks-keys';
 import { usePeriodSoundings } from '../api/get-period-soundings';
 import { AreaImportExport } from '../components/area-import';
 import { AreaInspector } from '../components/area-inspector';
@@ -33,9 +34,12 @@ import { ShortcutHelp } from '../components/shortcut-help';
 import { WorkspaceToolbar } from '../components/workspace-toolbar';
 import { useOutlookEditor } from '../hooks/use-outlook-editor';
 import { applyAreaFix, type AreaFix } from '../utils/area-fixes';
-import { areaFeatures, areaTitle } from '../utils/area-display';
+import { areaTitle } from '../../../../shared/workflow/levels';
+import { areaFeatures } from '../utils/area-display';
 import { newArea, removeArea, toAreaGeometry, updateArea, type DraftArea } from '../utils/outlook-document';
-import { canAuthor, isEditableState, outlookStateLabels } from '../utils/outlook-states';
+import { authoringRoles, hasRole } from '../../../../shared/workflow/roles';
+import { outlookStateLabels } from '../../../../shared/workflow/states';
+import { isEditableState } from '../../../../shared/workflow/transitions';
 import { isPointParameter, pointColour, pointParameters, type PointParameter } from '../utils/sounding-colours';
 import { formatPeriod, fromUtcInputValue, toUtcInputValue } from '../utils/valid-period';
 
@@ -433,5 +437,5 @@ export function OutlookWorkspacePage() {
     );
   }
   if (!outlook.data || !office.data || me.isPending) return <Loading label="Opening the outlook…" />;
-  return <Workspace key={outlook.data.id} initial={outlook.data} office={office.data} mayAuthor={canAuthor(me.data?.user.role)} />;
+  return <Workspace key={outlook.data.id} initial={outlook.data} office={office.data} mayAuthor={me.data ? hasRole(me.data.user.role, authoringRoles) : false} />;
 }

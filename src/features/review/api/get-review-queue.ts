@@ -1,25 +1,23 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
-import { z } from 'zod';
-import { apiClient } from '../../../lib/api-client';
-import { outlookSummarySchema, type OutlookState } from '../../../../shared/contracts/outlooks';
-import { reviewKeys } from './review-keys';
+import { useQueries } from '@tanstack/react-query';
+import type { OutlookState, OutlookSummary } from '../../../../shared/contracts/outlooks';
+import { outlooksListQuery } from '../../../api/outlooks/get-outlooks';
 
-const outlookListSchema = z.object({ outlooks: z.array(outlookSummarySchema) });
-
-/** Outlooks in the given states (one request per state), oldest update first: first come, first reviewed. */
-export const getReviewQueue = async (states: readonly OutlookState[], signal?: AbortSignal) => {
-  const lists = await Promise.all(states.map((state) => apiClient.get(`/api/outlooks?state=${state}`, outlookListSchema, signal)));
-  return lists.flatMap((l) => l.outlooks).sort((a, b) => a.updatedAt.localeCompare(b.updatedAt));
-};
-
+/** What waits for a lead: drafts in review, and approved ones waiting to be published. */
 export const reviewQueueStates = ['in_review', 'approved'] as const satisfies readonly OutlookState[];
 
-export const reviewQueueQuery = (states: readonly OutlookState[] = reviewQueueStates) =>
-  queryOptions({
-    queryKey: reviewKeys.queue(states),
-    queryFn: ({ signal }) => getReviewQueue(states, signal),
-  });
+/** The list queries the queue is made of (one per state, from the outlooks resource). */
+export const reviewQueueQueries = () => reviewQueueStates.map((state) => outlooksListQuery({ state }));
 
+/** Outlooks in the queue's states, oldest update first: first come, first reviewed. */
 export function useReviewQueue() {
-  return useQuery(reviewQueueQuery());
+  return useQueries({
+    queries: reviewQueueQueries(),
+    combine: (results) => {
+      const error = results.find((r) => r.error)?.error ?? null;
+      const data: OutlookSummary[] | undefined = results.every((r) => r.data)
+        ? results.flatMap((r) => r.data?.outlooks ?? []).sort((a, b) => a.updatedAt.localeCompare(b.updatedAt))
+        : undefined;
+      return { data, error, isError: error !== null, isSuccess: data !== undefined, isPending: error === null && data === undefined };
+    },
+  });
 }

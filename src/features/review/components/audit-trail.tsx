@@ -1,6 +1,6 @@
 import { Notice } from '../../../components/ui/notice';
 import { formatTimestampUtc } from '../../../utils/time';
-import { useAudit } from '../api/get-audit';
+import { useAudit } from '../../../api/outlooks/get-audit';
 import { auditActionWords } from '../utils/review-rules';
 
 /** Who did what and when, newest first (append-only on the server). */

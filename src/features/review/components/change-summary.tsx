@@ -1,7 +1,8 @@
 import { RiskSwatch } from '../../../components/ui/risk-swatch';
 import type { OfficeSettings } from '../../../../shared/contracts/office';
 import { formatKm2, type OutlookDiff } from '../utils/outlook-diff';
-import { areaName, levelColour, levelLabel } from '../utils/review-map-areas';
+import { areaTitle, levelLabel } from '../../../../shared/workflow/levels';
+import { levelColour } from '../utils/review-map-areas';
 
 /** What the draft changes compared with the baseline: areas, levels, and ground per level. */
 export function ChangeSummary({ diff, ladder, baselineName }: { diff: OutlookDiff; ladder: OfficeSettings['riskLadder']; baselineName: string }) {
@@ -11,12 +12,12 @@ export function ChangeSummary({ diff, ladder, baselineName }: { diff: OutlookDif
       <ul className="space-y-1">
         {diff.added.map((area) => (
           <li key={`added-${area.id}`}>
-            <span className="font-semibold text-ok">Added</span> {areaName(ladder, area)}
+            <span className="font-semibold text-ok">Added</span> {areaTitle(ladder, area)}
           </li>
         ))}
         {diff.removed.map((area) => (
           <li key={`removed-${area.id}`}>
-            <span className="font-semibold text-danger">Removed</span> {areaName(ladder, area)}
+            <span className="font-semibold text-danger">Removed</span> {areaTitle(ladder, area)}
           </li>
         ))}
         {diff.levelChanges.map((change) => (

@@ -6,9 +6,9 @@ import { Button } from '../../../components/ui/button';
 import { FieldError, SelectField, inputClasses } from '../../../components/ui/field';
 import { Notice } from '../../../components/ui/notice';
 import { formatTimestampUtc } from '../../../utils/time';
-import { useAddComment } from '../api/add-comment';
-import { useComments } from '../api/get-comments';
-import { areaName } from '../utils/review-map-areas';
+import { useAddComment } from '../../../api/outlooks/add-comment';
+import { useComments } from '../../../api/outlooks/get-comments';
+import { areaTitle } from '../../../../shared/workflow/levels';
 
 /** The review conversation: general comments and comments pinned to one area. */
 export function CommentThread({ outlookId, areas, ladder, canComment }: { outlookId: string; areas: Outlook['areas']; ladder: OfficeSettings['riskLadder']; canComment: boolean }) {
@@ -32,7 +32,7 @@ export function CommentThread({ outlookId, areas, ladder, canComment }: { outloo
   const pinName = (riskAreaId: string | null) => {
     if (!riskAreaId) return null;
     const area = areas.find((a) => a.id === riskAreaId);
-    return area ? areaName(ladder, area) : 'an area no longer in the draft';
+    return area ? areaTitle(ladder, area) : 'an area no longer in the draft';
   };
 
   return (
@@ -71,7 +71,7 @@ export function CommentThread({ outlookId, areas, ladder, canComment }: { outloo
               label="About"
               value={areaId}
               onChange={(e) => setAreaId(e.target.value)}
-              options={[{ value: '', label: 'The whole outlook' }, ...areas.map((a) => ({ value: a.id, label: areaName(ladder, a) }))]}
+              options={[{ value: '', label: 'The whole outlook' }, ...areas.map((a) => ({ value: a.id, label: areaTitle(ladder, a) }))]}
               className="min-w-48 flex-1"
             />
             <Button type="submit" variant="secondary" busy={add.isPending}>

@@ -6,13 +6,16 @@ import { Button } from '../../../components/ui/button';
 import { FieldError, inputClasses } from '../../../components/ui/field';
 import { Notice } from '../../../components/ui/notice';
 import { isApiError } from '../../../lib/api-client';
-import { useTransitionOutlook, type TransitionResult } from '../api/transition-outlook';
-import { actionProblem, approvalNeedsAnotherLead, type ActionProblem } from '../utils/review-rules';
+import type { TransitionResult } from '../../../../shared/contracts/workflow';
+import { useTransitionOutlook } from '../../../api/outlooks/transition-outlook';
+import { actionProblem, type ActionProblem } from '../utils/review-rules';
 
 interface ReviewActionsProps {
   outlook: Outlook;
+  /** The actions open to the person now (shared/workflow/transitions.ts, as the server enforces them). */
   actions: readonly WorkflowAction[];
-  userId: string;
+  /** Why approval is refused under the four-eyes rule, when it is. */
+  fourEyesNote: string | null;
 }
 
 const successWords: Record<WorkflowAction, string> = {
@@ -23,7 +26,7 @@ const successWords: Record<WorkflowAction, string> = {
 };
 
 /** Submit, approve, return with a comment, publish — each sent with the version on screen. */
-export function ReviewActions({ outlook, actions, userId }: ReviewActionsProps) {
+export function ReviewActions({ outlook, actions, fourEyesNote }: ReviewActionsProps) {
   const transition = useTransitionOutlook(outlook.id);
   const [returning, setReturning] = useState(false);
   const [comment, setComment] = useState('');
@@ -63,7 +66,6 @@ export function ReviewActions({ outlook, actions, userId }: ReviewActionsProps) 
   };
 
   const busy = transition.isPending;
-  const fourEyes = actions.includes('approve') && approvalNeedsAnotherLead(outlook.lastEditedBy, userId);
 
   return (
     <div className="space-y-3">
@@ -85,9 +87,9 @@ export function ReviewActions({ outlook, actions, userId }: ReviewActionsProps) 
           {problem.message}
         </Notice>
       ) : null}
-      {fourEyes ? (
-        <Notice tone="info" title="You edited this draft last">
-          Under the four-eyes rule another lead approves it, unless the office has relaxed the rule.
+      {fourEyesNote ? (
+        <Notice tone="info" title="Another lead approves this version">
+          {fourEyesNote}
         </Notice>
       ) : null}
       {actions.length === 0 ? <p className="text-sm text-ink-muted">No action is open to you in this state.</p> : null}

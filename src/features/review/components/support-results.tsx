@@ -3,8 +3,9 @@ import { supportResultLabels, type SupportResult } from '../../../../shared/evid
 import type { OfficeSettings } from '../../../../shared/contracts/office';
 import type { Outlook } from '../../../../shared/contracts/outlooks';
 import { RiskSwatch } from '../../../components/ui/risk-swatch';
-import type { AreaReport } from '../api/get-review-evidence';
-import { levelColour, levelLabel } from '../utils/review-map-areas';
+import type { AreaEvidenceReport } from '../../../../shared/contracts/outlooks';
+import { levelLabel } from '../../../../shared/workflow/levels';
+import { levelColour } from '../utils/review-map-areas';
 
 const resultStyle: Record<SupportResult, string> = {
   supported: 'bg-ok-soft text-ok',
@@ -14,7 +15,7 @@ const resultStyle: Record<SupportResult, string> = {
 };
 
 /** The support check and geometry checks of every area, as the server computed them. */
-export function SupportResults({ reports, areas, ladder }: { reports: readonly AreaReport[]; areas: Outlook['areas']; ladder: OfficeSettings['riskLadder'] }) {
+export function SupportResults({ reports, areas, ladder }: { reports: readonly AreaEvidenceReport[]; areas: Outlook['areas']; ladder: OfficeSettings['riskLadder'] }) {
   if (reports.length === 0) return <p className="text-sm text-ink-muted">This outlook has no risk areas to check.</p>;
   return (
     <ul className="space-y-3">

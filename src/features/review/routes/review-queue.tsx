@@ -7,13 +7,13 @@ import { Notice } from '../../../components/ui/notice';
 import { PageHeader } from '../../../components/ui/page-header';
 import { formatTimestampUtc } from '../../../utils/time';
 import { useQueueSupport } from '../api/get-queue-support';
-import { reviewQueueQuery, useReviewQueue } from '../api/get-review-queue';
-import { outlookStateWords } from '../utils/review-rules';
+import { outlookStateLabels } from '../../../../shared/workflow/states';
+import { reviewQueueQueries, useReviewQueue } from '../api/get-review-queue';
 import { supportSummary } from '../utils/support-summary';
 
 /** Warms the queue without holding up navigation (the page shows its own loading state). */
 export const reviewQueueLoader = (queryClient: QueryClient) => () => {
-  void queryClient.prefetchQuery(reviewQueueQuery());
+  for (const query of reviewQueueQueries()) void queryClient.prefetchQuery(query);
   return Promise.resolve();
 };
 
@@ -30,11 +30,11 @@ export function ReviewQueuePage() {
         description="Drafts submitted by forecasters, waiting for you to return them with comments or approve and publish."
       />
       {queue.isPending ? <Loading label="Loading the queue…" /> : null}
-      {queue.isError ? <Notice tone="error" title="The queue could not be loaded">{queue.error.message}</Notice> : null}
+      {queue.error ? <Notice tone="error" title="The queue could not be loaded">{queue.error.message}</Notice> : null}
       {queue.isSuccess && outlooks.length === 0 ? (
         <EmptyState icon={<ClipboardCheck aria-hidden className="size-5" />} title="No outlooks in review.">
-          When a forecaster submits a draft, it appears here with its risk areas and evidence. You cannot approve a draft you
-          last edited yourself; another lead reviews those.
+          When a forecaster submits a draft, it appears here with its risk areas and evidence. You cannot approve a version whose
+          content you edited; another lead reviews those.
         </EmptyState>
       ) : null}
       {outlooks.length > 0 ? (
@@ -62,7 +62,7 @@ export function ReviewQueuePage() {
                         {outlook.areaCount} risk area{outlook.areaCount === 1 ? '' : 's'}
                       </span>
                     </td>
-                    <td className="px-3 py-2 whitespace-nowrap">{outlookStateWords[outlook.state]}</td>
+                    <td className="px-3 py-2 whitespace-nowrap">{outlookStateLabels[outlook.state]}</td>
                     <td className="px-3 py-2 text-[13px] whitespace-nowrap">
                       {formatTimestampUtc(outlook.validFrom)}
                       <span className="block text-ink-muted">to {formatTimestampUtc(outlook.validUntil)}</span>

@@ -8,11 +8,14 @@ import { RiskSwatch } from '../../../components/ui/risk-swatch';
 import { useMe } from '../../../hooks/use-me';
 import { useOffice } from '../../../hooks/use-office';
 import { formatTimestampUtc } from '../../../utils/time';
-import { useCurrentIssuances, currentIssuancesQuery } from '../api/get-current-issuances';
-import { reviewEvidenceQuery, useReviewEvidence } from '../api/get-review-evidence';
-import { reviewOutlookQuery, useReviewOutlook } from '../api/get-review-outlook';
-import { useRevision } from '../api/get-revision';
-import { revisionsQuery, useRevisions } from '../api/get-revisions';
+import { bulletinQuery, useBulletin } from '../../../api/issuances/get-bulletin';
+import { outlookEvidenceQuery, useOutlookEvidence } from '../../../api/outlooks/get-outlook-evidence';
+import { outlookQuery, useOutlook } from '../../../api/outlooks/get-outlook';
+import { useRevision } from '../../../api/outlooks/get-revision';
+import { revisionsQuery, useRevisions } from '../../../api/outlooks/get-revisions';
+import { authoringRoles, hasRole, reviewingRoles } from '../../../../shared/workflow/roles';
+import { outlookStateLabels } from '../../../../shared/workflow/states';
+import { availableActions, checkTransition, type TransitionSubject } from '../../../../shared/workflow/transitions';
 import { AuditTrail } from '../components/audit-trail';
 import { ChangeSummary } from '../components/change-summary';
 import { CommentThread } from '../components/comment-thread';
@@ -22,18 +25,17 @@ import { SupportResults } from '../components/support-results';
 import { diffOutlookAreas } from '../utils/outlook-diff';
 import { chooseBaseline } from '../utils/review-baseline';
 import { reviewMapAreas } from '../utils/review-map-areas';
-import { actionsFor, outlookStateWords } from '../utils/review-rules';
 
 export const reviewLoader =
   (queryClient: QueryClient) =>
   ({ params }: LoaderFunctionArgs) => {
     const outlookId = params.outlookId;
     if (outlookId) {
-      void queryClient.prefetchQuery(reviewOutlookQuery(outlookId));
-      void queryClient.prefetchQuery(reviewEvidenceQuery(outlookId));
+      void queryClient.prefetchQuery(outlookQuery(outlookId));
+      void queryClient.prefetchQuery(outlookEvidenceQuery(outlookId));
       void queryClient.prefetchQuery(revisionsQuery(outlookId));
     }
-    void queryClient.prefetchQuery(currentIssuancesQuery());
+    void queryClient.prefetchQuery(bulletinQuery());
     return Promise.resolve();
   };
 
@@ -42,9 +44,9 @@ export function ReviewPage() {
   const outlookId = useParams().outlookId ?? '';
   const me = useMe();
   const office = useOffice();
-  const outlook = useReviewOutlook(outlookId);
-  const evidence = useReviewEvidence(outlookId);
-  const current = useCurrentIssuances();
+  const outlook = useOutlook(outlookId);
+  const evidence = useOutlookEvidence(outlookId);
+  const current = useBulletin();
   const revisions = useRevisions(outlookId);
   const previousRevisionId = revisions.data?.revisions[1]?.id ?? null;
   const previousRevision = useRevision(previousRevisionId);
@@ -66,9 +68,12 @@ export function ReviewPage() {
   const region = office.data.region;
   const baseline = chooseBaseline(draft, current.data?.issuances ?? [], previousRevision.data ?? null);
   const diff = diffOutlookAreas(baseline.areas, draft.areas, ladder.map((l) => l.key));
-  const actions = actionsFor(draft.state, me.data.user.role);
-  const isLead = me.data.user.role === 'lead';
-  const canComment = me.data.user.role === 'lead' || me.data.user.role === 'forecaster';
+  const subject: TransitionSubject = { state: draft.state, role: me.data.user.role, userId: me.data.user.id, reviewEditorIds: draft.reviewEditorIds, allowSelfApproval: office.data.allowSelfApproval };
+  const actions = availableActions(subject);
+  const approval = checkTransition('approve', subject);
+  const fourEyesNote = !approval.allowed && approval.reason === 'four-eyes' ? approval.message : null;
+  const isLead = hasRole(me.data.user.role, reviewingRoles);
+  const canComment = hasRole(me.data.user.role, authoringRoles);
   const levelsShown = ladder.filter((l) => draft.areas.some((a) => a.levelKey === l.key) || baseline.areas.some((a) => a.levelKey === l.key));
 
   return (
@@ -86,7 +91,7 @@ export function ReviewPage() {
         <div>
           <dt className="inline text-ink-muted">State: </dt>
           <dd className="inline font-semibold" data-testid="outlook-state">
-            {outlookStateWords[draft.state]}
+            {outlookStateLabels[draft.state]}
           </dd>
         </div>
         <div>
@@ -159,7 +164,7 @@ export function ReviewPage() {
 
         <div className="space-y-4">
           <Panel title="Decision">
-            <ReviewActions outlook={draft} actions={actions} userId={me.data.user.id} />
+            <ReviewActions outlook={draft} actions={actions} fourEyesNote={fourEyesNote} />
           </Panel>
           <Panel title="Comments">
             <CommentThread outlookId={draft.id} areas={draft.areas} ladder={ladder} canComment={canComment} />

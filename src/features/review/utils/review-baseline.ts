@@ -1,5 +1,5 @@
 import type { Outlook } from '../../../../shared/contracts/outlooks';
-import type { CurrentIssuance } from '../api/get-current-issuances';
+import type { Issuance } from '../../../../shared/contracts/issuances';
 import type { HazardKind } from '../../../../shared/contracts/outlooks';
 import type { DiffArea } from './outlook-diff';
 
@@ -22,7 +22,7 @@ interface RevisionLike {
  * What the draft is compared with: the current issuance for the same day when there is one,
  * otherwise the revision before the newest, otherwise nothing (a first draft).
  */
-export function chooseBaseline(outlook: Pick<Outlook, 'day'>, current: readonly CurrentIssuance[], previousRevision: RevisionLike | null): Baseline {
+export function chooseBaseline(outlook: Pick<Outlook, 'day'>, current: readonly Pick<Issuance, 'day' | 'number' | 'snapshot'>[], previousRevision: RevisionLike | null): Baseline {
   const sameDay = current.find((i) => i.day === outlook.day);
   if (sameDay) {
     return { name: `issuance ${sameDay.number}`, kind: 'issuance', issuanceNumber: sameDay.number, areas: sameDay.snapshot.areas.map((a) => ({ id: a.id, levelKey: a.levelKey, geometry: a.geometry, label: a.label, hazards: a.hazards })) };

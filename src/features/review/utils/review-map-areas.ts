@@ -1,17 +1,14 @@
 import type { MapArea, MapBounds } from '../../../lib/map/risk-area-types';
 import type { OfficeSettings } from '../../../../shared/contracts/office';
 import { hazardLabels, type AreaGeometry, type HazardKind } from '../../../../shared/contracts/outlooks';
+import { areaTitle, ladderLevel } from '../../../../shared/workflow/levels';
 
 export type { MapArea, MapBounds };
 
 type Ladder = OfficeSettings['riskLadder'];
 
-export function levelLabel(ladder: Ladder, levelKey: string): string {
-  return ladder.find((l) => l.key === levelKey)?.label ?? levelKey;
-}
-
 export function levelColour(ladder: Ladder, levelKey: string): string {
-  return ladder.find((l) => l.key === levelKey)?.colour ?? '#b6c0cd';
+  return ladderLevel(ladder, levelKey).colour;
 }
 
 interface AreaLike {
@@ -34,13 +31,9 @@ export function reviewMapAreas(areas: readonly AreaLike[], ladder: Ladder): MapA
       id: area.id ?? `area-${index}`,
       geometry: area.geometry,
       colour: levelColour(ladder, area.levelKey),
-      title: area.label ? `${levelLabel(ladder, area.levelKey)} — ${area.label}` : levelLabel(ladder, area.levelKey),
+      title: areaTitle(ladder, area),
       detail: area.hazards.map((h) => `${hazardLabels[h.hazard]}${h.significant ? ' (significant)' : ''}`).join(', '),
       significant: area.hazards.some((h) => h.significant),
     }));
 }
 
-/** "Level 2 · Scattered — Lower valley" for lists and comment pins. */
-export function areaName(ladder: Ladder, area: { levelKey: string; label?: string | undefined }): string {
-  return area.label ? `${levelLabel(ladder, area.levelKey)} — ${area.label}` : levelLabel(ladder, area.levelKey);
-}

@@ -1,36 +1,4 @@
-import type { Role } from '../../../../shared/contracts/common';
-import type { OutlookState } from '../../../../shared/contracts/outlooks';
 import type { WorkflowAction } from '../../../../shared/contracts/workflow';
-
-export const outlookStateWords: Record<OutlookState, string> = {
-  draft: 'Draft',
-  in_review: 'In review',
-  returned: 'Returned',
-  approved: 'Approved',
-  published: 'Published',
-};
-
-/**
- * The workflow actions a person may see on the review screen, mirroring the server's transition
- * table (the server still decides): authors submit drafts and returned drafts; leads return,
- * approve and publish.
- */
-export function actionsFor(state: OutlookState, role: Role): WorkflowAction[] {
-  const actions: WorkflowAction[] = [];
-  const author = role === 'forecaster' || role === 'lead';
-  if (author && (state === 'draft' || state === 'returned')) actions.push('submit');
-  if (role === 'lead') {
-    if (state === 'in_review') actions.push('approve');
-    if (state === 'in_review' || state === 'approved') actions.push('return');
-    if (state === 'approved') actions.push('publish');
-  }
-  return actions;
-}
-
-/** Four-eyes: the lead who edited the draft last may not approve it (unless the office relaxed the rule). */
-export function approvalNeedsAnotherLead(lastEditedBy: string | null, userId: string): boolean {
-  return lastEditedBy !== null && lastEditedBy === userId;
-}
 
 export interface ActionProblem {
   title: string;

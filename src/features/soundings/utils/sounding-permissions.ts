@@ -1,4 +1,5 @@
 import type { Role } from '../../../../shared/contracts/common';
+import { authoringRoles, hasRole } from '../../../../shared/workflow/roles';
 
 /** Who may delete a sounding (the server checks the same): its uploader, or any lead. */
 export function canDeleteSounding(viewer: { id: string; role: Role }, sounding: { uploadedBy: string | null }): boolean {
@@ -15,5 +16,5 @@ export function canDeleteSounding(viewer: { id: string; role: Role }, sounding: 
 
 /** Upload and what-if saving: forecasters and leads. */
 export function canWriteSoundings(role: Role): boolean {
-  return role === 'forecaster' || role === 'lead';
+  return hasRole(role, authoringRoles);
 }

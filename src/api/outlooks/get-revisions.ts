@@ -1,10 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { z } from 'zod';
-import { apiClient } from '../../../lib/api-client';
-import { revisionSummarySchema } from '../../../../shared/contracts/outlooks';
+import { apiClient } from '../../lib/api-client';
+import { revisionListSchema } from '../../../shared/contracts/outlooks';
 import { outlooksKeys } from './outlooks-keys';
-
-const revisionListSchema = z.object({ revisions: z.array(revisionSummarySchema) });
 
 export const getRevisions = (outlookId: string, signal?: AbortSignal) => apiClient.get(`/api/outlooks/${encodeURIComponent(outlookId)}/revisions`, revisionListSchema, signal);
 
@@ -14,6 +11,7 @@ export const revisionsQuery = (outlookId: string) =>
     queryFn: ({ signal }) => getRevisions(outlookId, signal),
   });
 
+/** Saved revisions of the outlook, newest first. */
 export function useRevisions(outlookId: string) {
   return useQuery(revisionsQuery(outlookId));
 }

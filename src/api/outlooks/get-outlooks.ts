@@ -1,10 +1,7 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
-import { z } from 'zod';
-import { apiClient } from '../../../lib/api-client';
-import { outlookSummarySchema, type OutlookListQuery } from '../../../../shared/contracts/outlooks';
+import { apiClient } from '../../lib/api-client';
+import { outlookListSchema, type OutlookListQuery } from '../../../shared/contracts/outlooks';
 import { outlooksKeys } from './outlooks-keys';
-
-const outlookListSchema = z.object({ outlooks: z.array(outlookSummarySchema) });
 
 export const getOutlooks = (filters: OutlookListQuery, signal?: AbortSignal) => {
   const search = new URLSearchParams();

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { apiClient } from '../../../lib/api-client';
-import { outlookSchema, type CreateOutlookInput } from '../../../../shared/contracts/outlooks';
+import { apiClient } from '../../lib/api-client';
+import { outlookSchema, type CreateOutlookInput } from '../../../shared/contracts/outlooks';
 import { outlooksKeys } from './outlooks-keys';
 
 export const createOutlook = (input: CreateOutlookInput) => apiClient.post('/api/outlooks', input, outlookSchema);

@@ -1,16 +1,13 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { z } from 'zod';
-import { apiClient } from '../../../lib/api-client';
-import { bulletinKeys } from './bulletin-keys';
-import { issuanceSchema } from './issuance-schema';
-
-const bulletinSchema = z.object({ issuances: z.array(issuanceSchema), caution: z.string() });
+import { apiClient } from '../../lib/api-client';
+import { bulletinSchema } from '../../../shared/contracts/issuances';
+import { issuancesKeys } from './issuances-keys';
 
 export const getBulletin = (signal?: AbortSignal) => apiClient.get('/api/public/bulletin', bulletinSchema, signal);
 
 export const bulletinQuery = () =>
   queryOptions({
-    queryKey: bulletinKeys.current(),
+    queryKey: issuancesKeys.current(),
     queryFn: ({ signal }) => getBulletin(signal),
   });
 

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiClient } from '../../../lib/api-client';
-import { outlookSchema } from '../../../../shared/contracts/outlooks';
+import { apiClient } from '../../lib/api-client';
+import { outlookSchema } from '../../../shared/contracts/outlooks';
 import { outlooksKeys } from './outlooks-keys';
 
 export const getOutlook = (outlookId: string, signal?: AbortSignal) => apiClient.get(`/api/outlooks/${encodeURIComponent(outlookId)}`, outlookSchema, signal);

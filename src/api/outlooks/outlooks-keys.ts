@@ -1,8 +1,9 @@
-import type { OutlookListQuery } from '../../../../shared/contracts/outlooks';
+import type { OutlookListQuery } from '../../../shared/contracts/outlooks';
 
 /**
- * Query keys of the outlooks feature, general to specific: resource, kind, params. A save
- * invalidates `outlooksKeys.all`, so lists, evidence and revisions refresh together.
+ * The one query-key factory of the outlooks resource, general to specific: resource, kind,
+ * params. The workspace, the desk and the review screen all read through it, so one outlook is
+ * cached once. A save or a workflow action invalidates `outlooksKeys.all`.
  */
 export const outlooksKeys = {
   all: ['outlooks'] as const,
@@ -13,6 +14,8 @@ export const outlooksKeys = {
   evidence: (outlookId: string, source: EvidenceSource) => [...outlooksKeys.all, 'evidence', outlookId, source] as const,
   revisions: (outlookId: string) => [...outlooksKeys.all, 'revisions', outlookId] as const,
   revision: (revisionId: string) => [...outlooksKeys.all, 'revision', revisionId] as const,
+  comments: (outlookId: string) => [...outlooksKeys.all, 'comments', outlookId] as const,
+  audit: (outlookId: string) => [...outlooksKeys.all, 'audit', outlookId] as const,
   soundings: (validFrom: string, validUntil: string) => [...outlooksKeys.all, 'soundings', { validFrom, validUntil }] as const,
 };
 

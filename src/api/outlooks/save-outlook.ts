@@ -1,5 +1,5 @@
-import { apiClient } from '../../../lib/api-client';
-import { outlookSchema, type SaveOutlookInput } from '../../../../shared/contracts/outlooks';
+import { apiClient } from '../../lib/api-client';
+import { outlookSchema, type SaveOutlookInput } from '../../../shared/contracts/outlooks';
 
 /**
  * Saves the whole draft with the version it was loaded at. A stale version answers 409

@@ -1,0 +1,70 @@
+import { z } from 'zod';
+import { regionSchema, riskLevelSchema } from './office';
+import { riskAreaSchema, supportCheckSchema } from './outlooks';
+import { issuanceStates } from './workflow';
+
+/** Per area of an issuance: the evidence as it stood at publication (medians only). */
+export const issuanceEvidenceSchema = z.object({
+  areaId: z.string(),
+  levelKey: z.string(),
+  count: z.number(),
+  medians: z.record(z.string(), z.number().nullable()),
+  support: supportCheckSchema,
+});
+export type IssuanceEvidence = z.infer<typeof issuanceEvidenceSchema>;
+
+/**
+ * The frozen content of an issuance, written once at publication and read by the public pages,
+ * exports and mail. Lenient (defaults, optional) only where snapshots written by earlier
+ * versions lack a field.
+ */
+export const issuanceSnapshotSchema = z.object({
+  number: z.string().optional(),
+  office: z.object({ name: z.string(), timeZone: z.string(), region: regionSchema.optional() }),
+  riskLadder: z.array(riskLevelSchema),
+  day: z.number(),
+  validFrom: z.string(),
+  validUntil: z.string(),
+  headline: z.string(),
+  discussion: z.string().default(''),
+  hazardNotes: z.record(z.string(), z.string()).default({}),
+  areas: z.array(riskAreaSchema.partial({ sortOrder: true })),
+  evidence: z.array(issuanceEvidenceSchema).default([]),
+  authorName: z.string().nullable().default(null),
+  approverName: z.string().nullable().default(null),
+  publisherName: z.string().nullable().default(null),
+  publishedAt: z.string(),
+});
+export type IssuanceSnapshot = z.infer<typeof issuanceSnapshotSchema>;
+/** What publishing writes (every field present). */
+export type IssuanceSnapshotInput = z.input<typeof issuanceSnapshotSchema>;
+
+const issuanceBaseSchema = z.object({
+  id: z.string(),
+  number: z.string(),
+  day: z.number(),
+  state: z.enum(issuanceStates),
+  validFrom: z.string(),
+  validUntil: z.string(),
+  publishedAt: z.string(),
+  supersedesNumber: z.string().nullable(),
+  supersededByNumber: z.string().nullable(),
+  withdrawnReason: z.string().nullable(),
+  withdrawnAt: z.string().nullable(),
+  caution: z.string(),
+});
+
+/** GET /api/public/issuances/:number */
+export const issuanceSchema = issuanceBaseSchema.extend({ snapshot: issuanceSnapshotSchema });
+export type Issuance = z.infer<typeof issuanceSchema>;
+
+export const archiveEntrySchema = issuanceBaseSchema.extend({ headline: z.string() });
+export type ArchiveEntry = z.infer<typeof archiveEntrySchema>;
+
+/** GET /api/public/bulletin */
+export const bulletinSchema = z.object({ issuances: z.array(issuanceSchema), caution: z.string() });
+export type Bulletin = z.infer<typeof bulletinSchema>;
+
+/** GET /api/public/issuances (the archive) */
+export const archiveSchema = z.object({ issuances: z.array(archiveEntrySchema), total: z.number(), caution: z.string() });
+export type Archive = z.infer<typeof archiveSchema>;
