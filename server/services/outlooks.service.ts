@@ -1,10 +1,11 @@
 import { and, asc, desc, eq, gte, lt, sql } from 'drizzle-orm';
 import { withRfc7946Winding } from '../../shared/geometry/winding';
 import type { Feature, FeatureCollection } from 'geojson';
-import { areaGeometrySchema, hazardFlagSchema, type CreateOutlookInput, type Outlook, type OutlookListQuery, type OutlookSummary, type RevisionSummary, type RiskArea, type RiskAreaInput, type SaveOutlookInput } from '../../shared/contracts/outlooks';
+import { areaGeometrySchema, boundedAreaGeometrySchema, hazardFlagSchema, type CreateOutlookInput, type Outlook, type OutlookListQuery, type OutlookSummary, type RevisionSummary, type RiskArea, type RiskAreaInput, type SaveOutlookInput } from '../../shared/contracts/outlooks';
 import { areaEvidence, soundingsInPeriod, type AreaEvidence, type EvidenceSounding } from '../../shared/evidence/evidence';
 import { checkSupport, defaultGuidanceThresholds, type GuidanceThresholds, type SupportCheck } from '../../shared/evidence/support-check';
 import { checkAreas, type AreaCheck } from '../../shared/geometry/area-checks';
+import { MAX_VERTICES_PER_AREA } from '../../shared/geometry/limits';
 import { validPeriod } from '../../shared/time/valid-period';
 import { appError, type AppError, type FieldIssue } from '../../shared/errors';
 import { err, ok, type Result } from '../../shared/result';
@@ -334,7 +335,7 @@ export async function importAreasGeoJson(db: Database, document: unknown): Promi
   const areas: RiskAreaInput[] = [];
   features.forEach((raw, index) => {
     const feature = (typeof raw === 'object' && raw !== null ? raw : {}) as { geometry?: unknown; properties?: Record<string, unknown> | null };
-    const geometry = areaGeometrySchema.safeParse(feature.geometry);
+    const geometry = boundedAreaGeometrySchema(MAX_VERTICES_PER_AREA, 'This feature').safeParse(feature.geometry);
     if (!geometry.success) {
       issues.push({ path: `features.${index}.geometry`, message: `Feature ${index + 1}: ${geometry.error.issues[0]?.message ?? 'needs a Polygon or MultiPolygon geometry.'}` });
       return;
