@@ -11,6 +11,8 @@ import { createMailer } from './mail/send-mail';
 import { sendPasswordResetMail, sendVerificationMail, storeCaughtMail } from './services/mail.service';
 import { ensureOffice, seedDemo } from './services/seed.service';
 import { recoverOutbox, startOutboxWorker } from './services/outbox.service';
+import { startDistributionWorker } from './services/distribution.service';
+import { closeGeometryPool } from './workers/geometry-pool';
 
 export interface StartOptions {
   clientMode: ClientMode;
@@ -47,6 +49,8 @@ export async function startStormdraft(config: Config, options: StartOptions): Pr
   else await ensureOffice(db);
   await recoverOutbox(db);
   const stopWorker = config.outboxIntervalMs > 0 ? startOutboxWorker(db, mailer, config.outboxIntervalMs, (error) => logger.error({ err: error }, 'outbox worker')) : async () => {};
+  // Publishing leaves a distribution job; this worker turns it into mail (tests drive it themselves).
+  const stopDistribution = config.outboxIntervalMs > 0 ? startDistributionWorker(db, config, config.outboxIntervalMs, (error) => logger.error({ err: error }, 'distribution worker')) : async () => {};
   const app = await createApp(ctx, options.clientMode);
   return {
     app,
@@ -54,7 +58,9 @@ export async function startStormdraft(config: Config, options: StartOptions): Pr
     catcher,
     dump: database.dump,
     async close() {
+      await stopDistribution();
       await stopWorker();
+      await closeGeometryPool();
       mailer.close();
       await catcher?.close();
       await database.close();

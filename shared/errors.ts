@@ -10,6 +10,7 @@ export const errorCodes = {
   CONFLICT: { status: 409, message: 'This was changed by someone else since you opened it.' },
   ALREADY_EXISTS: { status: 409, message: 'That already exists.' },
   PAYLOAD_TOO_LARGE: { status: 413, message: 'The upload is larger than allowed.' },
+  SERVICE_UNAVAILABLE: { status: 503, message: 'This is busy or briefly unavailable. Try again in a minute.' },
   INTERNAL: { status: 500, message: 'Something went wrong on our side. Please try again.' },
 } as const;
 

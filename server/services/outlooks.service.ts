@@ -2,9 +2,8 @@ import { and, asc, desc, eq, gte, lt, sql } from 'drizzle-orm';
 import { withRfc7946Winding } from '../../shared/geometry/winding';
 import type { Feature, FeatureCollection } from 'geojson';
 import { areaGeometrySchema, boundedAreaGeometrySchema, hazardFlagSchema, type CreateOutlookInput, type Outlook, type OutlookListQuery, type OutlookSummary, type RevisionSummary, type RiskArea, type RiskAreaInput, type SaveOutlookInput } from '../../shared/contracts/outlooks';
-import { areaEvidence, soundingsInPeriod, type AreaEvidence, type EvidenceSounding } from '../../shared/evidence/evidence';
-import { checkSupport, defaultGuidanceThresholds, type GuidanceThresholds, type SupportCheck } from '../../shared/evidence/support-check';
-import { checkAreas, type AreaCheck } from '../../shared/geometry/area-checks';
+import type { EvidenceSounding } from '../../shared/evidence/evidence';
+import { defaultGuidanceThresholds, type GuidanceThresholds } from '../../shared/evidence/support-check';
 import { MAX_VERTICES_PER_AREA } from '../../shared/geometry/limits';
 import { validPeriod } from '../../shared/time/valid-period';
 import { appError, type AppError, type FieldIssue } from '../../shared/errors';
@@ -14,6 +13,8 @@ import type { Database, DatabaseOrTransaction } from '../db/client';
 import { auditEvents, outlookRevisions, outlooks, riskAreas, soundings, users } from '../db/schema';
 import { findOffice } from './office.service';
 import { keyFigures } from './soundings.service';
+import { runGeometryTask } from '../workers/geometry-pool';
+import type { AreaEvidenceReport } from '../workers/evidence-report';
 import type { SoundingAnalysis } from '../../shared/sounding';
 
 type OutlookRow = typeof outlooks.$inferSelect;
@@ -229,13 +230,7 @@ export async function getRevision(db: Database, revisionId: string): Promise<Res
   return ok({ id: r.id, outlookId: r.outlookId, revisionNumber: r.revisionNumber, snapshot: r.snapshot, authorName: row.authorName, createdAt: r.createdAt.toISOString() });
 }
 
-export interface AreaEvidenceReport {
-  areaId: string;
-  levelKey: string;
-  evidence: AreaEvidence;
-  support: SupportCheck;
-  checks: AreaCheck[];
-}
+export type { AreaEvidenceReport } from '../workers/evidence-report';
 
 /** Loads soundings valid in a period as evidence points (key figures from the cached analysis). */
 export async function evidenceSoundings(db: DatabaseOrTransaction, validFrom: Date, validUntil: Date): Promise<EvidenceSounding[]> {
@@ -255,35 +250,17 @@ export async function evidenceSoundings(db: DatabaseOrTransaction, validFrom: Da
   }));
 }
 
-/**
- * The evidence panel and support check of every area of an outlook, from the soundings valid in
- * its period (modified what-if soundings are left out: they are not observations or forecasts).
- */
-export function buildEvidenceReport(outlook: Pick<Outlook, 'areas' | 'validFrom' | 'validUntil'>, candidates: EvidenceSounding[], ladder: { key: string; label: string; colour: string; meaning: string }[], guidance: GuidanceThresholds, region: { west: number; south: number; east: number; north: number }, source?: 'observed' | 'model'): AreaEvidenceReport[] {
-  const pool = soundingsInPeriod(
-    candidates.filter((s) => !s.modified),
-    outlook.validFrom,
-    outlook.validUntil,
-    source,
-  );
-  const checks = checkAreas(
-    outlook.areas,
-    ladder.map((l) => l.key),
-    region,
-  );
-  return outlook.areas.map((area) => {
-    const evidence = areaEvidence(area.id, area.geometry, pool);
-    return { areaId: area.id, levelKey: area.levelKey, evidence, support: checkSupport(evidence, area.levelKey, ladder, guidance), checks: checks[area.id] ?? [] };
-  });
-}
-
+/** The evidence panel of every area of an outlook (see buildEvidenceReport), computed in the worker pool. */
 export async function getOutlookEvidence(db: Database, outlookId: string, source?: 'observed' | 'model'): Promise<Result<{ areas: AreaEvidenceReport[]; soundingCount: number }, AppError>> {
   const outlook = await loadOutlook(db, outlookId);
   if (!outlook) return err(notFound());
   const office = await requireOffice(db);
   const candidates = await evidenceSoundings(db, new Date(outlook.validFrom), new Date(outlook.validUntil));
   const guidance = Object.keys(office.guidanceThresholds).length ? office.guidanceThresholds : defaultGuidanceThresholds;
-  const areas = buildEvidenceReport(outlook, candidates, office.riskLadder, guidance as GuidanceThresholds, office.region, source);
+  // Geometry checks and point-in-area tests run in the worker pool, off the event loop.
+  const report = await runGeometryTask({ kind: 'evidence-report', input: { outlook, candidates, ladder: office.riskLadder, guidance: guidance as GuidanceThresholds, region: office.region, source } });
+  if (!report.ok) return report;
+  const areas = report.value;
   return ok({ areas, soundingCount: candidates.filter((s) => !s.modified && (!source || s.source === source)).length });
 }
 
