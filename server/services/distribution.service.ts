@@ -246,38 +246,33 @@ function alertMapInput(office: OfficeForNotice, issuance: IssuanceForNotice, hig
   };
 }
 
-/** Tells each subscriber who was alerted by an issuance that it has been withdrawn. */
+/**
+ * Tells each subscriber who was alerted by an issuance that it has been withdrawn (no map).
+ * Runs in the withdraw transaction with a fixed number of queries, however many were alerted.
+ */
 export async function queueWithdrawalNotices(tx: Transaction, config: Config, office: OfficeForNotice, issuance: IssuanceForNotice, reason: string): Promise<number> {
   const alerted = await tx.select().from(notifications).where(and(eq(notifications.issuanceId, issuance.id), eq(notifications.kind, 'alert')));
+  if (alerted.length === 0) return 0;
+  const ids = alerted.map((n) => n.subscriptionId);
+  const subs = await tx.select().from(subscriptions).where(and(inArray(subscriptions.id, ids), isNull(subscriptions.unsubscribedAt)));
+  const aoi = await tx.select({ subscriptionId: areasOfInterest.subscriptionId, name: areasOfInterest.name }).from(areasOfInterest).where(inArray(areasOfInterest.subscriptionId, ids));
+  const levelBySub = new Map(alerted.map((n) => [n.subscriptionId, n.highestLevelKey]));
+  const namesBySub = new Map<string, string[]>();
+  for (const a of aoi) namesBySub.set(a.subscriptionId, [...(namesBySub.get(a.subscriptionId) ?? []), a.name]);
+  const notice = { ...issuance, discussion: `Withdrawn: ${reason}` };
+  const values = subs
+    .filter((sub) => sub.emails.length > 0)
+    .map((sub) => {
+      const levelLabel = office.riskLadder.find((l) => l.key === levelBySub.get(sub.id))?.label ?? '';
+      const areaNames = (namesBySub.get(sub.id) ?? []).join(', ');
+      return buildMessage(config, office, notice, sub, areaNames, 'withdrawn', levelLabel, [], null);
+    });
   let queued = 0;
-  for (const n of alerted) {
-    const [sub] = await tx.select().from(subscriptions).where(and(eq(subscriptions.id, n.subscriptionId), isNull(subscriptions.unsubscribedAt)));
-    if (!sub) continue;
-    const areas = await tx.select().from(areasOfInterest).where(eq(areasOfInterest.subscriptionId, sub.id));
-    const levelLabel = office.riskLadder.find((l) => l.key === n.highestLevelKey)?.label ?? '';
-    queued += await queueMessages(tx, config, office, { ...issuance, discussion: `Withdrawn: ${reason}` }, sub, areas.map((a) => a.name).join(', '), 'withdrawn', levelLabel, []);
+  for (let start = 0; start < values.length; start += distributionPageSize) {
+    const inserted = await tx.insert(mailOutbox).values(values.slice(start, start + distributionPageSize)).onConflictDoNothing({ target: mailOutbox.dedupeKey }).returning({ id: mailOutbox.id });
+    queued += inserted.length;
   }
   return queued;
-}
-
-async function queueMessages(
-  tx: Transaction,
-  config: Config,
-  office: OfficeForNotice,
-  issuance: IssuanceForNotice,
-  sub: typeof subscriptions.$inferSelect,
-  areaNames: string,
-  kind: NoticeKind | 'withdrawn',
-  levelLabel: string,
-  hazards: HazardKind[],
-): Promise<number> {
-  if (sub.emails.length === 0) return 0;
-  const inserted = await tx
-    .insert(mailOutbox)
-    .values(buildMessage(config, office, issuance, sub, areaNames, kind, levelLabel, hazards, null))
-    .onConflictDoNothing({ target: mailOutbox.dedupeKey })
-    .returning({ id: mailOutbox.id });
-  return inserted.length;
 }
 
 /** One message per subscriber and issuance, addressed to all of their addresses; the alert map is a cached image. */
