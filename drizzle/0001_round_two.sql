@@ -1,3 +1,4 @@
+CREATE TYPE "public"."distribution_job_status" AS ENUM('queued', 'running', 'done', 'failed');--> statement-breakpoint
 ALTER TYPE "public"."sounding_source" ADD VALUE 'unknown';--> statement-breakpoint
 CREATE TABLE "issuance_counters" (
 	"office_id" uuid NOT NULL,
@@ -30,6 +31,30 @@ CREATE TABLE "sign_in_throttles" (
 	"last_failure_at" timestamp with time zone NOT NULL
 );
 --> statement-breakpoint
+CREATE TABLE "distribution_jobs" (
+	"id" uuid PRIMARY KEY DEFAULT gen_random_uuid() NOT NULL,
+	"issuance_id" uuid NOT NULL,
+	"status" "distribution_job_status" DEFAULT 'queued' NOT NULL,
+	"attempts" integer DEFAULT 0 NOT NULL,
+	"claimed_at" timestamp with time zone,
+	"last_error" text,
+	"queued" integer DEFAULT 0 NOT NULL,
+	"created_at" timestamp with time zone DEFAULT now() NOT NULL,
+	"finished_at" timestamp with time zone,
+	CONSTRAINT "distribution_jobs_issuanceId_unique" UNIQUE("issuance_id")
+);
+--> statement-breakpoint
+CREATE TABLE "issuance_images" (
+	"id" uuid PRIMARY KEY DEFAULT gen_random_uuid() NOT NULL,
+	"issuance_id" uuid NOT NULL,
+	"variant" text NOT NULL,
+	"format" text NOT NULL,
+	"content" text NOT NULL,
+	"details" jsonb DEFAULT '{}'::jsonb NOT NULL,
+	"created_at" timestamp with time zone DEFAULT now() NOT NULL,
+	CONSTRAINT "issuance_images_issuanceId_variant_format_unique" UNIQUE("issuance_id","variant","format")
+);
+--> statement-breakpoint
 ALTER TABLE "soundings" ALTER COLUMN "latitude" DROP NOT NULL;--> statement-breakpoint
 ALTER TABLE "soundings" ALTER COLUMN "longitude" DROP NOT NULL;--> statement-breakpoint
 ALTER TABLE "soundings" ALTER COLUMN "elevation_m" DROP NOT NULL;--> statement-breakpoint
@@ -38,5 +63,8 @@ ALTER TABLE "soundings" ADD COLUMN "content_hash" text;--> statement-breakpoint
 ALTER TABLE "mail_outbox" ADD COLUMN "claimed_at" timestamp with time zone;--> statement-breakpoint
 ALTER TABLE "issuance_counters" ADD CONSTRAINT "issuance_counters_office_id_offices_id_fk" FOREIGN KEY ("office_id") REFERENCES "public"."offices"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "subscription_email_confirmations" ADD CONSTRAINT "subscription_email_confirmations_subscription_id_subscriptions_id_fk" FOREIGN KEY ("subscription_id") REFERENCES "public"."subscriptions"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
+ALTER TABLE "distribution_jobs" ADD CONSTRAINT "distribution_jobs_issuance_id_issuances_id_fk" FOREIGN KEY ("issuance_id") REFERENCES "public"."issuances"("id") ON DELETE no action ON UPDATE no action;--> statement-breakpoint
+ALTER TABLE "issuance_images" ADD CONSTRAINT "issuance_images_issuance_id_issuances_id_fk" FOREIGN KEY ("issuance_id") REFERENCES "public"."issuances"("id") ON DELETE no action ON UPDATE no action;--> statement-breakpoint
+CREATE INDEX "distribution_jobs_status_created_at_index" ON "distribution_jobs" USING btree ("status","created_at");--> statement-breakpoint
 CREATE UNIQUE INDEX "soundings_office_id_content_hash_idx" ON "soundings" USING btree ("office_id","content_hash") WHERE "soundings"."modified_from_id" is null;--> statement-breakpoint
 CREATE UNIQUE INDEX "outlooks_open_amendment_idx" ON "outlooks" USING btree ("amends_issuance_id") WHERE "outlooks"."state" <> 'published';

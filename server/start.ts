@@ -12,6 +12,8 @@ import { createMailer } from './mail/send-mail';
 import { sendPasswordResetMail, sendVerificationMail, storeCaughtMail } from './services/mail.service';
 import { ensureOffice, seedDemo } from './services/seed.service';
 import { startOutboxWorker } from './services/outbox.service';
+import { startDistributionWorker } from './services/distribution.service';
+import { closeGeometryPool } from './workers/geometry-pool';
 
 export interface StartOptions {
   clientMode: ClientMode;
@@ -49,6 +51,8 @@ export async function startStormdraft(config: Config, options: StartOptions): Pr
   // No start-up re-queue of "sending" rows: another instance may still be sending them; an
   // expired claim is re-claimed by the outbox worker instead.
   const stopWorker = config.outboxIntervalMs > 0 ? startOutboxWorker(db, mailer, config.outboxIntervalMs, (error) => logger.error({ err: error }, 'outbox worker')) : async () => {};
+  // Publishing leaves a distribution job; this worker turns it into mail (tests drive it themselves).
+  const stopDistribution = config.outboxIntervalMs > 0 ? startDistributionWorker(db, config, config.outboxIntervalMs, (error) => logger.error({ err: error }, 'distribution worker')) : async () => {};
   const app = await createApp(ctx, options.clientMode);
   return {
     app,
@@ -56,7 +60,9 @@ export async function startStormdraft(config: Config, options: StartOptions): Pr
     catcher,
     dump: database.dump,
     async close() {
+      await stopDistribution();
       await stopWorker();
+      await closeGeometryPool();
       mailer.close();
       await catcher?.close();
       await database.close();

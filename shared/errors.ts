@@ -13,6 +13,7 @@ export const errorCodes = {
   PAYLOAD_TOO_LARGE: { status: 413, message: 'The upload is larger than allowed.' },
   UNSUPPORTED_MEDIA_TYPE: { status: 415, message: 'Send the request body as JSON.' },
   RATE_LIMITED: { status: 429, message: 'Too many attempts. Wait a little and try again.' },
+  SERVICE_UNAVAILABLE: { status: 503, message: 'This is busy or briefly unavailable. Try again in a minute.' },
   INTERNAL: { status: 500, message: 'Something went wrong on our side. Please try again.' },
 } as const;
 

@@ -68,7 +68,10 @@ export const issuancesRoutes = [
       const params = parseInput(numberParamsSchema, req.params, 'address');
       if (!params.ok) return sendResult(res, params);
       const result = await issuanceMap(ctx.db, params.value.issuanceNumber, 'svg');
-      if (!result.ok) return sendError(res, result.error);
+      if (!result.ok) {
+        if (result.error.code === 'SERVICE_UNAVAILABLE') res.set('Retry-After', '60');
+        return sendError(res, result.error);
+      }
       res.type('image/svg+xml').send(result.value);
     },
   }),
@@ -80,7 +83,10 @@ export const issuancesRoutes = [
       const params = parseInput(numberParamsSchema, req.params, 'address');
       if (!params.ok) return sendResult(res, params);
       const result = await issuanceMap(ctx.db, params.value.issuanceNumber, 'png');
-      if (!result.ok) return sendError(res, result.error);
+      if (!result.ok) {
+        if (result.error.code === 'SERVICE_UNAVAILABLE') res.set('Retry-After', '60');
+        return sendError(res, result.error);
+      }
       res.type('image/png').send(result.value);
     },
   }),

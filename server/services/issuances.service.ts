@@ -19,7 +19,7 @@ import type { RiskArea } from '../../shared/contracts/outlooks';
 import type { Region, RiskLevel } from '../../shared/contracts/office';
 import { buildAtomFeed } from '../exports/atom';
 import { buildKml } from '../exports/kml';
-import { renderMapPng, renderMapSvg } from '../exports/map-image';
+import { cachedIssuanceImage, imageBytes } from './issuance-images.service';
 
 
 type IssuanceRow = typeof issuances.$inferSelect;
@@ -227,7 +227,7 @@ export async function issuanceKml(db: Database, number: string): Promise<Result<
   return ok(buildKml({ number: v.number, state: v.state, day: v.day, validFrom: v.validFrom, validUntil: v.validUntil, headline: s.headline, officeName: s.office.name, ladder: s.riskLadder, areas: s.areas, caution: publicCaution }));
 }
 
-/** The issuance's map for people and e-mail: SVG or PNG, with its number, valid time and the caution. */
+/** The issuance's map for people: SVG or PNG, with its number, valid time, state and the caution. */
 export async function issuanceMap(db: Database, number: string, format: 'svg' | 'png'): Promise<Result<string | Buffer, AppError>> {
   const found = await getIssuance(db, number);
   if (!found.ok) return found;
@@ -242,7 +242,10 @@ export async function issuanceMap(db: Database, number: string, format: 'svg' | 
     areas: s.areas,
     caution: publicCaution,
   };
-  return ok(format === 'svg' ? renderMapSvg(input) : renderMapPng(input));
+  // Rendered once per state and format in the worker pool, then served from the cache.
+  const image = await cachedIssuanceImage(db, v.id, `public:${v.state}`, format, () => input);
+  if (!image.ok) return image;
+  return ok(format === 'svg' ? image.value.content : imageBytes(image.value));
 }
 
 export async function atomFeed(db: Database, publicUrl: string): Promise<Result<string, AppError>> {

@@ -4,6 +4,7 @@ import { err, ok, type Result } from '../../shared/result';
 import type { Database, DatabaseOrTransaction } from '../db/client';
 import { mailOutbox } from '../db/schema';
 import type { Mailer } from '../mail/send-mail';
+import { outboxAttachmentContents } from './issuance-images.service';
 
 /** After this many failed attempts a message is marked failed (an admin can resend it). */
 export const maxAttempts = 6;
@@ -67,7 +68,7 @@ export async function processOutbox(db: Database, mailer: Mailer, now = new Date
           html: message.html,
           text: message.text,
           headers: message.headers,
-          attachments: message.attachments.map((a) => ({ filename: a.filename, cid: a.cid, contentType: a.contentType, content: Buffer.from(a.contentBase64, 'base64') })),
+          attachments: await outboxAttachmentContents(db, message.attachments),
         });
         await db.update(mailOutbox).set({ status: 'sent', sentAt: new Date(), attempts: message.attempts + 1, lastError: null, claimedAt: null }).where(stillOurs);
         sent++;

@@ -2,13 +2,13 @@ import { isDeepStrictEqual } from 'node:util';
 import { and, asc, desc, eq, gt, gte, inArray, lt, max, ne, sql } from 'drizzle-orm';
 import { withRfc7946Winding } from '../../shared/geometry/winding';
 import type { Feature, FeatureCollection } from 'geojson';
-import { areaGeometrySchema, hazardFlagSchema, revisionSnapshotSchema, type CreateOutlookInput, type Outlook, type OutlookListQuery, type AreaImportResult, type OutlookEvidence, type OutlookList, type OutlookRevision, type OutlookSummary, type RevisionList, type RevisionSnapshot, type RiskArea, type RiskAreaInput, type SaveOutlookInput } from '../../shared/contracts/outlooks';
+import { areaGeometrySchema, boundedAreaGeometrySchema, hazardFlagSchema, revisionSnapshotSchema, type CreateOutlookInput, type Outlook, type OutlookListQuery, type AreaImportResult, type OutlookEvidence, type OutlookList, type OutlookRevision, type OutlookSummary, type RevisionList, type RevisionSnapshot, type RiskArea, type RiskAreaInput, type SaveOutlookInput } from '../../shared/contracts/outlooks';
 import { isEditableState } from '../../shared/workflow/transitions';
 import { outlookStatePhrases } from '../../shared/workflow/states';
-import { areaEvidence, soundingsInPeriod, type AreaEvidence, type EvidenceSounding } from '../../shared/evidence/evidence';
-import { checkSupport, defaultGuidanceThresholds, type SupportCheck } from '../../shared/evidence/support-check';
+import type { EvidenceSounding } from '../../shared/evidence/evidence';
+import { defaultGuidanceThresholds } from '../../shared/evidence/support-check';
 import type { GuidanceThresholds } from '../../shared/contracts/office';
-import { checkAreas, type AreaCheck } from '../../shared/geometry/area-checks';
+import { MAX_VERTICES_PER_AREA } from '../../shared/geometry/limits';
 import { validPeriod } from '../../shared/time/valid-period';
 import { appError, type AppError, type FieldIssue } from '../../shared/errors';
 import { err, ok, type Result } from '../../shared/result';
@@ -17,6 +17,8 @@ import type { Database, DatabaseOrTransaction } from '../db/client';
 import { auditEvents, outlookRevisions, outlooks, riskAreas, soundings, users } from '../db/schema';
 import { findOffice } from './office.service';
 import { keyFigures } from './soundings.service';
+import { runGeometryTask } from '../workers/geometry-pool';
+import type { AreaEvidenceReport } from '../workers/evidence-report';
 import type { SoundingAnalysis } from '../../shared/sounding';
 
 type OutlookRow = typeof outlooks.$inferSelect;
@@ -306,13 +308,7 @@ export async function getRevision(db: Database, revisionId: string): Promise<Res
   return ok({ id: r.id, outlookId: r.outlookId, revisionNumber: r.revisionNumber, snapshot, authorName: row.authorName, createdAt: r.createdAt.toISOString() });
 }
 
-export interface AreaEvidenceReport {
-  areaId: string;
-  levelKey: string;
-  evidence: AreaEvidence;
-  support: SupportCheck;
-  checks: AreaCheck[];
-}
+export type { AreaEvidenceReport } from '../workers/evidence-report';
 
 /** Loads soundings valid in a period as evidence points (key figures from the cached analysis). */
 export async function evidenceSoundings(db: DatabaseOrTransaction, validFrom: Date, validUntil: Date): Promise<EvidenceSounding[]> {
@@ -333,35 +329,17 @@ export async function evidenceSoundings(db: DatabaseOrTransaction, validFrom: Da
   }]));
 }
 
-/**
- * The evidence panel and support check of every area of an outlook, from the soundings valid in
- * its period (modified what-if soundings are left out: they are not observations or forecasts).
- */
-export function buildEvidenceReport(outlook: Pick<Outlook, 'areas' | 'validFrom' | 'validUntil'>, candidates: EvidenceSounding[], ladder: { key: string; label: string; colour: string; meaning: string }[], guidance: GuidanceThresholds, region: { west: number; south: number; east: number; north: number }, source?: 'observed' | 'model'): AreaEvidenceReport[] {
-  const pool = soundingsInPeriod(
-    candidates.filter((s) => !s.modified),
-    outlook.validFrom,
-    outlook.validUntil,
-    source,
-  );
-  const checks = checkAreas(
-    outlook.areas,
-    ladder.map((l) => l.key),
-    region,
-  );
-  return outlook.areas.map((area) => {
-    const evidence = areaEvidence(area.id, area.geometry, pool);
-    return { areaId: area.id, levelKey: area.levelKey, evidence, support: checkSupport(evidence, area.levelKey, ladder, guidance), checks: checks[area.id] ?? [] };
-  });
-}
-
+/** The evidence panel of every area of an outlook (see buildEvidenceReport), computed in the worker pool. */
 export async function getOutlookEvidence(db: Database, outlookId: string, source?: 'observed' | 'model'): Promise<Result<OutlookEvidence, AppError>> {
   const outlook = await loadOutlook(db, outlookId);
   if (!outlook) return err(notFound());
   const office = await requireOffice(db);
   const candidates = await evidenceSoundings(db, new Date(outlook.validFrom), new Date(outlook.validUntil));
   const guidance = Object.keys(office.guidanceThresholds).length ? office.guidanceThresholds : defaultGuidanceThresholds;
-  const areas = buildEvidenceReport(outlook, candidates, office.riskLadder, guidance, office.region, source);
+  // Geometry checks and point-in-area tests run in the worker pool, off the event loop.
+  const report = await runGeometryTask({ kind: 'evidence-report', input: { outlook, candidates, ladder: office.riskLadder, guidance: guidance as GuidanceThresholds, region: office.region, source } });
+  if (!report.ok) return report;
+  const areas = report.value;
   return ok({ areas, soundingCount: candidates.filter((s) => !s.modified && (!source || s.source === source)).length });
 }
 
@@ -429,7 +407,7 @@ export async function importAreasGeoJson(db: Database, document: unknown): Promi
   const areas: RiskAreaInput[] = [];
   features.forEach((raw, index) => {
     const feature = (typeof raw === 'object' && raw !== null ? raw : {}) as { geometry?: unknown; properties?: Record<string, unknown> | null };
-    const geometry = areaGeometrySchema.safeParse(withoutAltitude(feature.geometry));
+    const geometry = boundedAreaGeometrySchema(MAX_VERTICES_PER_AREA, 'This feature').safeParse(withoutAltitude(feature.geometry));
     if (!geometry.success) {
       issues.push({ path: `features.${index}.geometry`, message: `Feature ${index + 1}: ${geometry.error.issues[0]?.message ?? 'needs a Polygon or MultiPolygon geometry.'}` });
       return;

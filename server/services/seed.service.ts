@@ -14,6 +14,7 @@ import type { Result } from '../../shared/result';
 import { amendIssuance } from './issuances.service';
 import { createOutlook, getOutlook, saveOutlook } from './outlooks.service';
 import { transitionOutlook } from './workflow.service';
+import { processDistributionJobs } from './distribution.service';
 import { generateDemoSoundings } from '../seed/demo-soundings';
 import { seedSoundings } from './soundings.service';
 import { createUser } from './users.service';
@@ -119,6 +120,8 @@ async function seedDemoOutlooks(db: Database, config: Config, demoDay: Date): Pr
   let version = must(await transitionOutlook(db, config, forecaster, early.id, 'submit', { version: earlySaved.version }), 'submit').version;
   version = must(await transitionOutlook(db, config, lead, early.id, 'approve', { version }), 'approve').version;
   const published = must(await transitionOutlook(db, config, lead, early.id, 'publish', { version }), 'publish');
+  // Queue the demo subscriber's alert now, as the distribution worker would.
+  await processDistributionJobs(db, config);
 
   // 2. The current Day 1 draft: an amendment of that issuance.
   const amendment = must(await amendIssuance(db, forecaster, published.issuanceNumber ?? ''), 'amendment');

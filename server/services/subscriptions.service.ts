@@ -2,6 +2,7 @@ import { createHash, createHmac, randomBytes, timingSafeEqual } from 'node:crypt
 import { and, asc, eq, isNull, notInArray } from 'drizzle-orm';
 import type { AreaOfInterestInput, SubscriptionSettingsInput } from '../../shared/contracts/subscriptions';
 import type { AreaGeometry } from '../../shared/contracts/outlooks';
+import { countVertices, MAX_VERTICES_PER_SUBSCRIPTION, tooManyVerticesMessage } from '../../shared/geometry/limits';
 import { appError, type AppError } from '../../shared/errors';
 import { err, ok, type Result } from '../../shared/result';
 import type { Actor } from '../auth/require-role';
@@ -152,6 +153,12 @@ export async function addAreaOfInterest(db: Database, actor: Actor, input: AreaO
   if (current.value.areas.length >= 50) return err(appError('VALIDATION_FAILED', 'At most 50 areas of interest per subscription.'));
   let values: { name: string; kind: 'drawn' | 'county' | 'state'; fipsCode: string | null; geometry: AreaGeometry };
   if (input.kind === 'drawn') {
+    const drawnSoFar = current.value.areas.filter((a) => a.kind === 'drawn').reduce((sum, a) => sum + countVertices(a.geometry), 0);
+    const total = drawnSoFar + countVertices(input.geometry);
+    if (total > MAX_VERTICES_PER_SUBSCRIPTION) {
+      const message = tooManyVerticesMessage('Together your drawn areas', total, MAX_VERTICES_PER_SUBSCRIPTION);
+      return err(appError('VALIDATION_FAILED', message, { issues: [{ path: 'geometry', message }] }));
+    }
     values = { name: input.name, kind: 'drawn', fipsCode: null, geometry: input.geometry };
   } else {
     const place = allPlaces().get(input.fipsCode);

@@ -10,9 +10,10 @@ import type { Actor } from '../auth/require-role';
 import type { Database, Transaction } from '../db/client';
 import { auditEvents, issuanceCounters, issuances, outlooks, users } from '../db/schema';
 import type { Config } from '../config';
-import { queueIssuanceNotices } from './distribution.service';
+import { enqueueDistribution, notifyDistributionQueued } from './distribution.service';
 import { findOffice } from './office.service';
-import { buildEvidenceReport, evidenceSoundings, getOutlook, reviewEditorIds } from './outlooks.service';
+import { evidenceSoundings, getOutlook, reviewEditorIds } from './outlooks.service';
+import { runGeometryTask } from '../workers/geometry-pool';
 
 export interface PublishHooks {
   /** Test hook: runs inside the publish transaction right after the issuance row is written. */
@@ -38,7 +39,11 @@ export async function transitionOutlook(
   const rule = transitions[action];
   const office = await findOffice(db);
   if (!office) throw new Error('no office');
-  return db.transaction(async (tx) => {
+  // The frozen evidence is computed before the transaction, in the worker pool, from the version
+  // being published; the transaction refuses the publish if that version is no longer current.
+  const evidence = action === 'publish' ? await publishedEvidence(db, office, outlookId) : undefined;
+  if (evidence && !evidence.ok) return evidence;
+  const result = await db.transaction(async (tx): Promise<Result<TransitionResult, AppError>> => {
     const [current] = await tx.select().from(outlooks).where(eq(outlooks.id, outlookId));
     if (!current) return err(appError('NOT_FOUND', 'There is no outlook with that id.'));
     const verdict = checkTransition(action, {
@@ -52,7 +57,7 @@ export async function transitionOutlook(
     if (rule.commentRequired && !input.comment) {
       return err(appError('VALIDATION_FAILED', 'Say what needs changing: a comment is required to return an outlook.', { issues: [{ path: 'comment', message: 'A comment is required.' }] }));
     }
-    if (current.version !== input.version) {
+    if (current.version !== input.version || (evidence?.ok && evidence.value.version !== current.version)) {
       return err(appError('CONFLICT', 'The outlook changed since you opened it. Reload and look again before you act.', { details: { currentVersion: current.version } }));
     }
     const details: Record<string, unknown> = {};
@@ -70,13 +75,39 @@ export async function transitionOutlook(
     let issuanceNumber: string | undefined;
     let issuanceId: string | undefined;
     if (action === 'publish') {
-      const issued = await writeIssuance(tx, config, office, outlookId, actor, hooks);
+      const issued = await writeIssuance(tx, config, office, outlookId, actor, hooks, evidence?.ok ? evidence.value.evidence : []);
       issuanceNumber = issued.number;
       issuanceId = issued.id;
       details.issuanceNumber = issued.number;
     }
     await tx.insert(auditEvents).values({ officeId: office.id, outlookId, issuanceId, actorId: actor.userId, action, fromState: current.state, toState: rule.to, comment: input.comment ?? null, details });
     return ok({ outlookId, state: rule.to, version: updated.version, ...(issuanceNumber ? { issuanceNumber } : {}) });
+  });
+  // After commit: the distribution worker matches subscribers, draws the maps and queues mail.
+  if (result.ok && action === 'publish') notifyDistributionQueued();
+  return result;
+}
+
+type FrozenEvidence = IssuanceSnapshotInput['evidence'];
+
+/** The evidence frozen into an issuance: per area, sounding count, medians and support (worker pool). */
+async function publishedEvidence(db: Database, office: OfficeRow, outlookId: string): Promise<Result<{ version: number; evidence: FrozenEvidence }, AppError>> {
+  const outlook = await getOutlook(db, outlookId);
+  if (!outlook.ok) return outlook;
+  const o = outlook.value;
+  const guidance = Object.keys(office.guidanceThresholds).length ? office.guidanceThresholds : defaultGuidanceThresholds;
+  const candidates = await evidenceSoundings(db, new Date(o.validFrom), new Date(o.validUntil));
+  const report = await runGeometryTask({ kind: 'evidence-report', input: { outlook: o, candidates, ladder: office.riskLadder, guidance, region: office.region } });
+  if (!report.ok) return report;
+  return ok({
+    version: o.version,
+    evidence: report.value.map((r) => ({
+      areaId: r.areaId,
+      levelKey: r.levelKey,
+      count: r.evidence.count,
+      medians: Object.fromEntries(Object.entries(r.evidence.stats).map(([k, v]) => [k, v?.median ?? null])),
+      support: r.support,
+    })),
   });
 }
 
@@ -125,7 +156,7 @@ export async function nextIssuanceSequence(tx: Transaction, officeId: string, ye
 type OfficeRow = NonNullable<Awaited<ReturnType<typeof findOffice>>>;
 
 /** Writes the issuance: next number of the office's year, frozen snapshot with evidence and support. */
-async function writeIssuance(tx: Transaction, config: Config, office: OfficeRow, outlookId: string, actor: Actor, hooks: PublishHooks) {
+async function writeIssuance(tx: Transaction, _config: Config, office: OfficeRow, outlookId: string, actor: Actor, hooks: PublishHooks, evidence: FrozenEvidence) {
   const outlook = await getOutlook(tx as unknown as Database, outlookId);
   if (!outlook.ok) throw new Error('outlook vanished while publishing');
   const o = outlook.value;
@@ -141,15 +172,6 @@ async function writeIssuance(tx: Transaction, config: Config, office: OfficeRow,
     .orderBy(desc(auditEvents.createdAt))
     .limit(1);
   const [author] = o.createdBy ? await tx.select({ name: users.name }).from(users).where(eq(users.id, o.createdBy)) : [];
-  const guidance = Object.keys(office.guidanceThresholds).length ? office.guidanceThresholds : defaultGuidanceThresholds;
-  const candidates = await evidenceSoundings(tx, new Date(o.validFrom), new Date(o.validUntil));
-  const evidence = buildEvidenceReport(o, candidates, office.riskLadder, guidance, office.region).map((r) => ({
-    areaId: r.areaId,
-    levelKey: r.levelKey,
-    count: r.evidence.count,
-    medians: Object.fromEntries(Object.entries(r.evidence.stats).map(([k, v]) => [k, v?.median ?? null])),
-    support: r.support,
-  }));
   const snapshot: IssuanceSnapshotInput = {
     number,
     office: { name: office.name, timeZone: office.timeZone, region: office.region },
@@ -191,7 +213,7 @@ async function writeIssuance(tx: Transaction, config: Config, office: OfficeRow,
     await tx.update(issuances).set({ state: 'superseded', supersededById: row.id }).where(and(eq(issuances.id, o.amendsIssuanceId), eq(issuances.state, 'published')));
     await tx.insert(auditEvents).values({ officeId: office.id, issuanceId: o.amendsIssuanceId, actorId: actor.userId, action: 'supersede', fromState: 'published', toState: 'superseded', details: { supersededBy: number } });
   }
-  // Mail is queued in this same transaction (durable outbox); the worker sends after commit.
-  await queueIssuanceNotices(tx, config, office, { id: row.id, number, day: o.day, validFrom: o.validFrom, validUntil: o.validUntil, supersedesId: o.amendsIssuanceId, headline: o.headline, discussion: o.discussion, areas: o.areas });
+  // One durable job row in this same transaction; matching, maps and mail follow after commit.
+  await enqueueDistribution(tx, row.id);
   return { id: row.id, number };
 }

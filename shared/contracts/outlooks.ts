@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { calendarDateSchema, isoTimeSchema, versionSchema } from './primitives';
+import { countVertices, MAX_VERTICES_PER_AREA, MAX_VERTICES_PER_OUTLOOK, tooManyVerticesMessage } from '../geometry/limits';
 
 export const outlookDays = [1, 2, 3] as const;
 export const outlookStates = ['draft', 'in_review', 'returned', 'approved', 'published'] as const;
@@ -29,13 +30,20 @@ export const areaGeometrySchema = z.discriminatedUnion('type', [
   z.object({ type: z.literal('Polygon'), coordinates: z.array(ring).min(1, { message: 'A polygon needs an outer ring.' }) }),
   z.object({ type: z.literal('MultiPolygon'), coordinates: z.array(z.array(ring).min(1)).min(1, { message: 'A multipolygon needs at least one polygon.' }) }),
 ]);
+
+/** An area geometry within `limit` points (issue 11: unbounded outlines froze the server). */
+export const boundedAreaGeometrySchema = (limit: number, what: string) =>
+  areaGeometrySchema.superRefine((geometry, context) => {
+    const count = countVertices(geometry);
+    if (count > limit) context.addIssue({ code: 'custom', message: tooManyVerticesMessage(what, count, limit), path: ['coordinates'] });
+  });
 export type AreaGeometry = z.infer<typeof areaGeometrySchema>;
 
 export const riskAreaInputSchema = z.object({
   id: z.string().uuid().optional(),
   levelKey: z.string().min(1, { message: 'Choose a risk level.' }),
   hazards: z.array(hazardFlagSchema).max(4).default([]),
-  geometry: areaGeometrySchema,
+  geometry: boundedAreaGeometrySchema(MAX_VERTICES_PER_AREA, 'This area'),
   label: z.string().trim().max(80, { message: 'Keep the area label under 80 characters.' }).default(''),
 });
 export type RiskAreaInput = z.infer<typeof riskAreaInputSchema>;
@@ -62,7 +70,13 @@ export const saveOutlookInputSchema = z
     hazardNotes: z.partialRecord(z.enum(hazardKinds), z.string().max(2000, { message: 'Keep each hazard note under 2,000 characters.' })).default({}),
     validFrom: isoTime('Valid from'),
     validUntil: isoTime('Valid until'),
-    areas: z.array(riskAreaInputSchema).max(60, { message: 'At most 60 risk areas per outlook.' }),
+    areas: z
+      .array(riskAreaInputSchema)
+      .max(60, { message: 'At most 60 risk areas per outlook.' })
+      .superRefine((areas, context) => {
+        const count = areas.reduce((sum, area) => sum + countVertices(area.geometry), 0);
+        if (count > MAX_VERTICES_PER_OUTLOOK) context.addIssue({ code: 'custom', message: tooManyVerticesMessage('Together the risk areas', count, MAX_VERTICES_PER_OUTLOOK) });
+      }),
   })
   .refine((v) => new Date(v.validUntil) > new Date(v.validFrom), { message: 'The valid period must end after it starts.', path: ['validUntil'] })
   .superRefine((v, ctx) => {

@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { areaGeometrySchema, hazardKinds } from './outlooks';
+import { MAX_VERTICES_PER_AREA_OF_INTEREST } from '../geometry/limits';
+import { boundedAreaGeometrySchema, hazardKinds } from './outlooks';
 import { versionSchema } from './primitives';
 
 export const subscriptionSettingsInputSchema = z.object({
@@ -14,7 +15,7 @@ export const subscriptionSettingsInputSchema = z.object({
 export type SubscriptionSettingsInput = z.infer<typeof subscriptionSettingsInputSchema>;
 
 export const areaOfInterestInputSchema = z.discriminatedUnion('kind', [
-  z.object({ kind: z.literal('drawn'), name: z.string().trim().min(1, { message: 'Name the area.' }).max(80), geometry: areaGeometrySchema }),
+  z.object({ kind: z.literal('drawn'), name: z.string().trim().min(1, { message: 'Name the area.' }).max(80), geometry: boundedAreaGeometrySchema(MAX_VERTICES_PER_AREA_OF_INTEREST, 'This area') }),
   z.object({ kind: z.enum(['county', 'state']), fipsCode: z.string().regex(/^\d{2}(\d{3})?$/, { message: 'A FIPS code has 2 (state) or 5 (county) digits.' }) }),
 ]);
 export type AreaOfInterestInput = z.infer<typeof areaOfInterestInputSchema>;

@@ -1,7 +1,8 @@
-import { area, bboxPolygon, difference, featureCollection, intersect, kinks, polygon, multiPolygon, union, unkinkPolygon } from '@turf/turf';
+import { area, bboxPolygon, difference, featureCollection, intersect, polygon, multiPolygon, union, unkinkPolygon } from '@turf/turf';
 import type { Feature, MultiPolygon, Polygon } from 'geojson';
 import type { Region } from '../contracts/office';
 import type { AreaGeometry } from '../contracts/outlooks';
+import { ringsSelfIntersect } from './segment-crossings';
 
 /** Areas smaller than this are probably slivers left by editing (km²). */
 export const sliverAreaKm2 = 50;
@@ -31,9 +32,9 @@ function polygonsOf(geometry: AreaGeometry): Polygon[] {
   return geometry.type === 'Polygon' ? [geometry] : geometry.coordinates.map((coordinates) => ({ type: 'Polygon', coordinates }));
 }
 
-/** True when an edge of the outline crosses another edge (Turf kinks). */
+/** True when an edge of the outline crosses or touches another edge (spatial index, near-linear). */
 export function selfIntersects(geometry: AreaGeometry): boolean {
-  return polygonsOf(geometry).some((p) => kinks(polygon(p.coordinates)).features.length > 0);
+  return polygonsOf(geometry).some((p) => ringsSelfIntersect(p.coordinates));
 }
 
 /** Splits a self-intersecting outline into simple polygons at its crossings (the offered fix). */
@@ -68,6 +69,14 @@ export function areaOutsideKm2(geometry: AreaGeometry, container: AreaGeometry |
   return outside ? areaKm2(outside) : 0;
 }
 
+const areaKm2OrZero = (geometry: AreaGeometry | null) => (geometry ? areaKm2(geometry) : 0);
+
+/** True when every position of the geometry lies inside the region's box (one linear pass). */
+export function withinRegionBox(geometry: AreaGeometry, region: Region): boolean {
+  const rings = geometry.type === 'Polygon' ? geometry.coordinates : geometry.coordinates.flat();
+  return rings.every((ring) => ring.every(([x = 0, y = 0]) => x >= region.west && x <= region.east && y >= region.south && y <= region.north));
+}
+
 export interface CheckedArea {
   id: string;
   levelKey: string;
@@ -91,9 +100,9 @@ export function checkAreas(areas: readonly CheckedArea[], ladderKeys: readonly s
     if (kinked) {
       checks.push({ code: 'SELF_INTERSECTION', severity: 'error', message: 'The outline crosses itself. Split it at the crossing, or redraw the crossing edges.', fix: 'unkink' });
     } else {
-      const inside = clipToRegion(a.geometry, region);
       const total = areaKm2(a.geometry);
-      const within = inside ? areaKm2(inside) : 0;
+      // Most areas lie well inside the region: a linear bounding-box test skips the clip.
+      const within = withinRegionBox(a.geometry, region) ? total : areaKm2OrZero(clipToRegion(a.geometry, region));
       if (total - within > 1) {
         checks.push({
           code: 'OUTSIDE_REGION',

@@ -4,6 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { demoPassword } from '../../server/services/seed.service';
 import { processOutbox } from '../../server/services/outbox.service';
+import { processDistributionJobs } from '../../server/services/distribution.service';
 import { startBrowserJourney, type BrowserJourney } from './browser';
 
 let journey: BrowserJourney;
@@ -126,7 +127,9 @@ describe('browser journey: a subscriber’s drawn area gets the alert e-mail', (
       await send('post', `/api/outlooks/${created.id}/${action}`, { version: outlook.version });
     }
 
-    // The test app runs without the outbox worker: send the queue once, as the worker would.
+    // The test app runs without the background workers: distribute the issuance and send the
+    // queue once, as the distribution and outbox workers would.
+    await processDistributionJobs(journey.sd.ctx.db, journey.sd.ctx.config);
     const result = await processOutbox(journey.sd.ctx.db, journey.sd.ctx.mailer);
     expect(result.failed).toBe(0);
     expect(result.sent).toBeGreaterThanOrEqual(1);

@@ -6,3 +6,4 @@ export * from './issuances';
 export * from './subscriptions';
 export * from './mail';
 export * from './security';
+export * from './distribution';

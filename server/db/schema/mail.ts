@@ -1,5 +1,17 @@
 import { index, integer, jsonb, pgEnum, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 
+/**
+ * An attachment of a queued message: its bytes in base64, or (for alert maps shared by many
+ * messages) the id of a cached issuance image, read when the message is sent.
+ */
+export interface OutboxAttachment {
+  filename: string;
+  cid: string;
+  contentType: string;
+  contentBase64: string;
+  issuanceImageId?: string;
+}
+
 export const outboxStatusEnum = pgEnum('outbox_status', ['queued', 'sending', 'sent', 'failed']);
 
 /**
@@ -16,7 +28,7 @@ export const mailOutbox = pgTable(
     html: text().notNull(),
     text: text().notNull(),
     headers: jsonb().$type<Record<string, string>>().notNull().default({}),
-    attachments: jsonb().$type<{ filename: string; cid: string; contentBase64: string; contentType: string }[]>().notNull().default([]),
+    attachments: jsonb().$type<OutboxAttachment[]>().notNull().default([]),
     status: outboxStatusEnum().notNull().default('queued'),
     attempts: integer().notNull().default(0),
     nextAttemptAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
