@@ -1,3 +1,4 @@
+import { capRoutes } from './cap.routes';
 import { healthRoutes } from './health.routes';
 import { issuancesRoutes } from './issuances.routes';
 import { mailMessagesRoutes } from './mail-messages.routes';
@@ -11,4 +12,4 @@ import { usersRoutes } from './users.routes';
 import { workflowRoutes } from './workflow.routes';
 
 /** Every API route of the app (better-auth's own routes under /api/auth are separate). */
-export const apiRoutes: RouteDefinition[] = [...healthRoutes, ...meRoutes, ...officeRoutes, ...usersRoutes, ...mailMessagesRoutes, ...soundingsRoutes, ...outlooksRoutes, ...workflowRoutes, ...issuancesRoutes, ...subscriptionsRoutes];
+export const apiRoutes: RouteDefinition[] = [...healthRoutes, ...meRoutes, ...officeRoutes, ...usersRoutes, ...mailMessagesRoutes, ...soundingsRoutes, ...outlooksRoutes, ...workflowRoutes, ...issuancesRoutes, ...subscriptionsRoutes, ...capRoutes];

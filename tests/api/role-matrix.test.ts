@@ -83,6 +83,9 @@ const matrix: MatrixRow[] = [
   { method: 'get', route: '/api/unsubscribe', url: '/api/unsubscribe?token=not-a-real-token', expect: anyone(200) },
   { method: 'post', route: '/api/unsubscribe', url: '/api/unsubscribe?token=not-a-real-token', body: {}, expect: anyone(400) },
   { method: 'get', route: '/api/mail-outbox', url: '/api/mail-outbox', expect: staffOnly(200) },
+  { method: 'get', route: '/api/public/cap', url: '/api/public/cap', expect: anyone(200) },
+  { method: 'get', route: '/api/public/cap/:issuanceNumber', url: '/api/public/cap/1999-0001', expect: anyone(404) },
+  { method: 'get', route: '/api/public/cap/:issuanceNumber/withdrawal', url: '/api/public/cap/1999-0001/withdrawal', expect: anyone(404) },
   { method: 'post', route: '/api/mail-outbox/:messageId/resend', url: `/api/mail-outbox/${missingId}/resend`, body: {}, expect: staffOnly(409) },
 ];
 
