@@ -4,6 +4,7 @@ import { issuancesRoutes } from './issuances.routes';
 import { mailMessagesRoutes } from './mail-messages.routes';
 import { meRoutes } from './me.routes';
 import { officeRoutes } from './office.routes';
+import { ogcRoutes } from './ogc.routes';
 import { outlooksRoutes } from './outlooks.routes';
 import type { RouteDefinition } from './route-definition';
 import { soundingsRoutes } from './soundings.routes';
@@ -12,4 +13,4 @@ import { usersRoutes } from './users.routes';
 import { workflowRoutes } from './workflow.routes';
 
 /** Every API route of the app (better-auth's own routes under /api/auth are separate). */
-export const apiRoutes: RouteDefinition[] = [...healthRoutes, ...meRoutes, ...officeRoutes, ...usersRoutes, ...mailMessagesRoutes, ...soundingsRoutes, ...outlooksRoutes, ...workflowRoutes, ...issuancesRoutes, ...subscriptionsRoutes, ...capRoutes];
+export const apiRoutes: RouteDefinition[] = [...healthRoutes, ...meRoutes, ...officeRoutes, ...usersRoutes, ...mailMessagesRoutes, ...soundingsRoutes, ...outlooksRoutes, ...workflowRoutes, ...issuancesRoutes, ...subscriptionsRoutes, ...capRoutes, ...ogcRoutes];
