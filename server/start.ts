@@ -11,6 +11,7 @@ import { createMailer } from './mail/send-mail';
 import { sendPasswordResetMail, sendVerificationMail, storeCaughtMail } from './services/mail.service';
 import { ensureOffice, seedDemo } from './services/seed.service';
 import { recoverOutbox, startOutboxWorker } from './services/outbox.service';
+import { startWebhookWorker } from './services/webhooks.service';
 
 export interface StartOptions {
   clientMode: ClientMode;
@@ -47,6 +48,7 @@ export async function startStormdraft(config: Config, options: StartOptions): Pr
   else await ensureOffice(db);
   await recoverOutbox(db);
   const stopWorker = config.outboxIntervalMs > 0 ? startOutboxWorker(db, mailer, config.outboxIntervalMs, (error) => logger.error({ err: error }, 'outbox worker')) : async () => {};
+  const stopWebhooks = config.outboxIntervalMs > 0 ? startWebhookWorker(db, config.outboxIntervalMs, (error) => logger.error({ err: error }, 'webhook worker')) : async () => {};
   const app = await createApp(ctx, options.clientMode);
   return {
     app,
@@ -55,6 +57,7 @@ export async function startStormdraft(config: Config, options: StartOptions): Pr
     dump: database.dump,
     async close() {
       await stopWorker();
+      await stopWebhooks();
       mailer.close();
       await catcher?.close();
       await database.close();

@@ -10,6 +10,7 @@ import { auditEvents, issuances, outlookRevisions, outlooks, riskAreas } from '.
 import type { Config } from '../config';
 import { queueWithdrawalNotices } from './distribution.service';
 import { findOffice } from './office.service';
+import { queueWebhookEvents } from './webhooks.service';
 import type { RiskArea } from '../../shared/contracts/outlooks';
 import type { Region, RiskLevel } from '../../shared/contracts/office';
 import { buildAtomFeed } from '../exports/atom';
@@ -145,6 +146,7 @@ export async function withdrawIssuance(db: Database, config: Config, actor: Acto
     await tx.insert(auditEvents).values({ officeId: office.id, issuanceId: row.id, outlookId: row.outlookId, actorId: actor.userId, action: 'withdraw', fromState: 'published', toState: 'withdrawn', comment: reason });
     const s = row.snapshot as { headline?: string; discussion?: string; areas?: RiskArea[] };
     await queueWithdrawalNotices(tx, config, office, { id: row.id, number: row.number, day: row.day, validFrom: row.validFrom.toISOString(), validUntil: row.validUntil.toISOString(), supersedesId: row.supersedesId, headline: s.headline ?? '', discussion: s.discussion ?? '', areas: s.areas ?? [] }, reason);
+    await queueWebhookEvents(tx, config, 'issuance.withdrawn', row.id);
     return ok(await toView(tx, row));
   });
 }

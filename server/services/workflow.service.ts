@@ -11,6 +11,7 @@ import { auditEvents, issuances, outlooks, users } from '../db/schema';
 import type { Config } from '../config';
 import { queueIssuanceNotices } from './distribution.service';
 import { findOffice } from './office.service';
+import { queueWebhookEvents } from './webhooks.service';
 import { buildEvidenceReport, evidenceSoundings, getOutlook } from './outlooks.service';
 
 interface TransitionRule {
@@ -172,5 +173,6 @@ async function writeIssuance(tx: Transaction, config: Config, office: OfficeRow,
   }
   // Mail is queued in this same transaction (durable outbox); the worker sends after commit.
   await queueIssuanceNotices(tx, config, office, { id: row.id, number, day: o.day, validFrom: o.validFrom, validUntil: o.validUntil, supersedesId: o.amendsIssuanceId, headline: o.headline, discussion: o.discussion, areas: o.areas });
+  await queueWebhookEvents(tx, config, o.amendsIssuanceId ? 'issuance.amended' : 'issuance.published', row.id);
   return { id: row.id, number };
 }

@@ -38,6 +38,7 @@ const admins = ['admin'] as const satisfies readonly Role[];
 const soundingReaders = ['forecaster', 'lead', 'admin'] as const satisfies readonly Role[];
 const outlookReaders = ['forecaster', 'lead', 'admin'] as const satisfies readonly Role[];
 const subscriberReaders = ['lead', 'admin'] as const satisfies readonly Role[];
+const webhookManagers = ['subscriber', 'admin'] as const satisfies readonly Role[];
 
 /** Every page, lazy-loaded so the public bulletin never downloads staff pages. */
 export function createRoutes(queryClient: QueryClient): RouteObject[] {
@@ -208,6 +209,18 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
                   lazy: async () => {
                     const page = await import('../features/subscriptions/routes/my-alerts');
                     return { Component: page.MyAlertsPage, loader: loaderForRoles(queryClient, subscribers, page.myAlertsLoader(queryClient)) };
+                  },
+                },
+              ],
+            },
+            {
+              element: <RoleGate roles={webhookManagers} />,
+              children: [
+                {
+                  path: 'webhooks',
+                  lazy: async () => {
+                    const page = await import('../features/webhooks/routes/webhooks');
+                    return { Component: page.WebhooksPage, loader: loaderForRoles(queryClient, webhookManagers, page.webhooksLoader(queryClient)) };
                   },
                 },
               ],
