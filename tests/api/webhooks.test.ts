@@ -4,8 +4,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Webhook } from 'standardwebhooks';
 import type TestAgent from 'supertest/lib/agent';
 import type { Stormdraft } from '../../server/start';
-import { processWebhookDeliveries, queueWebhookEvents, webhookRetryDelayMs } from '../../server/services/webhooks.service';
-import { issuances } from '../../server/db/schema';
+import { processWebhookDeliveries, queueWebhookEvents, webhookLeaseMs, webhookRetryDelayMs } from '../../server/services/webhooks.service';
+import { issuances, webhookDeliveries } from '../../server/db/schema';
 import { eq } from 'drizzle-orm';
 import { agentFor, signedInAgent, startTestApp } from './helpers/test-app';
 import { amendAndPublish, areaAround, publishOutlook } from './open-standards-helpers';
@@ -182,6 +182,29 @@ describe('signed deliveries', () => {
     await sd.ctx.db.transaction((tx) => queueWebhookEvents(tx, sd.ctx.config, 'issuance.published', row.id));
     const log = (await subscriber.get(`/api/webhook-endpoints/${endpointId}/deliveries`)).body.deliveries;
     expect(log.filter((d: { eventType: string; issuanceNumber: string }) => d.eventType === 'issuance.published' && d.issuanceNumber === number)).toHaveLength(1);
+  });
+});
+
+describe('claiming with a lease', () => {
+  it('When two workers run at once, then the event is sent once', async () => {
+    receiver.received = [];
+    receiver.answer = () => 204;
+    await publishOutlook(forecaster, lead, { day: 2, issuanceTime: new Date().toISOString(), headline: 'Two workers', areas: [{ levelKey: 'level1', geometry: areaAround(-94, 39) }] });
+    const [a, b] = await Promise.all([deliver(), deliver()]);
+    expect((a?.delivered ?? 0) + (b?.delivered ?? 0)).toBe(1);
+    expect(receiver.received).toHaveLength(1);
+  });
+
+  it('When a worker died holding a delivery, then the row waits for its lease to run out and is then delivered once', async () => {
+    receiver.received = [];
+    await publishOutlook(forecaster, lead, { day: 2, issuanceTime: new Date().toISOString(), headline: 'Crashed worker', areas: [{ levelKey: 'level1', geometry: areaAround(-93, 39) }] });
+    // Simulate a worker that claimed the row and crashed before finishing: status delivering, lease 60 s ahead.
+    const leaseUntil = new Date(Date.now() + clockOffsetMs + webhookLeaseMs);
+    await sd.ctx.db.update(webhookDeliveries).set({ status: 'delivering', leaseUntil }).where(eq(webhookDeliveries.status, 'queued'));
+    expect(await deliver()).toEqual({ delivered: 0, failed: 0 });
+    expect(receiver.received).toHaveLength(0);
+    expect(await deliver(webhookLeaseMs + 1000)).toEqual({ delivered: 1, failed: 0 });
+    expect(receiver.received).toHaveLength(1);
   });
 });
 
