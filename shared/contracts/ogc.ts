@@ -87,8 +87,12 @@ const unknownParameter = (accepted: string) => ({
   error: (issue: { code?: string; keys?: string[] }) => (issue.code === 'unrecognized_keys' ? `Unknown query parameter ${(issue.keys ?? []).join(', ')}: ${accepted}` : undefined),
 });
 
+/** `f`: the encoding; only JSON (GeoJSON for items) is offered. Clients that always send f=json are served. */
+const formatSchema = z.enum(['json'], { message: 'Only JSON is offered here: leave f out or use f=json.' }).optional();
+
 export const ogcItemsQuerySchema = z.strictObject(
   {
+    f: formatSchema,
     limit: integerText('limit', 1)
       .transform((n) => Math.min(n, ogcMaxLimit))
       .optional(),
@@ -96,9 +100,9 @@ export const ogcItemsQuerySchema = z.strictObject(
     bbox: bboxSchema.optional(),
     datetime: datetimeSchema.optional(),
   },
-  unknownParameter('this collection accepts limit, offset, bbox and datetime.'),
+  unknownParameter('this collection accepts limit, offset, bbox, datetime and f.'),
 );
 export type OgcItemsQuery = z.infer<typeof ogcItemsQuerySchema>;
 
 /** Pages that take no parameters still refuse unknown ones. */
-export const ogcNoQuerySchema = z.strictObject({}, unknownParameter('this resource takes no parameters.'));
+export const ogcNoQuerySchema = z.strictObject({ f: formatSchema }, unknownParameter('this resource takes only f=json.'));

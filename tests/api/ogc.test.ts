@@ -210,6 +210,9 @@ describe('items (/req/core/fc-response, /req/geojson/content)', () => {
     expect(res.status).toBe(400);
     expect(res.body.error.message).toMatch(/filter/);
     expect((await anonymous.get(`${root}/conformance?f=html`)).status).toBe(400);
+    // f=json (sent by some clients) is declared and served.
+    expect((await anonymous.get(`${root}/conformance?f=json`)).status).toBe(200);
+    expect((await anonymous.get(`${root}/collections/risk-areas/items?f=json&limit=1`)).status).toBe(200);
   });
 
   it('When the issuances collection is read, then each issuance is one feature with its state and in-force flag', async () => {
