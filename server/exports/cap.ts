@@ -138,7 +138,8 @@ export function buildCapAlert(input: CapIssuanceInput): string {
     info.ele('event').txt(`Severe-thunderstorm outlook: ${group.label}`);
     info.ele('responseType').txt(cancelled ? 'AllClear' : group.key !== null && capSeverity(group.key, input.ladder) !== 'Minor' ? 'Prepare' : 'Monitor');
     info.ele('urgency').txt(cancelled ? 'Past' : capUrgency(input.validFrom, input.validUntil, input.sent));
-    info.ele('severity').txt(cancelled || group.key === null ? (cancelled ? 'Unknown' : 'Minor') : capSeverity(group.key, input.ladder));
+    const severity: CapSeverity = cancelled ? 'Unknown' : group.key === null ? 'Minor' : capSeverity(group.key, input.ladder);
+    info.ele('severity').txt(severity);
     info.ele('certainty').txt(cancelled ? 'Unknown' : capCertainty(input.day));
     info.ele('effective').txt(capDateTime(input.sent));
     info.ele('onset').txt(capDateTime(input.validFrom));
