@@ -3,10 +3,11 @@ import { idParamSchema } from '../../shared/contracts/common';
 import { createWebhookEndpointInputSchema } from '../../shared/contracts/webhooks';
 import { access, actorOf } from '../auth/require-role';
 import { parseInput, sendResult } from '../middleware/error-handler';
-import { deleteWebhookEndpoint, listWebhookDeliveries, listWebhookEndpoints, registerWebhookEndpoint } from '../services/webhooks.service';
+import { deleteWebhookEndpoint, listWebhookDeliveries, listWebhookEndpoints, registerWebhookEndpoint, retryWebhookDelivery } from '../services/webhooks.service';
 import { route } from './route-definition';
 
 const endpointParamsSchema = z.object({ endpointId: idParamSchema });
+const deliveryParamsSchema = z.object({ deliveryId: idParamSchema });
 const managers = access.roles('subscriber', 'admin');
 
 /** Webhook endpoints: subscribers manage their own; admins manage endpoints for agencies and see all. */
@@ -45,6 +46,16 @@ export const webhooksRoutes = [
       const params = parseInput(endpointParamsSchema, req.params, 'address');
       if (!params.ok) return sendResult(res, params);
       sendResult(res, await listWebhookDeliveries(ctx.db, actorOf(res), params.value.endpointId));
+    },
+  }),
+  route({
+    method: 'post',
+    path: '/api/webhook-deliveries/:deliveryId/retry',
+    access: managers,
+    handler: async (ctx, req, res) => {
+      const params = parseInput(deliveryParamsSchema, req.params, 'address');
+      if (!params.ok) return sendResult(res, params);
+      sendResult(res, await retryWebhookDelivery(ctx.db, actorOf(res), params.value.deliveryId));
     },
   }),
 ];

@@ -145,6 +145,20 @@ export async function listWebhookDeliveries(db: Database, actor: Actor, endpoint
   });
 }
 
+/** Puts a failed delivery back in the queue (same webhook-id and body) for the next worker pass. */
+export async function retryWebhookDelivery(db: Database, actor: Actor, deliveryId: string): Promise<Result<{ id: string; status: string }, AppError>> {
+  const [delivery] = await db.select({ endpointId: webhookDeliveries.endpointId }).from(webhookDeliveries).where(eq(webhookDeliveries.id, deliveryId));
+  const endpoint = delivery ? await manageable(db, actor, delivery.endpointId) : undefined;
+  if (!endpoint?.ok) return err(appError('NOT_FOUND', 'There is no such delivery among your endpoints.'));
+  const [row] = await db
+    .update(webhookDeliveries)
+    .set({ status: 'queued', attempts: 0, nextAttemptAt: new Date(), leaseUntil: null })
+    .where(and(eq(webhookDeliveries.id, deliveryId), eq(webhookDeliveries.status, 'failed')))
+    .returning();
+  if (!row) return err(appError('CONFLICT', 'Only a failed delivery can be retried; this one is queued, being delivered or delivered.'));
+  return ok({ id: row.id, status: row.status });
+}
+
 /** A short, secret-free reason for a failed attempt (network errors carry their code). */
 function failureReason(error: unknown): string {
   if (error instanceof Error) {

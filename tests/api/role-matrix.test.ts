@@ -88,6 +88,7 @@ const matrix: MatrixRow[] = [
   { method: 'post', route: '/api/webhook-endpoints', url: '/api/webhook-endpoints', body: {}, expect: webhookManagers(400) },
   { method: 'delete', route: '/api/webhook-endpoints/:endpointId', url: `/api/webhook-endpoints/${missingId}`, expect: webhookManagers(404) },
   { method: 'get', route: '/api/webhook-endpoints/:endpointId/deliveries', url: `/api/webhook-endpoints/${missingId}/deliveries`, expect: webhookManagers(404) },
+  { method: 'post', route: '/api/webhook-deliveries/:deliveryId/retry', url: `/api/webhook-deliveries/${missingId}/retry`, body: {}, expect: webhookManagers(404) },
   { method: 'get', route: '/api/ogc', url: '/api/ogc', expect: anyone(200) },
   { method: 'get', route: '/api/ogc/api', url: '/api/ogc/api', expect: anyone(200) },
   { method: 'get', route: '/api/ogc/conformance', url: '/api/ogc/conformance', expect: anyone(200) },

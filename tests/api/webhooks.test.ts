@@ -4,7 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Webhook } from 'standardwebhooks';
 import type TestAgent from 'supertest/lib/agent';
 import type { Stormdraft } from '../../server/start';
-import { processWebhookDeliveries, queueWebhookEvents, webhookLeaseMs, webhookRetryDelayMs } from '../../server/services/webhooks.service';
+import { processWebhookDeliveries, queueWebhookEvents, webhookLeaseMs, webhookMaxAttempts, webhookRetryDelayMs } from '../../server/services/webhooks.service';
 import { issuances, webhookDeliveries } from '../../server/db/schema';
 import { eq } from 'drizzle-orm';
 import { agentFor, signedInAgent, startTestApp } from './helpers/test-app';
@@ -205,6 +205,27 @@ describe('claiming with a lease', () => {
     expect(receiver.received).toHaveLength(0);
     expect(await deliver(webhookLeaseMs + 1000)).toEqual({ delivered: 1, failed: 0 });
     expect(receiver.received).toHaveLength(1);
+  });
+});
+
+describe('giving up and retrying by hand', () => {
+  it('When every attempt fails, then the delivery is marked failed after the last one; a retry from the log queues it again and it arrives once', async () => {
+    receiver.received = [];
+    receiver.answer = () => 503;
+    await publishOutlook(forecaster, lead, { day: 2, issuanceTime: new Date().toISOString(), headline: 'Receiver sick', areas: [{ levelKey: 'level1', geometry: areaAround(-92, 39) }] });
+    for (let attempt = 1; attempt <= webhookMaxAttempts; attempt++) expect(await deliver(attempt === 1 ? 0 : webhookRetryDelayMs(attempt - 1))).toEqual({ delivered: 0, failed: 1 });
+    let log = (await subscriber.get(`/api/webhook-endpoints/${endpointId}/deliveries`)).body.deliveries;
+    expect(log[0]).toMatchObject({ status: 'failed', attempts: webhookMaxAttempts, lastStatusCode: 503 });
+    expect(await deliver(86_400_000)).toEqual({ delivered: 0, failed: 0 });
+
+    expect((await forecaster.post(`/api/webhook-deliveries/${log[0].id}/retry`).send({})).status).toBe(403);
+    receiver.answer = () => 204;
+    expect((await subscriber.post(`/api/webhook-deliveries/${log[0].id}/retry`).send({})).status).toBe(200);
+    expect((await subscriber.post(`/api/webhook-deliveries/${log[0].id}/retry`).send({})).status).toBe(409);
+    expect(await deliver()).toEqual({ delivered: 1, failed: 0 });
+    log = (await subscriber.get(`/api/webhook-endpoints/${endpointId}/deliveries`)).body.deliveries;
+    expect(log[0]).toMatchObject({ status: 'delivered', attempts: 1 });
+    expect(receiver.received.filter((r) => r.headers['webhook-id'] === log[0].messageId)).toHaveLength(webhookMaxAttempts + 1);
   });
 });
 

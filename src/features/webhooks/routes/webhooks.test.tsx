@@ -1,5 +1,5 @@
 // @vitest-environment jsdom
-import { cleanup, fireEvent, screen, within } from '@testing-library/react';
+import { cleanup, fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { fakeServer, renderApp } from '../../../test/render-app';
 
@@ -55,5 +55,26 @@ describe('webhooks page', () => {
     fireEvent.click(screen.getByRole('button', { name: 'Register endpoint' }));
     expect(await screen.findByText(/Enter a full address/)).not.toBeNull();
     expect(server.requests.some((r) => r.method === 'POST')).toBe(false);
+  });
+
+  it('when a delivery failed, its Retry button asks the server to queue it again', async () => {
+    const failed = { id: '22222222-2222-4222-8222-222222222222', eventType: 'issuance.amended', issuanceNumber: '2027-0143', messageId: 'msg_def', status: 'failed', attempts: 8, lastStatusCode: 503, lastError: 'The endpoint answered HTTP 503.', nextAttemptAt: '2027-04-18T13:00:00.000Z', deliveredAt: null, createdAt: '2027-04-18T12:00:00.000Z' };
+    const server = fakeServer({
+      role: 'subscriber',
+      routes: [
+        ({ method, path }) => {
+          if (path === '/api/webhook-endpoints' && method === 'GET') return { status: 200, body: { endpoints: [endpoint] } };
+          if (path === `/api/webhook-endpoints/${endpoint.id}/deliveries`) return { status: 200, body: { deliveries: [failed] } };
+          if (path === `/api/webhook-deliveries/${failed.id}/retry` && method === 'POST') return { status: 200, body: { id: failed.id, status: 'queued' } };
+          return undefined;
+        },
+      ],
+    });
+    renderApp('/webhooks');
+    fireEvent.click(await screen.findByRole('button', { name: 'Delivery log' }));
+    const log = await screen.findByRole('table', { name: 'Delivery log' });
+    expect(within(log).getByText('The endpoint answered HTTP 503.')).not.toBeNull();
+    fireEvent.click(within(log).getByRole('button', { name: 'Retry' }));
+    await waitFor(() => expect(server.requests.some((r) => r.method === 'POST' && r.path === `/api/webhook-deliveries/${failed.id}/retry`)).toBe(true));
   });
 });
