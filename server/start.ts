@@ -13,6 +13,7 @@ import { sendPasswordResetMail, sendVerificationMail, storeCaughtMail } from './
 import { ensureOffice, seedDemo } from './services/seed.service';
 import { startOutboxWorker } from './services/outbox.service';
 import { startDistributionWorker } from './services/distribution.service';
+import { startWebhookWorker } from './services/webhooks.service';
 import { closeGeometryPool } from './workers/geometry-pool';
 
 export interface StartOptions {
@@ -53,6 +54,7 @@ export async function startStormdraft(config: Config, options: StartOptions): Pr
   const stopWorker = config.outboxIntervalMs > 0 ? startOutboxWorker(db, mailer, config.outboxIntervalMs, (error) => logger.error({ err: error }, 'outbox worker')) : async () => {};
   // Publishing leaves a distribution job; this worker turns it into mail (tests drive it themselves).
   const stopDistribution = config.outboxIntervalMs > 0 ? startDistributionWorker(db, config, config.outboxIntervalMs, (error) => logger.error({ err: error }, 'distribution worker')) : async () => {};
+  const stopWebhooks = config.outboxIntervalMs > 0 ? startWebhookWorker(db, config.outboxIntervalMs, (error) => logger.error({ err: error }, 'webhook worker')) : async () => {};
   const app = await createApp(ctx, options.clientMode);
   return {
     app,
@@ -63,6 +65,7 @@ export async function startStormdraft(config: Config, options: StartOptions): Pr
       await stopDistribution();
       await stopWorker();
       await closeGeometryPool();
+      await stopWebhooks();
       mailer.close();
       await catcher?.close();
       await database.close();

@@ -15,6 +15,7 @@ import { writeRevision } from './outlooks.service';
 import { publicCaution } from '../../shared/workflow/caution';
 import { levelLabel } from '../../shared/workflow/levels';
 import { issuanceSnapshotSchema, type Archive, type Bulletin, type Issuance, type IssuanceSnapshot } from '../../shared/contracts/issuances';
+import { queueWebhookEvents } from './webhooks.service';
 import type { RiskArea } from '../../shared/contracts/outlooks';
 import type { Region, RiskLevel } from '../../shared/contracts/office';
 import { buildAtomFeed } from '../exports/atom';
@@ -139,6 +140,7 @@ export async function withdrawIssuance(db: Database, config: Config, actor: Acto
     await tx.insert(auditEvents).values({ officeId: office.id, issuanceId: row.id, outlookId: row.outlookId, actorId: actor.userId, action: 'withdraw', fromState: 'published', toState: 'withdrawn', comment: reason });
     const s = snapshotOfRow(row);
     await queueWithdrawalNotices(tx, config, office, { id: row.id, number: row.number, day: row.day, validFrom: row.validFrom.toISOString(), validUntil: row.validUntil.toISOString(), supersedesId: row.supersedesId, headline: s.headline, discussion: s.discussion, areas: s.areas.map((a, i) => ({ ...a, sortOrder: a.sortOrder ?? i })) }, reason);
+    await queueWebhookEvents(tx, config, 'issuance.withdrawn', row.id);
     return ok(await toView(tx, row));
   });
 }

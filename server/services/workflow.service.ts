@@ -14,6 +14,7 @@ import { enqueueDistribution, notifyDistributionQueued } from './distribution.se
 import { findOffice } from './office.service';
 import { evidenceSoundings, getOutlook, reviewEditorIds } from './outlooks.service';
 import { runGeometryTask } from '../workers/geometry-pool';
+import { queueWebhookEvents } from './webhooks.service';
 
 export interface PublishHooks {
   /** Test hook: runs inside the publish transaction right after the issuance row is written. */
@@ -156,7 +157,7 @@ export async function nextIssuanceSequence(tx: Transaction, officeId: string, ye
 type OfficeRow = NonNullable<Awaited<ReturnType<typeof findOffice>>>;
 
 /** Writes the issuance: next number of the office's year, frozen snapshot with evidence and support. */
-async function writeIssuance(tx: Transaction, _config: Config, office: OfficeRow, outlookId: string, actor: Actor, hooks: PublishHooks, evidence: FrozenEvidence) {
+async function writeIssuance(tx: Transaction, config: Config, office: OfficeRow, outlookId: string, actor: Actor, hooks: PublishHooks, evidence: FrozenEvidence) {
   const outlook = await getOutlook(tx as unknown as Database, outlookId);
   if (!outlook.ok) throw new Error('outlook vanished while publishing');
   const o = outlook.value;
@@ -215,5 +216,6 @@ async function writeIssuance(tx: Transaction, _config: Config, office: OfficeRow
   }
   // One durable job row in this same transaction; matching, maps and mail follow after commit.
   await enqueueDistribution(tx, row.id);
+  await queueWebhookEvents(tx, config, o.amendsIssuanceId ? 'issuance.amended' : 'issuance.published', row.id);
   return { id: row.id, number };
 }

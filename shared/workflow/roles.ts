@@ -23,6 +23,9 @@ export const subscriberOverseerRoles = ['lead', 'admin'] as const satisfies read
 /** Users, office settings, mail catcher and outbox. */
 export const adminRoles = ['admin'] as const satisfies readonly Role[];
 
+/** Register webhook endpoints: subscribers for their own systems, admins for agencies. */
+export const webhookManagerRoles = ['subscriber', 'admin'] as const satisfies readonly Role[];
+
 /** Manage their own areas of interest and alert thresholds. */
 export const subscriberRoles = ['subscriber'] as const satisfies readonly Role[];
 

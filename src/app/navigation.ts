@@ -1,6 +1,6 @@
 import type { Role } from '../../shared/contracts/common';
 
-export type NavigationIcon = 'desk' | 'soundings' | 'review' | 'alerts' | 'users' | 'settings' | 'mail' | 'bulletin' | 'account';
+export type NavigationIcon = 'desk' | 'soundings' | 'review' | 'alerts' | 'users' | 'settings' | 'mail' | 'bulletin' | 'account' | 'webhooks';
 
 export interface NavigationItem {
   label: string;
@@ -19,6 +19,7 @@ const subscribers: NavigationItem = { label: 'Subscribers', to: '/subscribers', 
 const outbox: NavigationItem = { label: 'Outbox', to: '/admin/outbox', icon: 'mail' };
 const bulletin: NavigationItem = { label: 'Public bulletin', to: '/bulletin', icon: 'bulletin' };
 const account: NavigationItem = { label: 'Account', to: '/account', icon: 'account' };
+const webhooks: NavigationItem = { label: 'Webhooks', to: '/webhooks', icon: 'webhooks' };
 
 /** The left navigation for a role, home first. Route guards use the same roles (router.tsx). */
 export function navigationFor(role: Role): NavigationItem[] {
@@ -28,8 +29,8 @@ export function navigationFor(role: Role): NavigationItem[] {
     case 'lead':
       return [review, desk, soundings, subscribers, bulletin, account];
     case 'subscriber':
-      return [alerts, bulletin, account];
+      return [alerts, webhooks, bulletin, account];
     case 'admin':
-      return [users, settings, subscribers, outbox, mail, soundings, bulletin, account];
+      return [users, settings, subscribers, outbox, webhooks, mail, soundings, bulletin, account];
   }
 }

@@ -4,7 +4,7 @@ import { Loading } from '../components/ui/loading';
 import { meQueryOptions } from '../hooks/use-me';
 import { officeQueryOptions } from '../hooks/use-office';
 import type { Role } from '../../shared/contracts/common';
-import { adminRoles, authoringRoles, officeReaderRoles, hasRole, reviewingRoles, subscriberOverseerRoles, subscriberRoles } from '../../shared/workflow/roles';
+import { adminRoles, authoringRoles, officeReaderRoles, hasRole, reviewingRoles, subscriberOverseerRoles, subscriberRoles, webhookManagerRoles } from '../../shared/workflow/roles';
 import { homePathFor } from '../utils/roles';
 import { NotFoundPage } from './not-found';
 import { RoleGate } from './layouts/role-gate';
@@ -202,6 +202,18 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
                   lazy: async () => {
                     const page = await import('../features/subscriptions/routes/my-alerts');
                     return { Component: page.MyAlertsPage, loader: loaderForRoles(queryClient, subscriberRoles, page.myAlertsLoader(queryClient)) };
+                  },
+                },
+              ],
+            },
+            {
+              element: <RoleGate roles={webhookManagerRoles} />,
+              children: [
+                {
+                  path: 'webhooks',
+                  lazy: async () => {
+                    const page = await import('../features/webhooks/routes/webhooks');
+                    return { Component: page.WebhooksPage, loader: loaderForRoles(queryClient, webhookManagerRoles, page.webhooksLoader(queryClient)) };
                   },
                 },
               ],

@@ -23,6 +23,7 @@ const readers = (status: number): Record<Caller, number> => ({ anonymous: 401, s
 const authors = (status: number): Record<Caller, number> => ({ anonymous: 401, subscriber: 403, forecaster: status, lead: status, admin: 403 });
 const leadOnly = (status: number): Record<Caller, number> => ({ anonymous: 401, subscriber: 403, forecaster: 403, lead: status, admin: 403 });
 const subscriberOnly = (status: number): Record<Caller, number> => ({ anonymous: 401, subscriber: status, forecaster: 403, lead: 403, admin: 403 });
+const webhookManagers = (status: number): Record<Caller, number> => ({ anonymous: 401, subscriber: status, forecaster: 403, lead: 403, admin: status });
 const signedIn = (status: number): Record<Caller, number> => ({ anonymous: 401, subscriber: status, forecaster: status, lead: status, admin: status });
 
 /**
@@ -85,6 +86,21 @@ const matrix: MatrixRow[] = [
   { method: 'get', route: '/api/email-confirmations', url: '/api/email-confirmations?token=not-a-real-token-at-all', expect: anyone(200) },
   { method: 'post', route: '/api/email-confirmations', url: '/api/email-confirmations?token=not-a-real-token-at-all', body: {}, expect: anyone(400) },
   { method: 'get', route: '/api/mail-outbox', url: '/api/mail-outbox', expect: staffOnly(200) },
+  { method: 'get', route: '/api/webhook-endpoints', url: '/api/webhook-endpoints', expect: webhookManagers(200) },
+  { method: 'post', route: '/api/webhook-endpoints', url: '/api/webhook-endpoints', body: {}, expect: webhookManagers(400) },
+  { method: 'delete', route: '/api/webhook-endpoints/:endpointId', url: `/api/webhook-endpoints/${missingId}`, expect: webhookManagers(404) },
+  { method: 'get', route: '/api/webhook-endpoints/:endpointId/deliveries', url: `/api/webhook-endpoints/${missingId}/deliveries`, expect: webhookManagers(404) },
+  { method: 'post', route: '/api/webhook-deliveries/:deliveryId/retry', url: `/api/webhook-deliveries/${missingId}/retry`, body: {}, expect: webhookManagers(404) },
+  { method: 'get', route: '/api/ogc', url: '/api/ogc', expect: anyone(200) },
+  { method: 'get', route: '/api/ogc/api', url: '/api/ogc/api', expect: anyone(200) },
+  { method: 'get', route: '/api/ogc/conformance', url: '/api/ogc/conformance', expect: anyone(200) },
+  { method: 'get', route: '/api/ogc/collections', url: '/api/ogc/collections', expect: anyone(200) },
+  { method: 'get', route: '/api/ogc/collections/:collectionId', url: '/api/ogc/collections/none', expect: anyone(404) },
+  { method: 'get', route: '/api/ogc/collections/:collectionId/items', url: '/api/ogc/collections/risk-areas/items', expect: anyone(200) },
+  { method: 'get', route: '/api/ogc/collections/:collectionId/items/:featureId', url: '/api/ogc/collections/issuances/items/1999-0001', expect: anyone(404) },
+  { method: 'get', route: '/api/public/cap', url: '/api/public/cap', expect: anyone(200) },
+  { method: 'get', route: '/api/public/cap/:issuanceNumber', url: '/api/public/cap/1999-0001', expect: anyone(404) },
+  { method: 'get', route: '/api/public/cap/:issuanceNumber/withdrawal', url: '/api/public/cap/1999-0001/withdrawal', expect: anyone(404) },
   { method: 'post', route: '/api/mail-outbox/:messageId/resend', url: `/api/mail-outbox/${missingId}/resend`, body: {}, expect: staffOnly(409) },
 ];
 

@@ -7,3 +7,4 @@ export * from './subscriptions';
 export * from './mail';
 export * from './security';
 export * from './distribution';
+export * from './webhooks';
