@@ -111,7 +111,7 @@ export type SoundingSummary = z.infer<typeof soundingSummarySchema>;
 export const soundingSortKeys = ['validTime', 'stationId', 'source', 'mlCape', 'muCape', 'mlCin', 'mlLclHeightM', 'precipitableWaterMm', 'bulkShear0to6kmMs', 'srh0to1km', 'stp', 'createdAt'] as const;
 
 export const soundingListQuerySchema = z.object({
-  page: z.coerce.number().int().min(1, { message: 'Page starts at 1.' }).default(1),
+  page: z.coerce.number().int().min(1, { message: 'Page starts at 1.' }).max(100_000, { message: 'Page must be at most 100,000.' }).default(1),
   pageSize: z.coerce.number().int().min(1).max(500, { message: 'At most 500 rows per page.' }).default(50),
   sort: z.enum(soundingSortKeys, { message: `Sort by one of: ${soundingSortKeys.join(', ')}.` }).default('validTime'),
   order: z.enum(['asc', 'desc']).default('desc'),

@@ -60,7 +60,7 @@ export type AuditTrail = z.infer<typeof auditTrailSchema>;
 export const archiveQuerySchema = z.object({
   q: z.string().trim().max(100).optional(),
   date: calendarDateSchema('Date').optional(),
-  page: z.coerce.number().int().min(1).default(1),
+  page: z.coerce.number().int().min(1, { message: 'Page starts at 1.' }).max(100_000, { message: 'Page must be at most 100,000.' }).default(1),
   pageSize: z.coerce.number().int().min(1).max(100).default(20),
 });
 export type ArchiveQuery = z.infer<typeof archiveQuerySchema>;

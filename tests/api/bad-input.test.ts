@@ -99,6 +99,11 @@ describe('issue 11 item 7: bad input is a 400 naming the field, never a 5xx', ()
     expectFieldError(res, 'files');
   });
 
+  it.each(['1e300', '9007199254740993', '2147483648'])('When page is %s, then 400 names page', async (page) => {
+    expectFieldError(await request(sd.app).get(`/api/public/issuances?page=${page}`), 'page');
+    expectFieldError(await forecaster.get(`/api/soundings?page=${page}`), 'page');
+  });
+
   it('When a JSON body is malformed, then 400 says where', async () => {
     const res = await forecaster.post('/api/outlooks').set('Content-Type', 'application/json').send('{\n  "day": 1,\n  "headline": "x",,\n}');
     expect(res.status).toBe(400);

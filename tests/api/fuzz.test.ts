@@ -62,6 +62,21 @@ const body = fc.oneof(fc.dictionary(fc.constantFrom(...fieldNames), anyValue, { 
 const query = fc.dictionary(fc.constantFrom(...fieldNames), fc.oneof(nastyString, nastyNumber.map(String)), { maxKeys: 4 });
 const pathValue = fc.oneof(fc.constantFrom('00000000-0000-4000-8000-000000000000', 'not-an-id', '%00', '%E0%A4%A', '2027-0001', '9999-9999', '..', '%2e%2e'), fc.string({ minLength: 1, maxLength: 30 }).map(encodeURIComponent), fc.constant('realId'));
 
+const square = [[[-94, 37], [-92, 37], [-92, 39], [-94, 39], [-94, 37]]];
+/** Valid bodies for the main write routes; the fuzzer replaces one field at a time to get past the first check. */
+const validBodies: Record<string, Record<string, unknown>> = {
+  'post /api/outlooks': { day: 1, issuanceTime: '2027-04-18T15:00:00Z', headline: 'Fuzz' },
+  'put /api/outlooks/:outlookId': { version: 1, headline: 'Fuzz', discussion: 'text', hazardNotes: { hail: 'note' }, validFrom: '2027-04-18T15:00:00Z', validUntil: '2027-04-19T12:00:00Z', areas: [{ levelKey: 'level1', hazards: [{ hazard: 'hail', significant: false }], geometry: { type: 'Polygon', coordinates: square }, label: 'A' }] },
+  'post /api/outlooks/area-imports': { geojson: { type: 'FeatureCollection', features: [{ type: 'Feature', properties: { level: 'level1' }, geometry: { type: 'Polygon', coordinates: square } }] } },
+  'put /api/subscriptions/me': { version: 1, alertThreshold: 'level1', hazards: ['hail'], days: [1], emails: ['em@county.test'], paused: false },
+  'post /api/areas-of-interest': { kind: 'drawn', name: 'Area', geometry: { type: 'Polygon', coordinates: square } },
+  'put /api/me/preferences': { units: { temperature: 'C', height: 'm', speed: 'kt' } },
+  'post /api/users': { name: 'Fuzz', email: 'fuzz@office.test', password: 'gravel-orchard-lantern-42', role: 'forecaster' },
+  'post /api/outlooks/:outlookId/comments': { body: 'A comment', riskAreaId: '00000000-0000-4000-8000-000000000000' },
+  'post /api/outlooks/:outlookId/submit': { version: 1, comment: 'ok' },
+  'post /api/issuances/:issuanceNumber/withdraw': { reason: 'Fuzzing reason' },
+};
+
 /** JSON routes (uploads take multipart and are fuzzed through their own tests). */
 const fuzzedRoutes = apiRoutes.filter((r) => r.path !== '/api/soundings/uploads');
 
@@ -81,11 +96,15 @@ describe('issue 11 item 7: no 5xx from any input', () => {
       realIdIndex: fc.nat({ max: 10 }),
       query,
       body,
+      mutation: fc.option(fc.tuple(fc.constantFrom(...fieldNames), anyValue), { nil: undefined }),
     });
     await fc.assert(
-      fc.asyncProperty(sample, async ({ routeIndex, params, realIdIndex, query: q, body: b }) => {
+      fc.asyncProperty(sample, async ({ routeIndex, params, realIdIndex, query: q, body: randomBody, mutation }) => {
         const definition = fuzzedRoutes[routeIndex];
         if (!definition) return;
+        const template = validBodies[`${definition.method} ${definition.path}`];
+        // Half the time a valid body with one field replaced, so deeper checks are reached too.
+        const b: unknown = template && mutation ? { ...template, [mutation[0]]: mutation[1] } : randomBody;
         let i = 0;
         const path = definition.path.replace(/:[A-Za-z]+/g, () => {
           const value = params[i++] ?? 'x';
@@ -98,9 +117,9 @@ describe('issue 11 item 7: no 5xx from any input', () => {
         let call = base[definition.method](url).set('Origin', testOrigin);
         if (definition.method !== 'get') call = call.set('Content-Type', 'application/json').send(JSON.stringify(b));
         const res = await call;
-        expect(res.status, `${definition.method.toUpperCase()} ${url} ${JSON.stringify(b).slice(0, 300)} → ${res.status} ${res.text.slice(0, 200)}`).toBeLessThan(500);
+        expect(res.status, `${definition.method.toUpperCase()} ${url} ${JSON.stringify(b).slice(0, 300)} → ${res.status} ${String(res.text ?? '').slice(0, 200)}`).toBeLessThan(500);
       }),
-      { numRuns: 700, endOnFailure: true },
+      { numRuns: 800, endOnFailure: true },
     );
   }, 120_000);
 });
