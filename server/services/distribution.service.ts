@@ -5,6 +5,7 @@ import type { RiskLevel } from '../../shared/contracts/office';
 import { decideNotice, matchAreas, type NoticeKind } from '../../shared/distribution/match';
 import { unionOf } from '../../shared/geometry/area-checks';
 import { publicCautionShort } from '../../shared/workflow/caution';
+import { markdownExcerpt } from '../../shared/text/markdown-excerpt';
 import type { Config } from '../config';
 import type { Transaction } from '../db/client';
 import { areasOfInterest, mailOutbox, notifications, subscriptions } from '../db/schema';
@@ -45,11 +46,6 @@ function formatPeriod(validFrom: string, validUntil: string, timeZone: string) {
   return { validLocal: `${local.format(new Date(validFrom))} to ${local.format(new Date(validUntil))}`, validUtc: `${utc(validFrom)} to ${utc(validUntil)}` };
 }
 
-/** The first paragraph of the discussion as plain text, at most 400 characters. */
-export function discussionExcerpt(markdown: string): string {
-  const paragraph = markdown.split(/\n\s*\n/).map((p) => p.replace(/^#+\s.*$/gm, '').replace(/[*_`>#-]/g, '').trim()).find((p) => p.length > 0) ?? '';
-  return paragraph.length > 400 ? `${paragraph.slice(0, 397)}…` : paragraph;
-}
 
 /**
  * Queues one message per subscriber (per address) whose areas an issuance reaches at or above
@@ -138,7 +134,7 @@ async function queueMessages(
     hazards: hazards.map((h) => hazardLabels[h]).join(', '),
     ...formatPeriod(issuance.validFrom, issuance.validUntil, office.timeZone),
     headline: kind === 'withdrawn' ? '' : issuance.headline,
-    excerpt: kind === 'withdrawn' ? '' : discussionExcerpt(issuance.discussion),
+    excerpt: kind === 'withdrawn' ? '' : markdownExcerpt(issuance.discussion),
     issuanceUrl,
     settingsUrl: `${config.publicUrl}/alerts`,
     unsubscribeUrl,
