@@ -1,0 +1,1 @@
+ALTER TABLE "offices" DROP COLUMN "mail_settings";
