@@ -13,7 +13,7 @@ import { findOffice } from './office.service';
 import { writeRevision } from './outlooks.service';
 import { publicCaution } from '../../shared/workflow/caution';
 import { levelLabel } from '../../shared/workflow/levels';
-import { issuanceSnapshotSchema, type Archive, type Bulletin, type Issuance, type IssuanceSnapshot } from '../../shared/contracts/issuances';
+import { issuanceSnapshotSchema, type AmendmentResult, type Archive, type Bulletin, type Issuance, type IssuanceSnapshot } from '../../shared/contracts/issuances';
 import type { RiskArea } from '../../shared/contracts/outlooks';
 import type { Region, RiskLevel } from '../../shared/contracts/office';
 import { buildAtomFeed } from '../exports/atom';
@@ -143,7 +143,7 @@ export async function withdrawIssuance(db: Database, config: Config, actor: Acto
 }
 
 /** Starts an amendment: a new draft with the issuance's content; publishing it supersedes the issuance. */
-export async function amendIssuance(db: Database, actor: Actor, number: string): Promise<Result<{ outlookId: string }, AppError>> {
+export async function amendIssuance(db: Database, actor: Actor, number: string): Promise<Result<AmendmentResult, AppError>> {
   const found = await getIssuance(db, number);
   if (!found.ok) return found;
   const issuance = found.value;
