@@ -105,4 +105,5 @@ CREATE INDEX "webhook_deliveries_status_next_attempt_at_index" ON "webhook_deliv
 CREATE INDEX "webhook_deliveries_endpoint_id_created_at_index" ON "webhook_deliveries" USING btree ("endpoint_id","created_at");--> statement-breakpoint
 CREATE INDEX "webhook_endpoints_owner_id_index" ON "webhook_endpoints" USING btree ("owner_id");--> statement-breakpoint
 CREATE UNIQUE INDEX "soundings_office_id_content_hash_idx" ON "soundings" USING btree ("office_id","content_hash") WHERE "soundings"."modified_from_id" is null;--> statement-breakpoint
-CREATE UNIQUE INDEX "outlooks_open_amendment_idx" ON "outlooks" USING btree ("amends_issuance_id") WHERE "outlooks"."state" <> 'published';
+CREATE UNIQUE INDEX "outlooks_open_amendment_idx" ON "outlooks" USING btree ("amends_issuance_id") WHERE "outlooks"."state" <> 'published';--> statement-breakpoint
+ALTER TABLE "offices" DROP COLUMN "mail_settings";

@@ -36,7 +36,7 @@ export async function createApp(ctx: AppContext, clientMode: ClientMode): Promis
           ? false
           : {
               directives: {
-                'img-src': ["'self'", 'data:', 'blob:', ...(process.env.TILE_URL ? [new URL(process.env.TILE_URL.replace(/[{}]/g, '')).origin] : [])],
+                'img-src': ["'self'", 'data:', 'blob:', ...(ctx.config.tileUrl ? [new URL(ctx.config.tileUrl.replace(/[{}]/g, '')).origin] : [])],
                 'style-src': ["'self'", "'unsafe-inline'"],
                 'frame-src': ["'self'"],
                 'upgrade-insecure-requests': ctx.config.env === 'production' ? [] : null,

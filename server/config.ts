@@ -4,6 +4,9 @@ import { z } from 'zod';
 
 export const developmentAuthSecret = 'stormdraft-development-secret-change-me-0123456789';
 
+/** Sender of every e-mail unless MAIL_FROM says otherwise. */
+export const defaultMailFrom = 'Stormdraft <outlooks@stormdraft.test>';
+
 const envSchema = z.object({
   NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
   PORT: z.coerce.number().int().min(0).max(65535).default(3000),
@@ -15,6 +18,13 @@ const envSchema = z.object({
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   AUTH_RATE_LIMIT_PER_MINUTE: z.coerce.number().int().positive().default(60),
   TRUST_PROXY: z.string().default(''),
+  MAIL_FROM: z.string().trim().min(3).max(200).regex(/@/, { message: 'MAIL_FROM must hold an e-mail address, e.g. "Meridian Valley Outlooks <outlooks@example.org>".' }).default(defaultMailFrom),
+  TILE_URL: z
+    .string()
+    .trim()
+    .regex(/^https?:\/\/[^\s]+\{z\}[^\s]*\{x\}[^\s]*\{y\}/, { message: 'TILE_URL must be an http(s) tile template with {z}, {x} and {y}, e.g. https://tiles.example.org/{z}/{x}/{y}.png' })
+    .optional(),
+  TILE_ATTRIBUTION: z.string().trim().max(300).optional(),
 });
 
 /** Express's `trust proxy` setting: false (trust nobody), a hop count, or named ranges/addresses. */
@@ -61,6 +71,16 @@ export interface Config {
   seedDemo: boolean;
   /** How often the mail outbox worker looks for messages to send; 0 turns the worker off. */
   outboxIntervalMs: number;
+  /** The From of every e-mail (MAIL_FROM). */
+  mailFrom: string;
+  /** Base-map tile template for every map, client and server (TILE_URL); none: offline outlines only. */
+  tileUrl: string | undefined;
+  tileAttribution: string | undefined;
+}
+
+/** The base map the client draws, from the configuration (sent with the office settings). */
+export function baseMapOf(config: Pick<Config, 'tileUrl' | 'tileAttribution'>): { tileUrl: string | null; attribution: string | null } {
+  return { tileUrl: config.tileUrl ?? null, attribution: config.tileUrl ? (config.tileAttribution ?? null) : null };
 }
 
 /** Reads and checks the environment; throws with a readable message when something is wrong. */
@@ -93,5 +113,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, argv: string[] 
     viteDev: argv.includes('--dev'),
     seedDemo: e.NODE_ENV !== 'production',
     outboxIntervalMs: 2000,
+    mailFrom: e.MAIL_FROM,
+    tileUrl: e.TILE_URL || undefined,
+    tileAttribution: e.TILE_ATTRIBUTION || undefined,
   };
 }

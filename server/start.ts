@@ -41,7 +41,7 @@ export async function startStormdraft(config: Config, options: StartOptions): Pr
   const database = await openDatabase({ databaseUrl: config.databaseUrl, dataDir: config.dataDir, loadDataDir: options.loadDataDir });
   const db = database.db;
   const catcher = config.smtpUrl ? undefined : await startMailCatcher((message) => storeCaughtMail(db, message));
-  const mailer = createMailer(config.smtpUrl ?? catcher?.url ?? 'smtp://127.0.0.1:25', 'Stormdraft <outlooks@stormdraft.test>');
+  const mailer = createMailer(config.smtpUrl ?? catcher?.url ?? 'smtp://127.0.0.1:25', config.mailFrom);
   const auth = createAuth(config, db, {
     sendResetPassword: (input) => sendPasswordResetMail(db, mailer, input),
     sendVerificationEmail: (input) => sendVerificationMail(db, mailer, input),

@@ -3,6 +3,8 @@ import type { AreaGeometry, HazardKind, RiskArea } from '../../shared/contracts/
 import { hazardLabels } from '../../shared/contracts/outlooks';
 import type { RiskLevel } from '../../shared/contracts/office';
 import type { NoticeKind } from '../../shared/distribution/match';
+import { publicCautionShort } from '../../shared/workflow/caution';
+import { markdownExcerpt } from '../../shared/text/markdown-excerpt';
 import type { Config } from '../config';
 import type { Database, Transaction } from '../db/client';
 import { areasOfInterest, distributionJobs, issuances, mailOutbox, notifications, offices, subscriptions, type OutboxAttachment } from '../db/schema';
@@ -45,11 +47,6 @@ function formatPeriod(validFrom: string, validUntil: string, timeZone: string) {
   return { validLocal: `${local.format(new Date(validFrom))} to ${local.format(new Date(validUntil))}`, validUtc: `${utc(validFrom)} to ${utc(validUntil)}` };
 }
 
-/** The first paragraph of the discussion as plain text, at most 400 characters. */
-export function discussionExcerpt(markdown: string): string {
-  const paragraph = markdown.split(/\n\s*\n/).map((p) => p.replace(/^#+\s.*$/gm, '').replace(/[*_`>#-]/g, '').trim()).find((p) => p.length > 0) ?? '';
-  return paragraph.length > 400 ? `${paragraph.slice(0, 397)}…` : paragraph;
-}
 
 /** Subscribers matched per worker task and per transaction (bounds each pause of the event loop and the database). */
 export const distributionPageSize = 250;
@@ -309,7 +306,7 @@ function buildMessage(
     hazards: hazards.map((h) => hazardLabels[h]).join(', '),
     ...formatPeriod(issuance.validFrom, issuance.validUntil, office.timeZone),
     headline: kind === 'withdrawn' ? '' : issuance.headline,
-    excerpt: kind === 'withdrawn' ? '' : discussionExcerpt(issuance.discussion),
+    excerpt: kind === 'withdrawn' ? '' : markdownExcerpt(issuance.discussion),
     issuanceUrl,
     settingsUrl: `${config.publicUrl}/alerts`,
     unsubscribeUrl,

@@ -14,7 +14,7 @@ import { findOffice } from './office.service';
 import { writeRevision } from './outlooks.service';
 import { publicCaution } from '../../shared/workflow/caution';
 import { levelLabel } from '../../shared/workflow/levels';
-import { issuanceSnapshotSchema, type Archive, type Bulletin, type Issuance, type IssuanceSnapshot } from '../../shared/contracts/issuances';
+import { issuanceSnapshotSchema, type AmendmentResult, type Archive, type Bulletin, type Issuance, type IssuanceSnapshot } from '../../shared/contracts/issuances';
 import { queueWebhookEvents } from './webhooks.service';
 import type { RiskArea } from '../../shared/contracts/outlooks';
 import type { Region, RiskLevel } from '../../shared/contracts/office';
@@ -152,7 +152,7 @@ export async function withdrawIssuance(db: Database, config: Config, actor: Acto
  * later ones get a 409 naming the open draft (the partial unique index on
  * `outlooks.amends_issuance_id` is the last line of defence).
  */
-export async function amendIssuance(db: Database, actor: Actor, number: string): Promise<Result<{ outlookId: string }, AppError>> {
+export async function amendIssuance(db: Database, actor: Actor, number: string): Promise<Result<AmendmentResult, AppError>> {
   const office = await findOffice(db);
   if (!office) throw new Error('no office');
   try {

@@ -1,5 +1,5 @@
 import { eq } from 'drizzle-orm';
-import type { OfficeSettings, OfficeSettingsInput } from '../../shared/contracts/office';
+import type { BaseMap, OfficeSettings, OfficeSettingsInput } from '../../shared/contracts/office';
 import { appError, type AppError } from '../../shared/errors';
 import { err, ok, type Result } from '../../shared/result';
 import type { DatabaseOrTransaction } from '../db/client';
@@ -7,7 +7,7 @@ import { offices } from '../db/schema';
 
 type OfficeRow = typeof offices.$inferSelect;
 
-function toSettings(row: OfficeRow): OfficeSettings {
+function toSettings(row: OfficeRow, baseMap: BaseMap): OfficeSettings {
   return {
     id: row.id,
     name: row.name,
@@ -18,6 +18,7 @@ function toSettings(row: OfficeRow): OfficeSettings {
     allowSelfApproval: row.allowSelfApproval,
     version: row.version,
     updatedAt: row.updatedAt.toISOString(),
+    baseMap,
   };
 }
 
@@ -27,17 +28,17 @@ export async function findOffice(db: DatabaseOrTransaction): Promise<OfficeRow |
   return row;
 }
 
-export async function getOfficeSettings(db: DatabaseOrTransaction): Promise<Result<OfficeSettings, AppError>> {
+export async function getOfficeSettings(db: DatabaseOrTransaction, baseMap: BaseMap): Promise<Result<OfficeSettings, AppError>> {
   const row = await findOffice(db);
   if (!row) return err(appError('NOT_FOUND', 'No office is set up yet. Start the app once to create it.'));
-  return ok(toSettings(row));
+  return ok(toSettings(row, baseMap));
 }
 
 /**
  * Saves the office settings when `input.version` is still the stored version; otherwise a
  * CONFLICT that says someone else saved first (nothing is overwritten).
  */
-export async function updateOfficeSettings(db: DatabaseOrTransaction, input: OfficeSettingsInput): Promise<Result<OfficeSettings, AppError>> {
+export async function updateOfficeSettings(db: DatabaseOrTransaction, input: OfficeSettingsInput, baseMap: BaseMap): Promise<Result<OfficeSettings, AppError>> {
   const current = await findOffice(db);
   if (!current) return err(appError('NOT_FOUND', 'No office is set up yet.'));
   const { version, guidanceThresholds, allowSelfApproval, ...fields } = input;
@@ -68,5 +69,5 @@ export async function updateOfficeSettings(db: DatabaseOrTransaction, input: Off
       }),
     );
   }
-  return ok(toSettings(row));
+  return ok(toSettings(row, baseMap));
 }

@@ -184,7 +184,7 @@ export async function createOutlook(db: Database, actor: Actor, input: CreateOut
   });
 }
 
-export async function getOutlook(db: Database, outlookId: string): Promise<Result<Outlook, AppError>> {
+export async function getOutlook(db: DatabaseOrTransaction, outlookId: string): Promise<Result<Outlook, AppError>> {
   const outlook = await loadOutlook(db, outlookId);
   return outlook ? ok(outlook) : err(notFound());
 }

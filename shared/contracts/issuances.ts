@@ -68,3 +68,7 @@ export type Bulletin = z.infer<typeof bulletinSchema>;
 /** GET /api/public/issuances (the archive) */
 export const archiveSchema = z.object({ issuances: z.array(archiveEntrySchema), total: z.number(), caution: z.string() });
 export type Archive = z.infer<typeof archiveSchema>;
+
+/** POST /api/issuances/:number/amend: the draft that amends the issuance (new, or the one already open). */
+export const amendmentResultSchema = z.object({ outlookId: z.string() });
+export type AmendmentResult = z.infer<typeof amendmentResultSchema>;

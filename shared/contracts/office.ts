@@ -81,11 +81,17 @@ export const officeSettingsInputSchema = z.object({
 });
 export type OfficeSettingsInput = z.infer<typeof officeSettingsInputSchema>;
 
+/** The base map under every map: a tile URL template from the installation's configuration, or none (offline outlines only). */
+export const baseMapSchema = z.object({ tileUrl: z.string().nullable(), attribution: z.string().nullable() });
+export type BaseMap = z.infer<typeof baseMapSchema>;
+
 export const officeSettingsSchema = officeSettingsInputSchema.extend({
   id: z.string(),
   updatedAt: z.string(),
   guidanceThresholds: guidanceThresholdsSchema,
   allowSelfApproval: z.boolean(),
+  /** Set by TILE_URL and TILE_ATTRIBUTION, not by admins. */
+  baseMap: baseMapSchema,
 });
 export type OfficeSettings = z.infer<typeof officeSettingsSchema>;
 

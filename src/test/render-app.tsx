@@ -24,6 +24,7 @@ export const demoOffice: OfficeSettings = {
   allowSelfApproval: false,
   version: 3,
   updatedAt: '2026-12-01T12:00:00.000Z',
+  baseMap: { tileUrl: null, attribution: null },
 };
 
 export function meFor(role: Role): Me {

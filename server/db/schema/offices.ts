@@ -1,12 +1,6 @@
 import { boolean, integer, jsonb, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 import type { GuidanceThresholds, Region, RiskLadder } from '../../../shared/contracts/office';
 
-/** Mail settings an admin may set in the app (the SMTP URL itself comes from the environment). */
-export interface OfficeMailSettings {
-  fromAddress: string;
-  replyTo?: string;
-}
-
 /**
  * One forecast office and its settings. The risk ladder is read from here by the whole app.
  * `version` gives optimistic concurrency for the settings page.
@@ -19,7 +13,6 @@ export const offices = pgTable('offices', {
   timeZone: text().notNull(),
   riskLadder: jsonb().$type<RiskLadder>().notNull(),
   guidanceThresholds: jsonb().$type<GuidanceThresholds>().notNull().default({}),
-  mailSettings: jsonb().$type<OfficeMailSettings>().notNull().default({ fromAddress: 'outlooks@stormdraft.test' }),
   /** Four-eyes rule relaxed (one-person night shift); every use is written to the audit trail. */
   allowSelfApproval: boolean().notNull().default(false),
   version: integer().notNull().default(0),

@@ -5,7 +5,7 @@ import { pino } from 'pino';
 import { inject } from 'vitest';
 import request from 'supertest';
 import type TestAgent from 'supertest/lib/agent';
-import { developmentAuthSecret, type Config } from '../../../server/config';
+import { defaultMailFrom, developmentAuthSecret, type Config } from '../../../server/config';
 import { startStormdraft, type Stormdraft } from '../../../server/start';
 import type { ClientMode } from '../../../server/app';
 import { demoPassword } from '../../../server/services/seed.service';
@@ -29,6 +29,9 @@ export function testConfig(overrides: Partial<Config> = {}): Config {
     seedDemo: true,
     // Tests drive the outbox themselves (processOutbox) so sending is deterministic.
     outboxIntervalMs: 0,
+    mailFrom: defaultMailFrom,
+    tileUrl: undefined,
+    tileAttribution: undefined,
     ...overrides,
   };
 }

@@ -1,11 +1,9 @@
 import { useMutation } from '@tanstack/react-query';
-import { z } from 'zod';
 import { apiClient } from '../../../lib/api-client';
-
-const amendmentSchema = z.object({ outlookId: z.string() });
+import { amendmentResultSchema } from '../../../../shared/contracts/issuances';
 
 export const amendIssuance = (issuanceNumber: string) =>
-  apiClient.post(`/api/issuances/${encodeURIComponent(issuanceNumber)}/amend`, {}, amendmentSchema);
+  apiClient.post(`/api/issuances/${encodeURIComponent(issuanceNumber)}/amend`, {}, amendmentResultSchema);
 
 /** Starts an amendment: a new draft with the issuance's content. Publishing it supersedes the issuance. */
 export function useAmendIssuance(issuanceNumber: string) {

@@ -184,8 +184,6 @@ function Workspace({ initial, office, mayAuthor }: { initial: Outlook; office: O
   const validFromInput = toUtcInputValue(document.validFrom);
   const validUntilInput = toUtcInputValue(document.validUntil);
   const periodProblem = new Date(document.validUntil) <= new Date(document.validFrom) ? 'The valid period must end after it starts.' : undefined;
-  const tileUrl: unknown = import.meta.env.VITE_TILE_URL;
-  const tileAttribution: unknown = import.meta.env.VITE_TILE_ATTRIBUTION;
 
   return (
     <div className="space-y-4">
@@ -262,8 +260,8 @@ function Workspace({ initial, office, mayAuthor }: { initial: Outlook; office: O
                   <Link to={`/soundings/${properties.id}`}>Open the sounding</Link>
                 </span>
               )}
-              tileUrl={typeof tileUrl === 'string' && tileUrl !== '' ? tileUrl : undefined}
-              tileAttribution={typeof tileAttribution === 'string' ? tileAttribution : undefined}
+              tileUrl={office.baseMap.tileUrl ?? undefined}
+              tileAttribution={office.baseMap.attribution ?? undefined}
             />
             {mode === 'draw' ? (
               <p className="pointer-events-none absolute bottom-3 left-1/2 z-[1000] -translate-x-1/2 rounded bg-ink/85 px-3 py-1 text-[13px] text-white">

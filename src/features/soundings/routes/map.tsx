@@ -67,8 +67,6 @@ export function SoundingMapPage() {
   }, [soundings, parameter, units]);
 
   const region = office.data?.region;
-  const tileUrl: unknown = import.meta.env.VITE_TILE_URL;
-  const tileAttribution: unknown = import.meta.env.VITE_TILE_ATTRIBUTION;
 
   return (
     <>
@@ -125,8 +123,8 @@ export function SoundingMapPage() {
             className="h-[calc(100dvh-15rem)] min-h-96"
             region={region}
             points={points}
-            tileUrl={typeof tileUrl === 'string' && tileUrl !== '' ? tileUrl : undefined}
-            tileAttribution={typeof tileAttribution === 'string' ? tileAttribution : undefined}
+            tileUrl={office.data?.baseMap.tileUrl ?? undefined}
+            tileAttribution={office.data?.baseMap.attribution ?? undefined}
             renderPopup={(properties) => {
               const sounding = byId.get(properties.id);
               return sounding ? <SoundingPopup sounding={sounding} units={units} /> : null;
