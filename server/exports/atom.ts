@@ -8,9 +8,11 @@ export interface AtomEntry {
   validFrom: string;
   validUntil: string;
   publishedAt: string;
+  /** Said first in the entry's summary (e.g. a withdrawal). */
+  notice?: string;
 }
 
-/** The Atom feed (RFC 4287) of an office's issuances, newest first, each linking to its permanent page. */
+/** The Atom feed (RFC 4287) of an office's current issuances, each linking to its permanent page. */
 export function buildAtomFeed(input: { officeName: string; publicUrl: string; caution: string; entries: AtomEntry[]; updated: Date }): string {
   const feed = new Feed({
     id: `${input.publicUrl}/archive`,
@@ -29,7 +31,7 @@ export function buildAtomFeed(input: { officeName: string; publicUrl: string; ca
       link: url,
       title: `Day ${entry.day} outlook ${entry.number}${entry.state === 'published' ? '' : ` (${entry.state})`}: ${entry.headline || 'no headline'}`,
       date: new Date(entry.publishedAt),
-      description: `Valid ${entry.validFrom} to ${entry.validUntil} (UTC). ${input.caution}`,
+      description: `${entry.notice ? `${entry.notice} ` : ''}Valid ${entry.validFrom} to ${entry.validUntil} (UTC). ${input.caution}`,
     });
   }
   return feed.atom1();

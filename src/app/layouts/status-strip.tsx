@@ -1,15 +1,7 @@
-import { createContext, useContext, useEffect, useState, type ReactNode } from 'react';
+import { createContext, useContext, type ReactNode } from 'react';
 import { createPortal } from 'react-dom';
+import { useNow } from '../../hooks/use-now';
 import { readClock } from '../../utils/time';
-
-function useNow(intervalMs = 15_000): Date {
-  const [now, setNow] = useState(() => new Date());
-  useEffect(() => {
-    const timer = window.setInterval(() => setNow(new Date()), intervalMs);
-    return () => window.clearInterval(timer);
-  }, [intervalMs]);
-  return now;
-}
 
 function Clock({ instant, timeZone, label }: { instant: Date; timeZone: string; label: string }) {
   const reading = readClock(instant, timeZone);
