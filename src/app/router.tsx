@@ -6,7 +6,6 @@ import { officeQueryOptions } from '../hooks/use-office';
 import type { Role } from '../../shared/contracts/common';
 import { homePathFor, roleAllowed } from '../utils/roles';
 import { NotFoundPage } from './not-found';
-import { RoleGate } from './layouts/role-gate';
 import { RouteErrorPage } from './route-error';
 
 type PageLoader = () => Promise<unknown>;
@@ -20,6 +19,14 @@ function loaderForRoles(queryClient: QueryClient, roles: readonly Role[], load?:
     const me = await queryClient.ensureQueryData(meQueryOptions());
     if (me && roleAllowed(me.user.role, roles) && load) await load();
     return null;
+  };
+}
+
+/** The role check of a group of staff pages, loaded with them (the public pages never need it). */
+function roleGate(roles: readonly Role[]) {
+  return async () => {
+    const { RoleGate } = await import('./layouts/role-gate');
+    return { element: <RoleGate roles={roles} /> };
   };
 }
 
@@ -116,7 +123,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
           },
           children: [
             {
-              element: <RoleGate roles={staff} />,
+              lazy: roleGate(staff),
               children: [
                 {
                   path: 'desk',
@@ -126,7 +133,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               ],
             },
             {
-              element: <RoleGate roles={outlookReaders} />,
+              lazy: roleGate(outlookReaders),
               children: [
                 {
                   path: 'outlooks/:outlookId',
@@ -143,7 +150,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               ],
             },
             {
-              element: <RoleGate roles={staff} />,
+              lazy: roleGate(staff),
               children: [
                 {
                   path: 'soundings/upload',
@@ -153,7 +160,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               ],
             },
             {
-              element: <RoleGate roles={soundingReaders} />,
+              lazy: roleGate(soundingReaders),
               children: [
                 {
                   path: 'soundings',
@@ -177,7 +184,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               ],
             },
             {
-              element: <RoleGate roles={leads} />,
+              lazy: roleGate(leads),
               children: [
                 {
                   path: 'review',
@@ -189,7 +196,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               ],
             },
             {
-              element: <RoleGate roles={staff} />,
+              lazy: roleGate(staff),
               children: [
                 {
                   path: 'review/:outlookId',
@@ -201,7 +208,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               ],
             },
             {
-              element: <RoleGate roles={subscribers} />,
+              lazy: roleGate(subscribers),
               children: [
                 {
                   path: 'alerts',
@@ -213,7 +220,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               ],
             },
             {
-              element: <RoleGate roles={subscriberReaders} />,
+              lazy: roleGate(subscriberReaders),
               children: [
                 {
                   path: 'subscribers',
@@ -226,7 +233,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
             },
             {
               path: 'admin',
-              element: <RoleGate roles={admins} />,
+              lazy: roleGate(admins),
               children: [
                 { index: true, Component: InitialLoading, loader: () => redirect('/admin/users') },
                 {
