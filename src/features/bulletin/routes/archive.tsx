@@ -69,7 +69,7 @@ export function ArchivePage() {
       ) : null}
 
       {archive.data && archive.data.issuances.length > 0 ? (
-        <section aria-label="Issuances" className="overflow-x-auto rounded-lg border border-line bg-panel">
+        <section aria-label="Issuances" className="relative overflow-x-auto rounded-lg border border-line bg-panel">
           <table className="w-full text-left text-sm">
             <thead className="border-b border-line bg-sunken text-[13px] text-ink-muted">
               <tr>
