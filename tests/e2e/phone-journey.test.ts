@@ -159,6 +159,15 @@ describe('signed-in staff pages on a phone', () => {
         await page.waitForLoadState('networkidle');
         await expectNoSidewaysScroll(pathname);
         await expectUsable(page.getByRole('button', { name: 'Menu' }), `Menu on ${pathname}`);
+        // Each list's first item opens a detail page (an outlook, a sounding, a review): it fits too.
+        const detail = { '/desk': 'a[href^="/outlooks/"]', '/soundings': 'a[href^="/soundings/"]:not([href$="/map"]):not([href$="/upload"])', '/review': 'a[href^="/review/"]' }[pathname];
+        if (detail === undefined) continue;
+        const href = await page.locator(detail).first().getAttribute('href');
+        expect(href, `a detail link on ${pathname}`).toMatch(/^\/(outlooks|soundings|review)\/[0-9a-f-]{36}$/);
+        await page.goto(`${journey.baseUrl}${href ?? ''}`);
+        await page.getByRole('heading', { level: 1 }).first().waitFor();
+        await page.waitForLoadState('networkidle');
+        await expectNoSidewaysScroll(href ?? pathname);
       }
     });
   }
