@@ -8,6 +8,8 @@ export interface AtomEntry {
   validFrom: string;
   validUntil: string;
   publishedAt: string;
+  /** Said first in the entry's summary (e.g. a withdrawal). */
+  notice?: string;
 }
 
 /**
@@ -32,7 +34,7 @@ export function buildAtomFeed(input: { officeName: string; publicUrl: string; ca
     item.ele('id').txt(url);
     item.ele('link', { href: url });
     item.ele('updated').txt(new Date(entry.publishedAt).toISOString());
-    item.ele('summary', { type: 'text' }).txt(`Valid ${entry.validFrom} to ${entry.validUntil} (UTC). ${input.caution}`);
+    item.ele('summary', { type: 'text' }).txt(`${entry.notice ? `${entry.notice} ` : ''}Valid ${entry.validFrom} to ${entry.validUntil} (UTC). ${input.caution}`);
   }
   return feed.end({ prettyPrint: true });
 }

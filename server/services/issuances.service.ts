@@ -1,4 +1,5 @@
-import { and, count, desc, eq, ilike, ne, or, sql, type SQL } from 'drizzle-orm';
+import { and, count, desc, eq, gt, ilike, inArray, ne, or, sql, type SQL } from 'drizzle-orm';
+import { inForceByDay, type DayEnding } from '../../shared/issuances/in-force';
 import { withRfc7946Winding } from '../../shared/geometry/winding';
 import type { Feature, FeatureCollection } from 'geojson';
 import type { ArchiveQuery } from '../../shared/contracts/workflow';
@@ -14,7 +15,7 @@ import { findOffice } from './office.service';
 import { writeRevision } from './outlooks.service';
 import { publicCaution } from '../../shared/workflow/caution';
 import { levelLabel } from '../../shared/workflow/levels';
-import { issuanceSnapshotSchema, type AmendmentResult, type Archive, type Bulletin, type Issuance, type IssuanceSnapshot } from '../../shared/contracts/issuances';
+import { issuanceSnapshotSchema, type AmendmentResult, type Archive, type Bulletin, type BulletinDay, type Issuance, type IssuanceSnapshot } from '../../shared/contracts/issuances';
 import { queueWebhookEvents } from './webhooks.service';
 import type { RiskArea } from '../../shared/contracts/outlooks';
 import type { Region, RiskLevel } from '../../shared/contracts/office';
@@ -56,13 +57,55 @@ async function toView(db: DatabaseOrTransaction, row: IssuanceRow): Promise<Issu
   };
 }
 
-/** The bulletin: the latest published (current) issuance for each of Days 1–3. */
-export async function currentBulletin(db: Database): Promise<Result<Bulletin, AppError>> {
-  const rows = await db.select().from(issuances).where(eq(issuances.state, 'published')).orderBy(desc(issuances.publishedAt));
-  const latest = new Map<number, IssuanceRow>();
-  for (const row of rows) if (!latest.has(row.day)) latest.set(row.day, row);
-  const views = await Promise.all([...latest.values()].sort((a, b) => a.day - b.day).map((r) => toView(db, r)));
-  return ok({ issuances: views, caution: publicCaution });
+/**
+ * Issuances that may still be in force or need a withdrawal notice at `now`: published or
+ * withdrawn, and whose valid period has not ended. The in-force rule itself is applied by
+ * `inForceByDay`; this only narrows what is read from the database.
+ */
+async function bulletinCandidates(db: Database, now: Date): Promise<IssuanceRow[]> {
+  return db
+    .select()
+    .from(issuances)
+    .where(and(inArray(issuances.state, ['published', 'withdrawn']), gt(issuances.validUntil, now)))
+    .orderBy(issuances.day, desc(issuances.publishedAt));
+}
+
+/** Per day, the last moment an issuance stopped being in force (expired or withdrawn) at or before `now`. */
+async function dayEndings(db: Database, now: Date): Promise<DayEnding[]> {
+  const endedAt = sql<Date>`case when ${issuances.state} = 'withdrawn' then least(${issuances.withdrawnAt}, ${issuances.validUntil}) else ${issuances.validUntil} end`;
+  const rows = await db
+    .select({ day: issuances.day, endedAt: sql<string>`max(${endedAt})` })
+    .from(issuances)
+    .where(and(inArray(issuances.state, ['published', 'withdrawn']), sql`${endedAt} <= ${now.toISOString()}::timestamptz`))
+    .groupBy(issuances.day);
+  return rows.map((r) => ({ day: r.day, endedAt: new Date(r.endedAt) }));
+}
+
+/**
+ * The bulletin: per outlook day, the issuance in force at `now` (amendments replace what they
+ * supersede; withdrawn ones come as a notice), or since when none has been in force.
+ */
+export async function currentBulletin(db: Database, now = new Date()): Promise<Result<Bulletin, AppError>> {
+  const [candidates, endings] = await Promise.all([bulletinCandidates(db, now), dayEndings(db, now)]);
+  const days = inForceByDay(candidates, endings, now);
+  const shown = days.flatMap((d) => (d.status === 'in_force' ? [d.issuance] : []));
+  const views = await Promise.all(shown.map((r) => toView(db, r)));
+  return ok({
+    issuances: views,
+    days: days.map(
+      (d): BulletinDay => ({
+        day: d.day,
+        status: d.status,
+        issuanceNumber: d.status === 'in_force' ? d.issuance.number : null,
+        since: d.status === 'none_in_force' ? (d.since?.toISOString() ?? null) : null,
+        withdrawn: d.withdrawn
+          ? { number: d.withdrawn.number, reason: d.withdrawn.withdrawnReason, withdrawnAt: d.withdrawn.withdrawnAt?.toISOString() ?? null, validUntil: d.withdrawn.validUntil.toISOString() }
+          : null,
+      }),
+    ),
+    asOf: now.toISOString(),
+    caution: publicCaution,
+  });
 }
 
 /** The archive: every issuance (superseded and withdrawn included), newest first, searchable. */
@@ -250,16 +293,33 @@ export async function issuanceMap(db: Database, number: string, format: 'svg' | 
   return ok(format === 'svg' ? image.value.content : imageBytes(image.value));
 }
 
-export async function atomFeed(db: Database, publicUrl: string): Promise<Result<string, AppError>> {
+/**
+ * The Atom feed of what is current at `now`, by the bulletin's rule: each issuance in force, and
+ * a notice for each withdrawn one whose period has not ended. An expired issuance drops out.
+ */
+export async function atomFeed(db: Database, publicUrl: string, now = new Date()): Promise<Result<string, AppError>> {
   const office = await findOffice(db);
-  const rows = await db.select().from(issuances).orderBy(desc(issuances.publishedAt)).limit(50);
+  const [candidates, endings] = await Promise.all([bulletinCandidates(db, now), dayEndings(db, now)]);
+  const days = inForceByDay(candidates, endings, now);
+  const rows = days.flatMap((d) => [...(d.status === 'in_force' ? [d.issuance] : []), ...(d.withdrawn ? [d.withdrawn] : [])]);
+  const changedAt = (r: IssuanceRow) => Math.max(r.publishedAt.getTime(), r.withdrawnAt?.getTime() ?? 0);
+  const lastEnding = Math.max(0, ...endings.map((e) => new Date(e.endedAt).getTime()));
   return ok(
     buildAtomFeed({
       officeName: office?.name ?? 'Stormdraft',
       publicUrl,
       caution: publicCaution,
-      updated: rows[0]?.publishedAt ?? new Date(0),
-      entries: rows.map((r) => ({ number: r.number, day: r.day, state: r.state, headline: r.snapshot.headline, validFrom: r.validFrom.toISOString(), validUntil: r.validUntil.toISOString(), publishedAt: r.publishedAt.toISOString() })),
+      updated: new Date(Math.max(lastEnding, ...rows.map(changedAt))),
+      entries: rows.map((r) => ({
+        number: r.number,
+        day: r.day,
+        state: r.state,
+        headline: r.snapshot.headline,
+        validFrom: r.validFrom.toISOString(),
+        validUntil: r.validUntil.toISOString(),
+        publishedAt: new Date(changedAt(r)).toISOString(),
+        ...(r.state === 'withdrawn' ? { notice: `Withdrawn: ${r.withdrawnReason ?? 'no reason given'}. This outlook is no longer in force.` } : {}),
+      })),
     }),
   );
 }

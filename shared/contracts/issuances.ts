@@ -62,7 +62,17 @@ export const archiveEntrySchema = issuanceBaseSchema.extend({ headline: z.string
 export type ArchiveEntry = z.infer<typeof archiveEntrySchema>;
 
 /** GET /api/public/bulletin */
-export const bulletinSchema = z.object({ issuances: z.array(issuanceSchema), caution: z.string() });
+/** One outlook day on the bulletin: what is in force, or since when nothing is, and any withdrawal to announce. */
+export const bulletinDaySchema = z.object({
+  day: z.number(),
+  status: z.enum(['in_force', 'none_in_force']),
+  issuanceNumber: z.string().nullable(),
+  since: z.string().nullable(),
+  withdrawn: z.object({ number: z.string(), reason: z.string().nullable(), withdrawnAt: z.string().nullable(), validUntil: z.string() }).nullable(),
+});
+export type BulletinDay = z.infer<typeof bulletinDaySchema>;
+
+export const bulletinSchema = z.object({ issuances: z.array(issuanceSchema), days: z.array(bulletinDaySchema).default([]), asOf: z.string().optional(), caution: z.string() });
 export type Bulletin = z.infer<typeof bulletinSchema>;
 
 /** GET /api/public/issuances (the archive) */

@@ -7,7 +7,6 @@ import type { Role } from '../../shared/contracts/common';
 import { adminRoles, authoringRoles, officeReaderRoles, hasRole, reviewingRoles, subscriberOverseerRoles, subscriberRoles, webhookManagerRoles } from '../../shared/workflow/roles';
 import { homePathFor } from '../utils/roles';
 import { NotFoundPage } from './not-found';
-import { RoleGate } from './layouts/role-gate';
 import { RouteErrorPage } from './route-error';
 
 type PageLoader = () => Promise<unknown>;
@@ -21,6 +20,14 @@ function loaderForRoles(queryClient: QueryClient, roles: readonly Role[], load?:
     const me = await queryClient.ensureQueryData(meQueryOptions());
     if (me && hasRole(me.user.role, roles) && load) await load();
     return null;
+  };
+}
+
+/** The role check of a group of staff pages, loaded with them (the public pages never need it). */
+function roleGate(roles: readonly Role[]) {
+  return async () => {
+    const { RoleGate } = await import('./layouts/role-gate');
+    return { element: <RoleGate roles={roles} /> };
   };
 }
 
@@ -110,7 +117,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
           },
           children: [
             {
-              element: <RoleGate roles={authoringRoles} />,
+              lazy: roleGate(authoringRoles),
               children: [
                 {
                   path: 'desk',
@@ -120,7 +127,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               ],
             },
             {
-              element: <RoleGate roles={officeReaderRoles} />,
+              lazy: roleGate(officeReaderRoles),
               children: [
                 {
                   path: 'outlooks/:outlookId',
@@ -137,7 +144,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               ],
             },
             {
-              element: <RoleGate roles={authoringRoles} />,
+              lazy: roleGate(authoringRoles),
               children: [
                 {
                   path: 'soundings/upload',
@@ -147,7 +154,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               ],
             },
             {
-              element: <RoleGate roles={officeReaderRoles} />,
+              lazy: roleGate(officeReaderRoles),
               children: [
                 {
                   path: 'soundings',
@@ -171,7 +178,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               ],
             },
             {
-              element: <RoleGate roles={reviewingRoles} />,
+              lazy: roleGate(reviewingRoles),
               children: [
                 {
                   path: 'review',
@@ -183,7 +190,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               ],
             },
             {
-              element: <RoleGate roles={authoringRoles} />,
+              lazy: roleGate(authoringRoles),
               children: [
                 {
                   path: 'review/:outlookId',
@@ -195,7 +202,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               ],
             },
             {
-              element: <RoleGate roles={subscriberRoles} />,
+              lazy: roleGate(subscriberRoles),
               children: [
                 {
                   path: 'alerts',
@@ -207,7 +214,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               ],
             },
             {
-              element: <RoleGate roles={webhookManagerRoles} />,
+              lazy: roleGate(webhookManagerRoles),
               children: [
                 {
                   path: 'webhooks',
@@ -219,7 +226,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               ],
             },
             {
-              element: <RoleGate roles={subscriberOverseerRoles} />,
+              lazy: roleGate(subscriberOverseerRoles),
               children: [
                 {
                   path: 'subscribers',
@@ -232,7 +239,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
             },
             {
               path: 'admin',
-              element: <RoleGate roles={adminRoles} />,
+              lazy: roleGate(adminRoles),
               children: [
                 { index: true, Component: InitialLoading, loader: () => redirect('/admin/users') },
                 {

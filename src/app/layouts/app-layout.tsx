@@ -39,7 +39,8 @@ export function AppLayout() {
   };
 
   return (
-    <div className="flex h-dvh flex-col">
+    // Phones: the document scrolls (nothing is cut off); from md up, the page scrolls beside the navigation.
+    <div className="flex min-h-dvh flex-col md:h-dvh">
       <a
         href="#main"
         className="sr-only focus:not-sr-only focus:absolute focus:top-2 focus:left-2 focus:z-50 focus:rounded focus:bg-panel focus:px-3 focus:py-2 focus:text-sm"
@@ -47,9 +48,9 @@ export function AppLayout() {
         Skip to content
       </a>
       <StatusStrip officeName={office.data?.name} timeZone={office.data?.timeZone} onSlot={setSlot} />
-      <div className="flex min-h-0 flex-1 flex-col md:flex-row">
+      <div className="flex flex-1 flex-col md:min-h-0 md:flex-row">
         <AppNav user={me.data.user} onSignOut={handleSignOut} signingOut={signOut.isPending} />
-        <main id="main" tabIndex={-1} className="min-w-0 flex-1 overflow-y-auto px-6 pt-5 focus:outline-none">
+        <main id="main" tabIndex={-1} className="min-w-0 flex-1 px-3 pt-4 focus:outline-none sm:px-6 sm:pt-5 md:overflow-y-auto">
           <StatusStripSlotProvider slot={slot}>
             <Outlet />
             <div className="h-6" aria-hidden />

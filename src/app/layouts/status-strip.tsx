@@ -1,15 +1,7 @@
-import { createContext, useContext, useEffect, useState, type ReactNode } from 'react';
+import { createContext, useContext, type ReactNode } from 'react';
 import { createPortal } from 'react-dom';
+import { useNow } from '../../hooks/use-now';
 import { readClock } from '../../utils/time';
-
-function useNow(intervalMs = 15_000): Date {
-  const [now, setNow] = useState(() => new Date());
-  useEffect(() => {
-    const timer = window.setInterval(() => setNow(new Date()), intervalMs);
-    return () => window.clearInterval(timer);
-  }, [intervalMs]);
-  return now;
-}
 
 function Clock({ instant, timeZone, label }: { instant: Date; timeZone: string; label: string }) {
   const reading = readClock(instant, timeZone);
@@ -49,7 +41,7 @@ export function StatusStrip({ officeName, timeZone, children, onSlot }: StatusSt
     <div
       role="region"
       aria-label="Status"
-      className="flex h-10 shrink-0 items-center gap-4 border-b border-black/20 bg-strip px-4 text-[13px] text-strip-ink"
+      className="flex min-h-10 shrink-0 flex-wrap items-center gap-x-4 gap-y-1 border-b border-black/20 bg-strip px-3 py-1.5 text-[13px] text-strip-ink sm:px-4"
     >
       <span className="flex items-center gap-2 font-semibold text-white">
         <span aria-hidden className="flex gap-0.5">
@@ -59,11 +51,11 @@ export function StatusStrip({ officeName, timeZone, children, onSlot }: StatusSt
         </span>
         Stormdraft
       </span>
-      <span aria-hidden className="h-4 w-px bg-white/20" />
-      <span className="truncate">{officeName ?? 'Loading office…'}</span>
+      <span aria-hidden className="hidden h-4 w-px bg-white/20 sm:inline" />
+      <span className="min-w-0 truncate">{officeName ?? 'Loading office…'}</span>
       {children}
-      <span ref={onSlot} className="flex min-w-0 items-center gap-3" />
-      <span className="ml-auto flex shrink-0 items-center gap-4">
+      <span ref={onSlot} className="flex min-w-0 flex-wrap items-center gap-x-3 gap-y-1" />
+      <span className="ml-auto flex shrink-0 flex-wrap items-center gap-x-4 gap-y-1">
         <Clock instant={now} timeZone="UTC" label="Time in UTC" />
         {timeZone ? <Clock instant={now} timeZone={timeZone} label="Office local time" /> : null}
       </span>

@@ -12,9 +12,9 @@ export function AccountPage() {
   return (
     <>
       <PageHeader title="Account" description="Who you are signed in as, and how numbers are shown to you." />
-      <div className="grid max-w-3xl gap-4">
+      <div className="grid max-w-3xl grid-cols-[minmax(0,1fr)] gap-4">
         <Panel title="Profile" description="Your administrator manages names, e-mail addresses and roles.">
-          <dl className="grid grid-cols-[8rem_1fr] gap-y-2 text-sm">
+          <dl className="grid grid-cols-[8rem_minmax(0,1fr)] gap-y-2 text-sm [&_dd]:break-words">
             <dt className="text-ink-muted">Name</dt>
             <dd>{user.name}</dd>
             <dt className="text-ink-muted">E-mail</dt>

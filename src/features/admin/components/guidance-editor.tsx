@@ -16,7 +16,7 @@ const columns: Record<ThresholdParameterKey, { label: string; unit: string }> = 
 /** A table of minimum medians per level: the support check compares each area's evidence with its row. */
 export function GuidanceEditor({ levels, value, onChange, errors }: { levels: EditableLevel[]; value: GuidanceText; onChange: (next: GuidanceText) => void; errors: Record<string, string> }) {
   return (
-    <div className="overflow-x-auto">
+    <div className="relative overflow-x-auto">
       <table className="w-full text-[13px] tabular-nums">
         <caption className="sr-only">Guidance thresholds: the median each level should reach</caption>
         <thead>

@@ -36,8 +36,8 @@ export function UsersTable({ users, currentUserId }: UsersTableProps) {
   return (
     <div className="space-y-3">
       {problem ? <Notice tone="error">{problem}</Notice> : null}
-      <div className="overflow-x-auto rounded-lg border border-line bg-panel">
-        <table className="w-full text-left text-sm">
+      <div className="relative overflow-x-auto rounded-lg border border-line bg-panel">
+        <table className="w-full min-w-[36rem] text-left text-sm">
           <caption className="sr-only">Users of this office</caption>
           <thead className="border-b border-line bg-sunken text-[12px] font-semibold tracking-wide text-ink-muted uppercase">
             <tr>

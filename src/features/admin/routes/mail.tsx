@@ -43,7 +43,7 @@ export function MailPage() {
         </EmptyState>
       ) : null}
       {messages.data && messages.data.messages.length > 0 ? (
-        <div className="grid items-start gap-5 xl:grid-cols-[minmax(0,26rem)_minmax(0,1fr)]">
+        <div className="grid grid-cols-[minmax(0,1fr)] items-start gap-5 xl:grid-cols-[minmax(0,26rem)_minmax(0,1fr)]">
           <nav aria-label="Caught messages" className="overflow-hidden rounded-lg border border-line bg-panel">
             <ul className="divide-y divide-line">
               {messages.data.messages.map((message) => {

@@ -54,7 +54,7 @@ export function OutboxPage() {
           <p className="mb-2 text-[13px] text-ink-muted" aria-live="polite">
             {counts.queued} queued · {counts.sending} sending · {counts.sent} sent · {counts.failed} failed
           </p>
-          <div className="overflow-x-auto rounded-lg border border-line bg-panel">
+          <div className="relative overflow-x-auto rounded-lg border border-line bg-panel">
             <table className="w-full text-left text-sm">
               <caption className="sr-only">Outbox messages</caption>
               <thead className="border-b border-line bg-sunken text-[13px] text-ink-muted">

@@ -17,7 +17,7 @@ export function UsersPage() {
   return (
     <>
       <PageHeader title="Users" description="Everyone who can sign in to this office: staff and alert subscribers." />
-      <div className="grid items-start gap-5 2xl:grid-cols-[minmax(0,1fr)_20rem]">
+      <div className="grid grid-cols-[minmax(0,1fr)] items-start gap-5 2xl:grid-cols-[minmax(0,1fr)_20rem]">
         <div>
           {users.isPending ? <Loading label="Loading users…" /> : null}
           {users.isError ? (

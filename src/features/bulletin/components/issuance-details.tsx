@@ -1,24 +1,27 @@
+import type { ReactNode } from 'react';
 import { Link } from 'react-router';
 import { hazardKinds, hazardLabels } from '../../../../shared/contracts/outlooks';
-import { supportResultLabels } from '../../../../shared/evidence/support-check';
 import { RiskSwatch } from '../../../components/ui/risk-swatch';
 import type { Issuance } from '../api/issuance-schema';
 import { dayLabel, formatInstant, hazardsText, levelsPresent, stepFor, validPeriodText } from '../utils/issuance-format';
 import { boundsOfAreas, mapAreasOf } from '../utils/map-areas';
 import { DiscussionText } from './discussion-text';
 import { IssuanceDownloads } from './issuance-downloads';
+import { IssuanceMap } from './issuance-map';
 import { IssuanceStateBadge } from './issuance-state-badge';
 import { MapLegend } from './map-legend';
-import { RiskAreaMap } from '../../../lib/map/risk-area-map';
 
 interface IssuanceDetailsProps {
   issuance: Issuance;
-  /** The bulletin links to the permanent page; the permanent page adds evidence and names. */
+  /** The bulletin links to the permanent page; the permanent page adds evidence and names (as children). */
   variant: 'bulletin' | 'page';
+  /** The time "in force" is judged at (the page's clock). */
+  now: Date;
+  children?: ReactNode;
 }
 
 /** Everything the public needs from one issuance: map, legend, headline, valid times, discussion. */
-export function IssuanceDetails({ issuance, variant }: IssuanceDetailsProps) {
+export function IssuanceDetails({ issuance, variant, now, children }: IssuanceDetailsProps) {
   const snapshot = issuance.snapshot;
   const ladder = snapshot.riskLadder;
   const areas = mapAreasOf(snapshot.areas, ladder);
@@ -42,7 +45,7 @@ export function IssuanceDetails({ issuance, variant }: IssuanceDetailsProps) {
               <span className="font-semibold text-ink">{issuance.number}</span>
             )}
           </span>
-          <IssuanceStateBadge state={issuance.state} />
+          <IssuanceStateBadge issuance={issuance} now={now} />
           <span aria-hidden>·</span>
           <span>Published {formatInstant(issuance.publishedAt)}</span>
         </div>
@@ -59,7 +62,7 @@ export function IssuanceDetails({ issuance, variant }: IssuanceDetailsProps) {
 
       <div className="grid gap-4 lg:grid-cols-[minmax(0,1fr)_18rem]">
         <div className="space-y-2">
-          <RiskAreaMap label={`Risk map of issuance ${issuance.number}`} bounds={bounds} areas={areas} className="h-[26rem] rounded-md border border-line" />
+          <IssuanceMap label={`Risk map of issuance ${issuance.number}`} bounds={bounds} areas={areas} />
           <MapLegend levels={levelsPresent(ladder, snapshot.areas.map((a) => a.levelKey))} significantShown={areas.some((a) => a.significant)} />
         </div>
         <section aria-labelledby={`areas-${issuance.number}`} className="rounded-md border border-line bg-panel p-3">
@@ -102,56 +105,7 @@ export function IssuanceDetails({ issuance, variant }: IssuanceDetailsProps) {
         ) : null}
       </section>
 
-      {variant === 'page' ? (
-        <>
-          <section aria-labelledby={`evidence-${issuance.number}`} className="rounded-md border border-line bg-panel p-4">
-            <h3 id={`evidence-${issuance.number}`} className="mb-2 text-sm font-semibold">
-              Evidence at publication
-            </h3>
-            {snapshot.evidence.length === 0 ? (
-              <p className="text-sm text-ink-muted">No evidence summary was recorded.</p>
-            ) : (
-              <table className="w-full text-left text-sm">
-                <thead className="text-[13px] text-ink-muted">
-                  <tr>
-                    <th className="py-1 pr-3 font-medium">Area</th>
-                    <th className="py-1 pr-3 font-medium">Soundings inside</th>
-                    <th className="py-1 font-medium">Support check</th>
-                  </tr>
-                </thead>
-                <tbody>
-                  {snapshot.evidence.map((row) => {
-                    const area = snapshot.areas.find((a) => a.id === row.areaId);
-                    return (
-                      <tr key={row.areaId} className="border-t border-line align-top">
-                        <td className="py-1.5 pr-3">
-                          {stepFor(ladder, row.levelKey).label}
-                          {area?.label ? <span className="text-ink-muted"> — {area.label}</span> : null}
-                        </td>
-                        <td className="py-1.5 pr-3">{row.count}</td>
-                        <td className="py-1.5">
-                          <span className="font-medium">{supportResultLabels[row.support.result]}</span>
-                          {row.support.reasons.length ? <span className="block text-[13px] text-ink-muted">{row.support.reasons.join('; ')}</span> : null}
-                        </td>
-                      </tr>
-                    );
-                  })}
-                </tbody>
-              </table>
-            )}
-          </section>
-          <dl className="grid grid-cols-[auto_minmax(0,1fr)] gap-x-3 gap-y-0.5 text-sm">
-            <dt className="text-ink-muted">Office</dt>
-            <dd>{snapshot.office.name}</dd>
-            <dt className="text-ink-muted">Written by</dt>
-            <dd>{snapshot.authorName ?? '—'}</dd>
-            <dt className="text-ink-muted">Approved by</dt>
-            <dd>{snapshot.approverName ?? '—'}</dd>
-            <dt className="text-ink-muted">Published by</dt>
-            <dd>{snapshot.publisherName ?? '—'}</dd>
-          </dl>
-        </>
-      ) : null}
+      {children}
 
       <IssuanceDownloads issuanceNumber={issuance.number} />
     </article>

@@ -21,7 +21,7 @@ export function IssuanceDownloads({ issuanceNumber }: { issuanceNumber: string }
         <li>
           <a href={feedHref} className="inline-flex items-center gap-1 text-accent hover:underline">
             <Rss aria-hidden className="size-3.5" />
-            Atom feed of issuances
+            Atom feed of outlooks in force
           </a>
         </li>
       </ul>

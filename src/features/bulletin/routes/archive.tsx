@@ -11,6 +11,7 @@ import { archiveQuery, useArchive } from '../api/get-archive';
 import { IssuanceStateBadge } from '../components/issuance-state-badge';
 import { archiveQueryFrom, archiveSearchFor, pageCount } from '../utils/archive-search';
 import { dayLabel, formatInstant } from '../utils/issuance-format';
+import { useNow } from '../../../hooks/use-now';
 
 export const archiveLoader =
   (queryClient: QueryClient) =>
@@ -24,6 +25,7 @@ export function ArchivePage() {
   const [searchParams, setSearchParams] = useSearchParams();
   const query = archiveQueryFrom(searchParams);
   const archive = useArchive(query);
+  const now = useNow();
   const [text, setText] = useState(query.q ?? '');
   const [date, setDate] = useState(query.date ?? '');
 
@@ -67,7 +69,7 @@ export function ArchivePage() {
       ) : null}
 
       {archive.data && archive.data.issuances.length > 0 ? (
-        <section aria-label="Issuances" className="overflow-x-auto rounded-lg border border-line bg-panel">
+        <section aria-label="Issuances" className="relative overflow-x-auto rounded-lg border border-line bg-panel">
           <table className="w-full text-left text-sm">
             <thead className="border-b border-line bg-sunken text-[13px] text-ink-muted">
               <tr>
@@ -88,7 +90,7 @@ export function ArchivePage() {
                   </td>
                   <td className="px-3 py-2 whitespace-nowrap">{dayLabel(issuance.day)}</td>
                   <td className="px-3 py-2">
-                    <IssuanceStateBadge state={issuance.state} />
+                    <IssuanceStateBadge issuance={issuance} now={now} />
                     {issuance.state === 'superseded' && issuance.supersededByNumber ? (
                       <span className="block text-[12px] text-ink-muted">by {issuance.supersededByNumber}</span>
                     ) : null}

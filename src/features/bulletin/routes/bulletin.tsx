@@ -10,10 +10,12 @@ import { Loading } from '../../../components/ui/loading';
 import { Notice } from '../../../components/ui/notice';
 import { RiskSwatch } from '../../../components/ui/risk-swatch';
 import { useMe } from '../../../hooks/use-me';
+import { useNow } from '../../../hooks/use-now';
 import { useOffice } from '../../../hooks/use-office';
 import { bulletinQuery, useBulletin } from '../../../api/issuances/get-bulletin';
 import { IssuanceDetails } from '../components/issuance-details';
-import { dayLabel } from '../utils/issuance-format';
+import { noneInForceText, shownDays } from '../utils/bulletin-days';
+import { dayLabel, formatInstant } from '../utils/issuance-format';
 
 /** Warms the bulletin while the page's code loads. */
 export const bulletinLoader = (queryClient: QueryClient) => () => {
@@ -21,15 +23,17 @@ export const bulletinLoader = (queryClient: QueryClient) => () => {
   return null;
 };
 
-/** The public bulletin: the current issuance of each day, open to everyone. */
+/** The public bulletin: per outlook day, the issuance in force now, open to everyone. */
 export function BulletinPage() {
   const office = useOffice();
   const me = useMe();
   const bulletin = useBulletin();
+  const now = useNow();
   const signedIn = Boolean(me.data);
-  const issuances = bulletin.data?.issuances ?? [];
+  const days = bulletin.data ? shownDays(bulletin.data.days, bulletin.data.issuances, now) : [];
   const [chosenDay, setChosenDay] = useState<number | null>(null);
-  const shown = issuances.find((i) => i.day === chosenDay) ?? issuances[0];
+  const shown = days.find((d) => d.day === chosenDay) ?? days.find((d) => d.kind === 'in_force') ?? days[0];
+  const timeZone = office.data?.timeZone ?? 'UTC';
 
   return (
     <div className="space-y-6">
@@ -38,7 +42,7 @@ export function BulletinPage() {
         <h1 className="mt-1 text-2xl font-semibold tracking-tight">Severe-thunderstorm outlook</h1>
         <p className="mt-1 max-w-prose text-sm text-ink-muted">
           Where thunderstorms and severe storms are expected over the next one to three days, graded by risk level, with the
-          forecasters’ discussion.{' '}
+          forecasters’ discussion. Only outlooks in force are shown here.{' '}
           <Link to="/archive" className="text-accent hover:underline">
             Earlier issuances are in the archive.
           </Link>
@@ -72,31 +76,50 @@ export function BulletinPage() {
       ) : null}
 
       {shown ? (
-        <section aria-label="Current outlooks" className="rounded-lg border border-line bg-panel">
-          <div role="tablist" aria-label="Outlook day" className="flex gap-1 border-b border-line px-3 pt-2">
-            {issuances.map((issuance) => {
-              const selected = issuance.number === shown.number;
+        <section aria-label="Outlooks in force" className="rounded-lg border border-line bg-panel">
+          <div role="tablist" aria-label="Outlook day" className="flex gap-1 overflow-x-auto border-b border-line px-3 pt-2">
+            {days.map((day) => {
+              const selected = day.day === shown.day;
               return (
                 <button
-                  key={issuance.number}
+                  key={day.day}
                   type="button"
                   role="tab"
-                  id={`tab-day-${issuance.day}`}
+                  id={`tab-day-${day.day}`}
                   aria-selected={selected}
-                  aria-controls={`panel-day-${issuance.day}`}
-                  onClick={() => setChosenDay(issuance.day)}
+                  aria-controls={`panel-day-${day.day}`}
+                  onClick={() => setChosenDay(day.day)}
                   className={clsx(
-                    '-mb-px rounded-t-md border px-3.5 py-1.5 text-sm font-medium',
+                    '-mb-px shrink-0 rounded-t-md border px-3.5 py-1.5 text-sm font-medium',
                     selected ? 'border-line border-b-panel bg-panel text-ink' : 'border-transparent text-ink-muted hover:text-ink',
                   )}
                 >
-                  {dayLabel(issuance.day)}
+                  {dayLabel(day.day)}
+                  {day.kind === 'none_in_force' ? <span className="ml-1 font-normal text-ink-muted">· none in force</span> : null}
                 </button>
               );
             })}
           </div>
-          <div role="tabpanel" id={`panel-day-${shown.day}`} aria-labelledby={`tab-day-${shown.day}`} className="p-4">
-            <IssuanceDetails issuance={shown} variant="bulletin" />
+          <div role="tabpanel" id={`panel-day-${shown.day}`} aria-labelledby={`tab-day-${shown.day}`} className="space-y-4 p-3 sm:p-4">
+            {shown.withdrawn ? (
+              <Notice tone="warning" title={`${dayLabel(shown.day)} issuance ${shown.withdrawn.number} was withdrawn`}>
+                {shown.withdrawn.withdrawnAt ? `Withdrawn ${formatInstant(shown.withdrawn.withdrawnAt)}. ` : null}
+                Reason: {shown.withdrawn.reason ?? 'none given'}. Do not use it for planning.{' '}
+                <Link to={`/issuances/${shown.withdrawn.number}`} className="font-semibold text-accent hover:underline">
+                  Read the withdrawn issuance.
+                </Link>
+              </Notice>
+            ) : null}
+            {shown.kind === 'in_force' ? (
+              <IssuanceDetails issuance={shown.issuance} variant="bulletin" now={now} />
+            ) : (
+              <p className="rounded-md border border-line bg-sunken px-3 py-3 text-sm font-medium text-ink">
+                {noneInForceText(shown.day, shown.since, timeZone)}{' '}
+                <Link to="/archive" className="font-normal text-accent hover:underline">
+                  Earlier issuances are in the archive.
+                </Link>
+              </p>
+            )}
           </div>
         </section>
       ) : null}

@@ -7,6 +7,9 @@ import { isApiError } from '../../../lib/api-client';
 import { issuanceQuery, useIssuance } from '../api/get-issuance';
 import { IssuanceDetails } from '../components/issuance-details';
 import { IssuanceLeadActions } from '../components/issuance-lead-actions';
+import { IssuanceRecord } from '../components/issuance-record';
+import { issuanceStanding } from '../components/issuance-state-badge';
+import { useNow } from '../../../hooks/use-now';
 import { formatInstant } from '../utils/issuance-format';
 
 export const issuanceLoader =
@@ -22,6 +25,8 @@ export function IssuancePage() {
   const issuance = useIssuance(issuanceNumber);
   const me = useMe();
   const isLead = me.data?.user.role === 'lead';
+  const now = useNow();
+  const officeZone = issuance.data?.snapshot.office.timeZone ?? 'UTC';
 
   return (
     <div className="space-y-5">
@@ -75,7 +80,18 @@ export function IssuancePage() {
               .
             </p>
           ) : null}
-          <IssuanceDetails issuance={issuance.data} variant="page" />
+          {issuanceStanding(issuance.data, now) === 'expired' ? (
+            <Notice tone="warning" title="This outlook has expired">
+              Its valid period ended {formatInstant(issuance.data.validUntil)}
+              {officeZone !== 'UTC' ? ` (${formatInstant(issuance.data.validUntil, officeZone)})` : ''}. It is no longer in force and stays here as a record.{' '}
+              <Link to="/bulletin" className="font-semibold text-accent hover:underline">
+                See what is in force now.
+              </Link>
+            </Notice>
+          ) : null}
+          <IssuanceDetails issuance={issuance.data} variant="page" now={now}>
+            <IssuanceRecord issuance={issuance.data} />
+          </IssuanceDetails>
           {isLead && issuance.data.state === 'published' ? <IssuanceLeadActions issuance={issuance.data} /> : null}
         </>
       ) : null}

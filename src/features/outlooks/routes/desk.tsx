@@ -127,7 +127,7 @@ export function DeskPage() {
           </EmptyState>
         ) : null}
         {outlooks.data && outlooks.data.outlooks.length > 0 ? (
-          <div className="overflow-x-auto rounded-lg border border-line bg-panel">
+          <div className="relative overflow-x-auto rounded-lg border border-line bg-panel">
             <table className="w-full text-sm">
               <caption className="sr-only">Outlooks</caption>
               <thead className="border-b border-line bg-sunken text-left text-[12px] text-ink-muted">

@@ -53,7 +53,7 @@ export function OutlookRevisionPage() {
           </ButtonLink>
         }
       />
-      <div className="grid items-start gap-4 xl:grid-cols-[minmax(0,1fr)_24rem]">
+      <div className="grid grid-cols-[minmax(0,1fr)] items-start gap-4 xl:grid-cols-[minmax(0,1fr)_24rem]">
         <AreaEditorMap
           label="Revision map"
           className="h-[60dvh] min-h-96"

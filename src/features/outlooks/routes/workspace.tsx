@@ -234,7 +234,7 @@ function Workspace({ initial, office, mayAuthor }: { initial: Outlook; office: O
         onHelp={() => setHelpOpen((open) => !open)}
       />
 
-      <div className="grid items-start gap-3 xl:grid-cols-[minmax(0,1fr)_24rem]">
+      <div className="grid grid-cols-[minmax(0,1fr)] items-start gap-3 xl:grid-cols-[minmax(0,1fr)_24rem]">
         <div className="space-y-2">
           <div className="relative">
             <AreaEditorMap

@@ -38,7 +38,7 @@ export function ReviewQueuePage() {
         </EmptyState>
       ) : null}
       {outlooks.length > 0 ? (
-        <div className="overflow-x-auto rounded-lg border border-line bg-panel">
+        <div className="relative overflow-x-auto rounded-lg border border-line bg-panel">
           <table className="w-full text-left text-sm">
             <thead className="border-b border-line bg-sunken text-[13px] text-ink-muted">
               <tr>

@@ -115,9 +115,9 @@ export function ReviewPage() {
         </Notice>
       ) : null}
 
-      <div className="grid gap-4 xl:grid-cols-[minmax(0,1fr)_24rem]">
+      <div className="grid grid-cols-[minmax(0,1fr)] gap-4 xl:grid-cols-[minmax(0,1fr)_24rem]">
         <div className="space-y-4">
-          <div className="grid gap-3 md:grid-cols-2">
+          <div className="grid grid-cols-[minmax(0,1fr)] gap-3 md:grid-cols-2">
             <figure className="space-y-1">
               <figcaption className="text-[13px] font-semibold">This draft</figcaption>
               <RiskAreaMap label="Map of the draft under review" bounds={region} areas={reviewMapAreas(draft.areas, ladder)} className="h-80 rounded-md border border-line" />

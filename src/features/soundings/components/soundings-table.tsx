@@ -128,7 +128,7 @@ export function SoundingsTable({ soundings, sort, order, onSortChange, units, ti
   });
 
   return (
-    <div className="overflow-x-auto rounded-lg border border-line bg-panel">
+    <div className="relative overflow-x-auto rounded-lg border border-line bg-panel">
       <table className="w-full text-left text-sm">
         <caption className="sr-only">Soundings, one server page; column headings sort</caption>
         <thead className="border-b border-line bg-sunken text-[12px] font-semibold tracking-wide text-ink-muted">

@@ -117,7 +117,7 @@ export function SoundingMapPage() {
       {region === undefined ? (
         <Loading label="Loading the map…" />
       ) : (
-        <div className="grid items-start gap-3 xl:grid-cols-[minmax(0,1fr)_18rem]">
+        <div className="grid grid-cols-[minmax(0,1fr)] items-start gap-3 xl:grid-cols-[minmax(0,1fr)_18rem]">
           <PointMap
             label="Map of soundings"
             className="h-[calc(100dvh-15rem)] min-h-96"

@@ -38,7 +38,7 @@ export function MyAlertsPage() {
       {subscription.data && office.data ? (
         <div className="space-y-4">
           <SubscriptionStanding subscription={subscription.data} ladder={office.data.riskLadder} />
-          <div className="grid items-start gap-4 xl:grid-cols-[minmax(0,1fr)_26rem]">
+          <div className="grid grid-cols-[minmax(0,1fr)] items-start gap-4 xl:grid-cols-[minmax(0,1fr)_26rem]">
             <Panel title="Areas of interest" description="Alerts cover these areas only. Draw one on the map, or add a county or state.">
               <AreasOfInterestPanel subscription={subscription.data} region={office.data.region} />
             </Panel>

@@ -60,8 +60,8 @@ export function SubscribersPage() {
             mode="select"
             onSelect={setSelectedId}
           />
-          <div className="overflow-x-auto rounded-lg border border-line bg-panel">
-            <table className="w-full text-left text-sm">
+          <div className="relative overflow-x-auto rounded-lg border border-line bg-panel">
+            <table className="w-full min-w-[36rem] text-left text-sm">
               <caption className="sr-only">Subscribers</caption>
               <thead className="border-b border-line bg-sunken text-[13px] text-ink-muted">
                 <tr>
