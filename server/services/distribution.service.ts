@@ -72,8 +72,8 @@ export async function queueIssuanceNotices(tx: Transaction, config: Config, offi
     if (!sub.days.includes(issuance.day)) continue;
     const areas = aoi.filter((a) => a.subscriptionId === sub.id);
     if (areas.length === 0) continue;
-    const geometries = areas.map((a) => a.geometry as AreaGeometry);
-    const match = matchAreas(geometries, issuance.areas, ladderKeys, sub.hazards as HazardKind[]);
+    const geometries = areas.map((a) => a.geometry);
+    const match = matchAreas(geometries, issuance.areas, ladderKeys, sub.hazards);
     const earlierLevel = earlier.find((n) => n.subscriptionId === sub.id)?.highestLevelKey ?? null;
     const kind = decideNotice(ladderKeys, sub.alertThreshold, match.highestLevelKey, earlierLevel);
     if (!kind) continue;

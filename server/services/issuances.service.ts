@@ -99,7 +99,9 @@ export async function issuanceGeoJson(db: Database, number: string): Promise<Res
   const found = await getIssuance(db, number);
   if (!found.ok) return found;
   const view = found.value;
+  // eslint-disable-next-line @typescript-eslint/no-unsafe-type-assertion -- the snapshot is written by publish from these types; issue 12 item 2 gives it a schema of its own.
   const ladder = (view.snapshot.riskLadder as { key: string; label: string; colour: string }[] | undefined) ?? [];
+  // eslint-disable-next-line @typescript-eslint/no-unsafe-type-assertion -- the snapshot is written by publish from these types; issue 12 item 2 gives it a schema of its own.
   const areas = (view.snapshot.areas as RiskArea[] | undefined) ?? [];
   return ok({
     type: 'FeatureCollection',

@@ -13,7 +13,6 @@ import type { Database, DatabaseOrTransaction } from '../db/client';
 import { auditEvents, outlookRevisions, outlooks, riskAreas, soundings, users } from '../db/schema';
 import { findOffice } from './office.service';
 import { keyFigures } from './soundings.service';
-import type { SoundingAnalysis } from '../../shared/sounding';
 
 type OutlookRow = typeof outlooks.$inferSelect;
 type AreaRow = typeof riskAreas.$inferSelect;
@@ -128,7 +127,7 @@ export async function createOutlook(db: Database, actor: Actor, input: CreateOut
   });
 }
 
-export async function getOutlook(db: Database, outlookId: string): Promise<Result<Outlook, AppError>> {
+export async function getOutlook(db: DatabaseOrTransaction, outlookId: string): Promise<Result<Outlook, AppError>> {
   const outlook = await loadOutlook(db, outlookId);
   return outlook ? ok(outlook) : err(notFound());
 }
@@ -250,7 +249,7 @@ export async function evidenceSoundings(db: DatabaseOrTransaction, validFrom: Da
     validTime: r.validTime.toISOString(),
     source: r.source,
     modified: r.modifiedFromId !== null,
-    figures: keyFigures(r.analysis as unknown as SoundingAnalysis | null),
+    figures: keyFigures(r.analysis),
   }));
 }
 

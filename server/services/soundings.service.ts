@@ -48,7 +48,7 @@ export function keyFigures(analysis: SoundingAnalysis | null): SoundingKeyFigure
 }
 
 function storedAnalysis(row: SoundingRow): SoundingAnalysis | null {
-  return row.analysis && row.engineVersion === ENGINE_VERSION ? (row.analysis as unknown as SoundingAnalysis) : null;
+  return row.analysis && row.engineVersion === ENGINE_VERSION ? row.analysis : null;
 }
 
 function toSummary(row: SoundingRow, uploaderName: string | null): SoundingSummary {
@@ -93,7 +93,7 @@ async function storeSounding(db: Database, office: string, actor: Actor | null, 
       fileName,
       levels: parsed.levels,
       warnings: parsed.warnings,
-      analysis: analysis as unknown as Record<string, unknown>,
+      analysis: analysis,
       engineVersion: ENGINE_VERSION,
       uploadedBy: actor?.userId ?? null,
       ...extra,
@@ -201,16 +201,16 @@ export async function getSounding(db: Database, soundingId: string): Promise<Res
   const [found] = await db.select({ sounding: soundings, uploaderName: users.name }).from(soundings).leftJoin(users, eq(users.id, soundings.uploadedBy)).where(eq(soundings.id, soundingId));
   if (!found) return err(appError('NOT_FOUND', 'There is no sounding with that id. It may have been deleted.'));
   const row = found.sounding;
-  const levels = row.levels as SoundingLevel[];
+  const levels = row.levels;
   let analysis = storedAnalysis(row);
   if (!analysis) {
     analysis = analyzeSounding(levels);
-    await db.update(soundings).set({ analysis: analysis as unknown as Record<string, unknown>, engineVersion: ENGINE_VERSION }).where(eq(soundings.id, row.id));
+    await db.update(soundings).set({ analysis: analysis, engineVersion: ENGINE_VERSION }).where(eq(soundings.id, row.id));
   }
   return ok({
-    ...toSummary({ ...row, analysis: analysis as unknown as Record<string, unknown>, engineVersion: ENGINE_VERSION }, found.uploaderName),
+    ...toSummary({ ...row, analysis: analysis, engineVersion: ENGINE_VERSION }, found.uploaderName),
     levels,
-    warnings: row.warnings as SoundingIssue[],
+    warnings: row.warnings,
     analysis,
     engineVersion: ENGINE_VERSION,
     modificationNote: row.modificationNote,
@@ -238,7 +238,7 @@ export async function deleteSounding(db: Database, actor: Actor, soundingId: str
 export async function saveModifiedSounding(db: Database, actor: Actor, soundingId: string, input: SaveModifiedSoundingInput): Promise<Result<SoundingSummary, AppError>> {
   const [original] = await db.select().from(soundings).where(eq(soundings.id, soundingId));
   if (!original) return err(appError('NOT_FOUND', 'The original sounding no longer exists.'));
-  const levels = (original.levels as SoundingLevel[]).map((level) => ({ ...level }));
+  const levels = original.levels.map((level) => ({ ...level }));
   const surface = levels[0];
   if (!surface) throw new Error(`stored sounding ${soundingId} has no levels`);
   if (input.surfaceTemperatureC !== undefined) surface.temperatureC = input.surfaceTemperatureC;
@@ -269,8 +269,8 @@ export async function refreshStaleAnalyses(db: Database, limit: number): Promise
     .where(or(isNull(soundings.engineVersion), sql`${soundings.engineVersion} <> ${ENGINE_VERSION}`))
     .limit(limit);
   for (const row of stale) {
-    const analysis = analyzeSounding(row.levels as SoundingLevel[]);
-    await db.update(soundings).set({ analysis: analysis as unknown as Record<string, unknown>, engineVersion: ENGINE_VERSION }).where(eq(soundings.id, row.id));
+    const analysis = analyzeSounding(row.levels);
+    await db.update(soundings).set({ analysis: analysis, engineVersion: ENGINE_VERSION }).where(eq(soundings.id, row.id));
   }
   return stale.length;
 }

@@ -43,7 +43,7 @@ async function view(db: Database, row: SubscriptionRow): Promise<SubscriptionVie
     paused: row.paused,
     unsubscribed: row.unsubscribedAt !== null,
     version: row.version,
-    areas: areas.map((a) => ({ id: a.id, name: a.name, kind: a.kind, fipsCode: a.fipsCode, geometry: a.geometry as AreaGeometry })),
+    areas: areas.map((a) => ({ id: a.id, name: a.name, kind: a.kind, fipsCode: a.fipsCode, geometry: a.geometry })),
   };
 }
 

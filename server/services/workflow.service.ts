@@ -101,7 +101,7 @@ type OfficeRow = NonNullable<Awaited<ReturnType<typeof findOffice>>>;
 
 /** Writes the issuance: next number of the office's year, frozen snapshot with evidence and support. */
 async function writeIssuance(tx: Transaction, config: Config, office: OfficeRow, outlookId: string, actor: Actor, hooks: PublishHooks) {
-  const outlook = await getOutlook(tx as unknown as Database, outlookId);
+  const outlook = await getOutlook(tx, outlookId);
   if (!outlook.ok) throw new Error('outlook vanished while publishing');
   const o = outlook.value;
   const now = new Date();
