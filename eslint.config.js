@@ -5,7 +5,7 @@ import jsxA11y from 'eslint-plugin-jsx-a11y';
 import boundaries from 'eslint-plugin-boundaries';
 
 /**
- * Lint rules. The import rules of docs/architecture.md are enforced here rather than remembered:
+ * Lint rules. The architecture's import rules are enforced here rather than remembered:
  * - eslint-plugin-boundaries resolves each import to a file and checks which part of the tree it
  *   lands in, so `../../review/api/x` from inside src/features/outlooks is caught as surely as a
  *   path that spells "features". ESLint's own `no-restricted-imports` only sees the import text.
