@@ -32,7 +32,7 @@ export default defineConfig({
         test: {
           name: 'node',
           environment: 'node',
-          include: ['shared/**/*.test.ts', 'server/**/*.test.ts', 'tests/api/**/*.test.ts', 'tests/e2e/**/*.test.ts'],
+          include: ['shared/**/*.test.ts', 'server/**/*.test.ts', 'tests/api/**/*.test.ts', 'tests/e2e/**/*.test.ts', 'tests/lint/**/*.test.ts'],
           testTimeout: 60_000,
           hookTimeout: 180_000,
           globalSetup: ['tests/api/helpers/global-setup.ts'],

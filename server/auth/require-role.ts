@@ -22,6 +22,16 @@ export interface Actor {
   role: Role;
 }
 
+declare global {
+  // eslint-disable-next-line @typescript-eslint/no-namespace -- Express types res.locals in this global namespace; merging into it is the typed way.
+  namespace Express {
+    interface Locals {
+      /** Set by requireAccess: the signed-in actor, or null on a public route. */
+      actor?: Actor | null;
+    }
+  }
+}
+
 /** Reads the better-auth session for a request; null when there is none (or the user is disabled). */
 export async function readActor(ctx: AppContext, req: Request): Promise<Actor | null> {
   const session = await ctx.auth.api.getSession({ headers: fromNodeHeaders(req.headers) });
@@ -53,7 +63,7 @@ export function requireAccess(ctx: AppContext, rule: Access) {
 
 /** The actor left by requireAccess on a route that is not public. */
 export function actorOf(res: Response): Actor {
-  const actor: unknown = res.locals.actor;
+  const actor = res.locals.actor;
   if (!actor) throw new Error('actorOf() used on a route without a signed-in requirement');
-  return actor as Actor;
+  return actor;
 }

@@ -32,8 +32,8 @@ function main(argv: string[]): void {
   const json = argv.includes('--json');
   const files = argv.filter((arg) => !arg.startsWith('--'));
   const unknown = argv.filter((arg) => arg.startsWith('--') && arg !== '--json');
-  if (files.length !== 1 || unknown.length > 0) fail([USAGE]);
-  const path = files[0] as string;
+  const [path] = files;
+  if (path === undefined || files.length !== 1 || unknown.length > 0) fail([USAGE]);
   const name = basename(path);
 
   let text: string;
@@ -41,7 +41,7 @@ function main(argv: string[]): void {
     if (statSync(path).size > MAX_FILE_BYTES) fail([`${name}: error FILE_TOO_LARGE: the file is larger than 2 MB.`]);
     text = readFileSync(path, 'utf8');
   } catch (error) {
-    fail([`${name}: cannot read the file (${(error as NodeJS.ErrnoException).code ?? 'unknown error'}).`]);
+    fail([`${name}: cannot read the file (${error instanceof Error && 'code' in error ? String(error.code) : 'unknown error'}).`]);
   }
 
   const parsed = parseSoundingCsv(text, name);

@@ -20,7 +20,7 @@ function parcelTable(title: string, header: string[], row: (parcel: ParcelResult
     [`most-unstable (${show(analysis.mostUnstable.parcelPressure)} hPa)`, analysis.mostUnstable],
   ];
   const cells = [['parcel', ...header], ...parcels.map(([name, parcel]) => [name, ...row(parcel)])];
-  const widths = (cells[0] as string[]).map((_, column) => Math.max(...cells.map((line) => (line[column] ?? '').length)));
+  const widths = (cells[0] ?? []).map((_, column) => Math.max(...cells.map((line) => (line[column] ?? '').length)));
   const lines = cells.map((line) => `  ${line.map((cell, column) => (column === 0 ? cell.padEnd(widths[column] ?? 0) : cell.padStart(widths[column] ?? 0))).join('  ')}`);
   return `${title}\n${lines.join('\n')}\n`;
 }

@@ -48,6 +48,7 @@ export async function openDatabase(options: DatabaseOptions): Promise<DatabaseHa
     const db = drizzleNodePg({ client: pool, schema, casing: 'snake_case' });
     await migrateNodePg(db, { migrationsFolder });
     return {
+      // eslint-disable-next-line @typescript-eslint/no-unsafe-type-assertion -- each driver's database is a PgDatabase with its own result kind; the services use only what all kinds share.
       db: db as unknown as Database,
       driver: 'postgres',
       ping: async () => {
@@ -67,6 +68,7 @@ export async function openDatabase(options: DatabaseOptions): Promise<DatabaseHa
   await migratePglite(db, { migrationsFolder });
   let closed = false;
   return {
+    // eslint-disable-next-line @typescript-eslint/no-unsafe-type-assertion -- each driver's database is a PgDatabase with its own result kind; the services use only what all kinds share.
     db: db as unknown as Database,
     driver: 'pglite',
     ping: async () => {

@@ -19,6 +19,7 @@ let countyLines: MultiLineString | undefined;
 /** State and county boundaries from us-atlas (offline), read once. */
 function boundaries(): { states: MultiLineString; counties: MultiLineString } {
   if (!stateLines || !countyLines) {
+    // eslint-disable-next-line @typescript-eslint/no-unsafe-type-assertion -- the file ships in the pinned us-atlas package with these two objects.
     const topology = JSON.parse(readFileSync(require.resolve('us-atlas/counties-10m.json'), 'utf8')) as Topology<{ states: GeometryCollection; counties: GeometryCollection }>;
     stateLines = mesh(topology, topology.objects.states);
     countyLines = mesh(topology, topology.objects.counties, (a, b) => a !== b);
@@ -78,6 +79,7 @@ export function renderMapSvg(input: MapImageInput): string {
       const significant = a.hazards.some((h) => h.significant);
       // Significant hazards: a bold outline just inside the area (the area shrunk by a few km).
       const shrunk = significant ? buffer(a.geometry, -insetKm, { units: 'kilometers' }) : undefined;
+      // eslint-disable-next-line @typescript-eslint/no-unsafe-type-assertion -- Turf's buffer of an area answers a Polygon or MultiPolygon of [longitude, latitude] positions.
       const inner = shrunk && shrunk.geometry ? `<path d="${path(forD3(shrunk.geometry as AreaGeometry)) ?? ''}" fill="none" stroke="#111827" stroke-width="3"/>` : '';
       return `<path d="${d}" fill="${colour(a.levelKey)}" fill-opacity="0.85" stroke="#1f2a44" stroke-width="1"/>${inner}`;
     })

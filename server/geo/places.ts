@@ -26,6 +26,7 @@ function toAreaGeometry(g: Polygon | MultiPolygon): AreaGeometry {
 /** US counties and states (FIPS codes, names, outlines) from us-atlas, read once, offline. */
 export function allPlaces(): Map<string, Place> {
   if (places) return places;
+  // eslint-disable-next-line @typescript-eslint/no-unsafe-type-assertion -- the file ships in the pinned us-atlas package with these two objects.
   const topology = JSON.parse(readFileSync(require.resolve('us-atlas/counties-10m.json'), 'utf8')) as Topology<{ states: GeometryCollection<{ name: string }>; counties: GeometryCollection<{ name: string }> }>;
   places = new Map();
   const states = feature(topology, topology.objects.states);

@@ -325,7 +325,7 @@ export async function evidenceSoundings(db: DatabaseOrTransaction, validFrom: Da
     validTime: r.validTime.toISOString(),
     source: r.source,
     modified: r.modifiedFromId !== null,
-    figures: keyFigures(r.analysis as unknown as SoundingAnalysis | null),
+    figures: keyFigures(r.analysis),
   }]));
 }
 

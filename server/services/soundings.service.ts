@@ -52,7 +52,7 @@ export function keyFigures(analysis: SoundingAnalysis | null): SoundingKeyFigure
 }
 
 function storedAnalysis(row: SoundingRow): SoundingAnalysis | null {
-  return row.analysis && row.engineVersion === ENGINE_VERSION ? (row.analysis as unknown as SoundingAnalysis) : null;
+  return row.analysis && row.engineVersion === ENGINE_VERSION ? row.analysis : null;
 }
 
 function toSummary(row: SoundingRow, uploaderName: string | null): SoundingSummary {
@@ -116,7 +116,7 @@ async function storeSounding(db: DatabaseOrTransaction, office: string, actor: A
       fileName,
       levels: parsed.levels,
       warnings: parsed.warnings,
-      analysis: analysis as unknown as Record<string, unknown>,
+      analysis: analysis,
       engineVersion: ENGINE_VERSION,
       uploadedBy: actor?.userId ?? null,
       ...extra,
@@ -263,16 +263,16 @@ export async function getSounding(db: Database, soundingId: string): Promise<Res
   const [found] = await db.select({ sounding: soundings, uploaderName: users.name }).from(soundings).leftJoin(users, eq(users.id, soundings.uploadedBy)).where(eq(soundings.id, soundingId));
   if (!found) return err(appError('NOT_FOUND', 'There is no sounding with that id. It may have been deleted.'));
   const row = found.sounding;
-  const levels = row.levels as SoundingLevel[];
+  const levels = row.levels;
   let analysis = storedAnalysis(row);
   if (!analysis) {
     analysis = analyzeSounding(levels, { latitude: row.latitude });
-    await db.update(soundings).set({ analysis: analysis as unknown as Record<string, unknown>, engineVersion: ENGINE_VERSION }).where(eq(soundings.id, row.id));
+    await db.update(soundings).set({ analysis, engineVersion: ENGINE_VERSION }).where(eq(soundings.id, row.id));
   }
   return ok({
-    ...toSummary({ ...row, analysis: analysis as unknown as Record<string, unknown>, engineVersion: ENGINE_VERSION }, found.uploaderName),
+    ...toSummary({ ...row, analysis: analysis, engineVersion: ENGINE_VERSION }, found.uploaderName),
     levels,
-    warnings: row.warnings as SoundingIssue[],
+    warnings: row.warnings,
     analysis,
     engineVersion: ENGINE_VERSION,
     modificationNote: row.modificationNote,
@@ -300,7 +300,7 @@ export async function deleteSounding(db: Database, actor: Actor, soundingId: str
 export async function saveModifiedSounding(db: Database, actor: Actor, soundingId: string, input: SaveModifiedSoundingInput): Promise<Result<SoundingSummary, AppError>> {
   const [original] = await db.select().from(soundings).where(eq(soundings.id, soundingId));
   if (!original) return err(appError('NOT_FOUND', 'The original sounding no longer exists.'));
-  const levels = (original.levels as SoundingLevel[]).map((level) => ({ ...level }));
+  const levels = original.levels.map((level) => ({ ...level }));
   const surface = levels[0];
   if (!surface) throw new Error(`stored sounding ${soundingId} has no levels`);
   if (input.surfaceTemperatureC !== undefined) surface.temperatureC = input.surfaceTemperatureC;
@@ -335,8 +335,8 @@ export async function refreshStaleAnalyses(db: Database, limit: number): Promise
     .where(or(isNull(soundings.engineVersion), sql`${soundings.engineVersion} <> ${ENGINE_VERSION}`))
     .limit(limit);
   for (const row of stale) {
-    const analysis = analyzeSounding(row.levels as SoundingLevel[], { latitude: row.latitude });
-    await db.update(soundings).set({ analysis: analysis as unknown as Record<string, unknown>, engineVersion: ENGINE_VERSION }).where(eq(soundings.id, row.id));
+    const analysis = analyzeSounding(row.levels, { latitude: row.latitude });
+    await db.update(soundings).set({ analysis, engineVersion: ENGINE_VERSION }).where(eq(soundings.id, row.id));
   }
   return stale.length;
 }
@@ -368,7 +368,7 @@ export async function updateSoundingMetadata(db: Database, actor: Actor, soundin
   if (actor.role !== 'lead' && row.uploadedBy !== actor.userId) {
     return err(appError('FORBIDDEN', 'Only the forecaster who uploaded this sounding, or a lead, can change its details.'));
   }
-  const analysis = analyzeSounding(row.levels as SoundingLevel[], { latitude: input.latitude });
+  const analysis = analyzeSounding(row.levels, { latitude: input.latitude });
   const [updated] = await db
     .update(soundings)
     .set({
@@ -379,7 +379,7 @@ export async function updateSoundingMetadata(db: Database, actor: Actor, soundin
       elevationM: input.elevationM ?? row.elevationM,
       validTime: new Date(input.validTime),
       source: input.source,
-      analysis: analysis as unknown as Record<string, unknown>,
+      analysis,
       engineVersion: ENGINE_VERSION,
     })
     .where(eq(soundings.id, soundingId))

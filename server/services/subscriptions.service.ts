@@ -52,7 +52,7 @@ async function view(db: DatabaseOrTransaction, row: SubscriptionRow): Promise<Su
     paused: row.paused,
     unsubscribed: row.unsubscribedAt !== null,
     version: row.version,
-    areas: areas.map((a) => ({ id: a.id, name: a.name, kind: a.kind, fipsCode: a.fipsCode, geometry: a.geometry as AreaGeometry })),
+    areas: areas.map((a) => ({ id: a.id, name: a.name, kind: a.kind, fipsCode: a.fipsCode, geometry: a.geometry })),
   };
 }
 

@@ -5,7 +5,7 @@ import type { Page } from 'playwright-core';
 import { demoPassword } from '../../server/services/seed.service';
 import { processOutbox } from '../../server/services/outbox.service';
 import { processDistributionJobs } from '../../server/services/distribution.service';
-import { startBrowserJourney, type BrowserJourney } from './browser';
+import { expectAccessible, startBrowserJourney, type BrowserJourney } from './browser';
 
 let journey: BrowserJourney;
 let page: Page;
@@ -101,6 +101,7 @@ describe('browser journey: a subscriber’s drawn area gets the alert e-mail', (
     const after = await getJson<ApiSubscription>('/api/subscriptions/me');
     expect(after.areas).toEqual([expect.objectContaining({ name: drawnName, kind: 'drawn' })]);
     expect(after.alertThreshold).toBe('level2');
+    await expectAccessible(page, 'my alerts');
   });
 
   it('When a forecaster drafts a Level 3 outlook over the region and a lead approves and publishes it, then the queued e-mails are sent', async () => {
@@ -146,6 +147,7 @@ describe('browser journey: a subscriber’s drawn area gets the alert e-mail', (
 
     const frame = page.locator('iframe[title^="HTML of"]');
     await frame.waitFor();
+    await expectAccessible(page, 'mail catcher');
     const srcdoc = (await frame.getAttribute('srcdoc')) ?? '';
     expect(srcdoc).toContain(headline);
     expect(srcdoc).toContain(drawnName);

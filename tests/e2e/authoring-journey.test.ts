@@ -3,7 +3,7 @@ import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { demoPassword } from '../../server/services/seed.service';
-import { startBrowserJourney, type BrowserJourney } from './browser';
+import { expectAccessible, startBrowserJourney, type BrowserJourney } from './browser';
 
 let journey: BrowserJourney;
 beforeAll(async () => {
@@ -76,6 +76,38 @@ describe('browser journey: a forecaster draws a risk area on the demo draft', ()
     await expect.poll(() => savePhase(page)).toBe('saved');
     expect(await page.getByRole('region', { name: 'Status' }).getByText('Draft', { exact: true }).count()).toBe(1);
     level2Before = await areasAtLevel(page, 'Level 2 · Scattered');
+    await expectAccessible(page, 'workspace');
+  });
+
+  it('When single keys are pressed outside the map, then they do nothing; with the map focused, N draws and Esc stops; arrow keys move between the panel tabs', async () => {
+    const map = page.getByRole('region', { name: 'Outlook map' });
+    const panel = page.getByRole('complementary', { name: 'Evidence panel' });
+    // Select an existing area from the "All areas" tab; focus stays outside the map.
+    await page.getByRole('tab', { name: 'All areas' }).click();
+    await panel.getByRole('table', { name: /Risk areas of this outlook/ }).getByRole('button', { name: /^Select / }).first().click();
+    const selectedTab = page.getByRole('tab', { name: 'Selected area' });
+    await expect.poll(() => selectedTab.getAttribute('aria-selected')).toBe('true');
+    const areaHeading = panel.getByRole('tabpanel').getByRole('heading', { level: 2 }).first();
+    const title = await areaHeading.textContent();
+    await selectedTab.focus();
+    for (const key of ['n', 'Backspace', 'Delete', '3']) await page.keyboard.press(key);
+    expect(await map.getAttribute('data-mode')).toBe('select');
+    expect(await areaHeading.textContent()).toBe(title);
+
+    // The tabs follow the WAI-ARIA pattern: arrows move the selection and the focus.
+    await page.keyboard.press('ArrowRight');
+    const allAreas = page.getByRole('tab', { name: 'All areas' });
+    expect(await allAreas.getAttribute('aria-selected')).toBe('true');
+    expect(await allAreas.evaluate((el) => el === document.activeElement)).toBe(true);
+    expect(await selectedTab.getAttribute('tabindex')).toBe('-1');
+    await page.keyboard.press('ArrowLeft');
+    expect(await selectedTab.getAttribute('aria-selected')).toBe('true');
+
+    await map.locator('.leaflet-container').focus();
+    await page.keyboard.press('n');
+    await expect.poll(() => map.getAttribute('data-mode')).toBe('draw');
+    await page.keyboard.press('Escape');
+    await expect.poll(() => map.getAttribute('data-mode')).toBe('select');
   });
 
   it('When a polygon is drawn by clicking map points and Level 2 is chosen, then it autosaves and the evidence panel fills in', async () => {
@@ -113,6 +145,7 @@ describe('browser journey: a forecaster draws a risk area on the demo draft', ()
 
     await expect.poll(async () => Number((await panel.getByTestId('evidence-count').textContent()) ?? '0'), { timeout: 15_000 }).toBeGreaterThan(0);
     expect(await panel.getByText(/supported|thin support|environment exceeds level|no soundings inside/).count()).toBeGreaterThan(0);
+    await expectAccessible(page, 'workspace with a new area selected');
   });
 
   it('When the page is reloaded, then the new area is still there with its level', async () => {
@@ -149,6 +182,7 @@ describe('browser journey: two authors save the same draft', () => {
     await second.getByLabel('Headline', { exact: true }).fill('Second author: storms mainly after dark');
     await expect.poll(() => savePhase(second), { timeout: 15_000 }).toBe('conflict');
     await second.getByText('Changed by someone else since you opened it').first().waitFor();
+    await expectAccessible(second, 'conflict prompt');
     // The stale save did not overwrite the first author's work.
     expect((await readOutlook(second, draft.id)).headline).toBe('First author: storms along the river valleys');
 

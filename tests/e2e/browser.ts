@@ -3,7 +3,8 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import type { AddressInfo } from 'node:net';
 import type { Server } from 'node:http';
-import { chromium, type BrowserContext } from 'playwright-core';
+import { chromium, type BrowserContext, type Page } from 'playwright-core';
+import axe from 'axe-core';
 import { createServer } from 'node:net';
 import { listen, type Stormdraft } from '../../server/start';
 import { startTestApp } from '../api/helpers/test-app';
@@ -59,4 +60,34 @@ export async function startBrowserJourney(): Promise<BrowserJourney> {
       rmSync(profile, { recursive: true, force: true });
     },
   };
+}
+
+/** The axe-core rule tags the journeys hold every page to: WCAG 2.0 and 2.1, levels A and AA. */
+export const WCAG_TAGS = ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa'];
+
+type AxeWindow = Window & { axe?: typeof axe };
+
+/**
+ * Runs axe-core on the page as it is now and fails with a readable list of every WCAG 2.1 A/AA
+ * violation (rule, elements and what is wrong). Call it once on every page a journey visits,
+ * after the page's content has arrived. axe is evaluated through the DevTools protocol, so the
+ * app's Content-Security-Policy does not block it.
+ */
+export async function expectAccessible(page: Page, what = ''): Promise<void> {
+  if (!(await page.evaluate(() => Boolean((window as AxeWindow).axe)))) await page.evaluate(axe.source);
+  const results = await page.evaluate(async (tags) => {
+    const engine = (window as AxeWindow).axe;
+    if (!engine) throw new Error('axe-core did not load');
+    const run = await engine.run(document, { runOnly: { type: 'tag', values: tags }, resultTypes: ['violations'] });
+    return run.violations.map((v) => ({
+      id: v.id,
+      impact: v.impact ?? 'unknown',
+      help: v.help,
+      nodes: v.nodes.map((n) => `${n.target.join(' ')}: ${(n.failureSummary ?? '').replace(/\s+/g, ' ').slice(0, 240)}`),
+    }));
+  }, WCAG_TAGS);
+  if (results.length === 0) return;
+  const where = `${new URL(page.url()).pathname}${what ? ` (${what})` : ''}`;
+  const lines = results.flatMap((v) => [`- ${v.id} [${v.impact}] ${v.help}: ${v.nodes.length} element(s)`, ...v.nodes.map((n) => `    ${n}`)]);
+  throw new Error(`axe-core found ${results.length} WCAG 2.1 A/AA violation(s) on ${where}:\n${lines.join('\n')}`);
 }

@@ -3,7 +3,7 @@ import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { demoPassword } from '../../server/services/seed.service';
-import { startBrowserJourney, type BrowserJourney } from './browser';
+import { expectAccessible, startBrowserJourney, type BrowserJourney } from './browser';
 
 let journey: BrowserJourney;
 beforeAll(async () => {
@@ -95,16 +95,21 @@ describe('browser journey: review and publish', () => {
 
     await page.goto(`${journey.baseUrl}/review/${outlookId}`);
     await expect.poll(() => stateOnScreen(page)).toBe('Draft');
+    await expectAccessible(page, 'review screen, draft');
     await page.getByRole('button', { name: 'Submit for review' }).click();
     await expect.poll(() => stateOnScreen(page)).toBe('In review');
   });
 
   it('When the lead returns it with a comment, then it is returned', async () => {
     await signInAs(page, 'lead');
+    await page.getByRole('link', { name: new RegExp(`Day 3: ${headline}`) }).waitFor();
+    await expectAccessible(page, 'review queue');
     await page.getByRole('link', { name: new RegExp(`Day 3: ${headline}`) }).click();
     await page.waitForURL((url) => url.pathname === `/review/${outlookId}`);
     await expect.poll(() => stateOnScreen(page)).toBe('In review');
     await page.getByRole('button', { name: 'Return with comment…' }).click();
+    await page.getByLabel('What needs changing').waitFor();
+    await expectAccessible(page, 'return form');
     await page.getByLabel('What needs changing').fill(returnComment);
     await page.getByRole('button', { name: 'Return to author' }).click();
     await expect.poll(() => stateOnScreen(page)).toBe('Returned');
@@ -115,6 +120,7 @@ describe('browser journey: review and publish', () => {
     await page.goto(`${journey.baseUrl}/review/${outlookId}`);
     await expect.poll(() => stateOnScreen(page)).toBe('Returned');
     await expect.poll(() => page.getByText(returnComment).count()).toBeGreaterThan(0);
+    await expectAccessible(page, 'returned draft with comment');
 
     const returned = await readOutlook(page, outlookId);
     await saveAreas(page, returned, [{ levelKey: 'level1', hazards: [{ hazard: 'hail', significant: false }], geometry: box(-95, 37, -90.5, 39.5), label: 'Western valley' }], headline);
@@ -139,6 +145,7 @@ describe('browser journey: review and publish', () => {
     await link.waitFor();
     issuanceNumber = (await link.textContent()) ?? '';
     expect(issuanceNumber).toMatch(/^\d{4}-\d{4}$/);
+    await expectAccessible(page, 'published');
   });
 
   it('When nobody is signed in, then the public bulletin shows the issuance and its GeoJSON download parses', async () => {
@@ -148,6 +155,7 @@ describe('browser journey: review and publish', () => {
     await expect.poll(() => page.getByRole('link', { name: issuanceNumber, exact: true }).count()).toBe(1);
     expect(await page.getByText(headline).count()).toBeGreaterThan(0);
     expect(await page.getByText('planning guidance, not a warning', { exact: false }).count()).toBeGreaterThan(0);
+    await expectAccessible(page, 'bulletin, Day 3');
 
     const href = await page.getByRole('link', { name: `GeoJSON of issuance ${issuanceNumber}` }).getAttribute('href');
     expect(href).toBe(`/api/public/issuances/${issuanceNumber}/geojson`);
@@ -161,5 +169,6 @@ describe('browser journey: review and publish', () => {
     await page.getByRole('link', { name: issuanceNumber, exact: true }).click();
     await page.waitForURL((url) => url.pathname === `/issuances/${issuanceNumber}`);
     await expect.poll(() => page.getByRole('heading', { level: 1 }).textContent()).toBe(`Outlook issuance ${issuanceNumber}`);
+    await expectAccessible(page, 'issuance page');
   });
 });

@@ -3,7 +3,7 @@ import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { demoPassword } from '../../server/services/seed.service';
-import { startBrowserJourney, type BrowserJourney } from './browser';
+import { expectAccessible, startBrowserJourney, type BrowserJourney } from './browser';
 
 const fixture = path.resolve(import.meta.dirname, '../fixtures/soundings/oax_20140616_19z.csv');
 
@@ -57,6 +57,7 @@ describe('browser journey: a forecaster brings in a sounding and tries a what-if
     const row = results.getByRole('listitem').filter({ hasText: 'oax_20140616_19z.csv' }).first();
     expect(await row.getAttribute('data-status')).toMatch(/^accepted/);
     await expect.poll(() => page.getByText('1 file stored.').count()).toBe(1);
+    await expectAccessible(page, 'upload results');
 
     await row.getByRole('link', { name: 'Open oax_20140616_19z.csv' }).click();
     await page.waitForURL((url) => /^\/soundings\/[^/]+$/.test(url.pathname) && url.pathname !== '/soundings/upload');
@@ -68,6 +69,7 @@ describe('browser journey: a forecaster brings in a sounding and tries a what-if
     expect(await page.getByText('Valid 16 Jun 2014, 19:00 UTC').count()).toBe(1);
     expect(await page.getByText('Observed', { exact: true }).count()).toBeGreaterThan(0);
     expect(soundingPath).not.toBe('');
+    await expectAccessible(page, 'sounding workbench');
   });
 
   it('When the surface dewpoint is raised by 2 K in the what-if editor, then CAPE rises and the delta is shown', async () => {
@@ -88,6 +90,7 @@ describe('browser journey: a forecaster brings in a sounding and tries a what-if
     await page.waitForURL((url) => url.pathname.startsWith('/soundings/') && url.pathname !== soundingPath);
     await expect.poll(() => page.getByText('Saved “Moister surface +2 K” as a modified sounding').count()).toBe(1);
     expect(await page.getByRole('link', { name: 'the original OAX sounding' }).getAttribute('href')).toBe(soundingPath);
+    await expectAccessible(page, 'modified sounding');
   });
 
   it('When the forecaster looks in the library, then the modified sounding is listed and marked as modified', async () => {
@@ -98,5 +101,6 @@ describe('browser journey: a forecaster brings in a sounding and tries a what-if
     await expect.poll(() => table.getByText('Modified · Moister surface +2 K').count()).toBe(1);
     // The original and its what-if: a heading row plus two soundings.
     expect(await table.getByRole('row').count()).toBe(3);
+    await expectAccessible(page, 'sounding library');
   });
 });

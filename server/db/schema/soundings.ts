@@ -2,6 +2,8 @@ import { sql } from 'drizzle-orm';
 import { doublePrecision, index, jsonb, pgEnum, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 import { offices } from './offices';
 import { users } from './auth';
+import type { SoundingIssue, SoundingLevel } from '../../../shared/sounding/types';
+import type { SoundingAnalysis } from '../../../shared/sounding/analyze';
 
 export const soundingSourceEnum = pgEnum('sounding_source', ['observed', 'model', 'unknown']);
 
@@ -28,9 +30,9 @@ export const soundings = pgTable(
     validTime: timestamp({ withTimezone: true }),
     source: soundingSourceEnum().notNull(),
     fileName: text(),
-    levels: jsonb().$type<unknown[]>().notNull(),
-    warnings: jsonb().$type<unknown[]>().notNull().default([]),
-    analysis: jsonb().$type<Record<string, unknown>>(),
+    levels: jsonb().$type<SoundingLevel[]>().notNull(),
+    warnings: jsonb().$type<SoundingIssue[]>().notNull().default([]),
+    analysis: jsonb().$type<SoundingAnalysis>(),
     engineVersion: text(),
     modifiedFromId: uuid(),
     modificationName: text(),

@@ -1,5 +1,5 @@
 import { boolean, index, integer, jsonb, pgEnum, pgTable, text, timestamp, unique, uuid } from 'drizzle-orm/pg-core';
-import type { Geometry } from 'geojson';
+import type { AreaGeometry, HazardKind } from '../../../shared/contracts/outlooks';
 import { offices } from './offices';
 import { users } from './auth';
 import { issuances } from './issuances';
@@ -16,7 +16,7 @@ export const subscriptions = pgTable(
       .notNull()
       .references(() => users.id, { onDelete: 'cascade' }),
     alertThreshold: text().notNull(),
-    hazards: jsonb().$type<string[]>().notNull().default([]),
+    hazards: jsonb().$type<HazardKind[]>().notNull().default([]),
     days: jsonb().$type<number[]>().notNull().default([1, 2, 3]),
     emails: jsonb().$type<string[]>().notNull().default([]),
     paused: boolean().notNull().default(false),
@@ -41,7 +41,7 @@ export const areasOfInterest = pgTable(
     name: text().notNull(),
     kind: areaKindEnum().notNull(),
     fipsCode: text(),
-    geometry: jsonb().$type<Geometry>().notNull(),
+    geometry: jsonb().$type<AreaGeometry>().notNull(),
   },
   (t) => [index().on(t.subscriptionId)],
 );

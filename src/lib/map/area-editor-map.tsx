@@ -6,6 +6,7 @@ import L from 'leaflet';
 import { useEffect, useLayoutEffect, useRef, type ReactNode, type RefObject } from 'react';
 import { CircleMarker, MapContainer, Pane, Popup, TileLayer, Tooltip, useMap } from 'react-leaflet';
 import { insetOutline, labelAnchor } from './inset-outline';
+import { AREA_FILL_OPACITY, AREA_OUTLINE } from './area-outline';
 import { BoundaryLines, FitBounds, useOfflineBoundaries } from './base-map';
 import type { MapRegion, PointProperties } from './point-map';
 import { escapeHtml } from '../../../shared/text/escape-html';
@@ -69,6 +70,8 @@ function labelHtml(properties: EditorAreaProperties): string {
 
 interface Registered {
   polygon: L.Polygon;
+  /** The white casing under the polygon's dark line (see area-outline.ts); follows every edit. */
+  casing: L.Polygon;
   geometryKey: string;
   inset: L.GeoJSON | null;
   label: L.Marker | null;
@@ -149,6 +152,7 @@ function AreaLayers({ areas, selectedId, visible, mode, latest }: { areas: AreaE
       if (id !== null) {
         const entry = registry.current.get(id);
         if (entry) {
+          entry.casing.remove();
           entry.inset?.remove();
           entry.label?.remove();
         }
@@ -181,6 +185,7 @@ function AreaLayers({ areas, selectedId, visible, mode, latest }: { areas: AreaE
       let entry = registry.current.get(id);
       if (entry && entry.geometryKey !== geometryKey) {
         entry.polygon.remove();
+        entry.casing.remove();
         entry.inset?.remove();
         entry.label?.remove();
         registry.current.delete(id);
@@ -208,16 +213,19 @@ function AreaLayers({ areas, selectedId, visible, mode, latest }: { areas: AreaE
         };
         polygon.on('pm:edit', onEdited);
         polygon.on('pm:dragend', onEdited);
-        entry = { polygon, geometryKey, inset: null, label: null, decorationKey: '' };
+        const casing = L.polygon(polygon.getLatLngs(), { interactive: false, pmIgnore: true, fill: false, color: AREA_OUTLINE.casing.colour, weight: AREA_OUTLINE.casing.weight, opacity: 1 } as L.PolylineOptions);
+        const follow = () => casing.setLatLngs(polygon.getLatLngs());
+        polygon.on('pm:markerdrag pm:drag pm:vertexadded pm:vertexremoved pm:edit pm:dragend pm:cut', follow);
+        entry = { polygon, casing, geometryKey, inset: null, label: null, decorationKey: '' };
         registry.current.set(id, entry);
       }
       const selected = id === selectedId;
       entry.polygon.setStyle({
-        color: selected ? '#0b1220' : '#1f2a3d',
-        weight: selected ? 3 : 1.2,
-        dashArray: selected ? '6 4' : undefined,
+        color: selected ? AREA_OUTLINE.selectedLine.colour : AREA_OUTLINE.line.colour,
+        weight: selected ? AREA_OUTLINE.selectedLine.weight : AREA_OUTLINE.line.weight,
+        dashArray: selected ? AREA_OUTLINE.selectedLine.dashArray : undefined,
         fillColor: properties.fillColour,
-        fillOpacity: 0.5,
+        fillOpacity: AREA_FILL_OPACITY.editor,
         opacity: 1,
       });
       const decorationKey = `${geometryKey}|${properties.title}|${properties.badges.join(',')}|${properties.fillColour}|${properties.textColour}`;
@@ -243,6 +251,7 @@ function AreaLayers({ areas, selectedId, visible, mode, latest }: { areas: AreaE
     for (const [id, entry] of registry.current) {
       if (!seen.has(id)) {
         entry.polygon.remove();
+        entry.casing.remove();
         entry.inset?.remove();
         entry.label?.remove();
         registry.current.delete(id);
@@ -253,12 +262,15 @@ function AreaLayers({ areas, selectedId, visible, mode, latest }: { areas: AreaE
       const entry = registry.current.get(feature.properties.id);
       if (!entry) continue;
       if (visible) {
+        if (!map.hasLayer(entry.casing)) entry.casing.addTo(map);
         if (!map.hasLayer(entry.polygon)) entry.polygon.addTo(map);
+        entry.casing.bringToFront();
         entry.polygon.bringToFront();
         if (entry.inset && !map.hasLayer(entry.inset)) entry.inset.addTo(map);
         if (entry.label && !map.hasLayer(entry.label)) entry.label.addTo(map);
       } else {
         entry.polygon.remove();
+        entry.casing.remove();
         entry.inset?.remove();
         entry.label?.remove();
       }
@@ -277,6 +289,7 @@ function AreaLayers({ areas, selectedId, visible, mode, latest }: { areas: AreaE
     return () => {
       for (const entry of entries.values()) {
         entry.polygon.remove();
+        entry.casing.remove();
         entry.inset?.remove();
         entry.label?.remove();
       }

@@ -44,7 +44,7 @@ export function MailReader({ messageId }: { messageId: string }) {
       <section aria-label="Plain-text version" className="p-4">
         <h3 className="mb-2 text-[12px] font-semibold tracking-wide text-ink-muted uppercase">Plain text</h3>
         {mail.text ? (
-          <pre className="max-h-80 overflow-auto rounded bg-sunken p-3 font-mono text-[13px] whitespace-pre-wrap">{mail.text}</pre>
+          <pre tabIndex={0} role="region" aria-label="Plain text of the message" className="max-h-80 overflow-auto rounded bg-sunken p-3 font-mono text-[13px] whitespace-pre-wrap">{mail.text}</pre>
         ) : (
           <p className="text-sm text-ink-muted">This message has no plain-text part.</p>
         )}

@@ -32,9 +32,10 @@ export function OutlookAreasTable({ areas, ladder, reports, selectedId, onSelect
           return (
             <tr key={area.id} className={clsx('border-t border-line', area.id === selectedId && 'bg-accent-soft')}>
               <th scope="row" className="py-1.5 pr-2 text-left font-normal">
-                <button type="button" className="text-left" onClick={() => onSelect(area.id)} aria-label={`Select ${level.label}${area.label ? ` ${area.label}` : ''}`}>
+                <button type="button" className="text-left" onClick={() => onSelect(area.id)}>
+                  <span className="sr-only">Select </span>
                   <RiskSwatch label={level.label} colour={level.colour} />
-                  {area.label ? <span className="mt-0.5 block text-[12px] text-ink-muted">{area.label}</span> : null}
+                  {area.label ? <span className="mt-0.5 block text-[12px] text-ink-muted"> {area.label}</span> : null}
                 </button>
               </th>
               <td className="pr-2">{report ? report.evidence.count : '…'}</td>

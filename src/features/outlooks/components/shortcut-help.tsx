@@ -11,6 +11,7 @@ export function ShortcutHelp({ onClose }: { onClose: () => void }) {
           <X aria-hidden className="size-4" />
         </button>
       </div>
+      <p className="mb-2 text-[12px] text-ink-muted">Single keys work while the map has focus (click the map or move to it with Tab). Ctrl shortcuts work anywhere.</p>
       <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-1 text-[13px]">
         {shortcutList.map((s) => (
           <div key={s.keys} className="contents">

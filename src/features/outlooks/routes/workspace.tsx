@@ -1,7 +1,7 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { clsx } from 'clsx';
 import type { FeatureCollection, Point } from 'geojson';
-import { useCallback, useEffect, useMemo, useState } from 'react';
+import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { Link, useLocation, useParams, type LoaderFunctionArgs } from 'react-router';
 import { Button } from '../../../components/ui/button';
 import { SelectField, TextField } from '../../../components/ui/field';
@@ -9,6 +9,7 @@ import { Loading } from '../../../components/ui/loading';
 import { Notice } from '../../../components/ui/notice';
 import { useMe } from '../../../hooks/use-me';
 import { useOffice } from '../../../hooks/use-office';
+import { useTabs } from '../../../hooks/use-tabs';
 import { useUnits } from '../../../hooks/use-units';
 import { AreaEditorMap, type AreaShape, type EditorMode, type MapLayersShown } from '../../../lib/map/area-editor-map';
 import type { PointProperties } from '../../../lib/map/point-map';
@@ -60,7 +61,9 @@ const sourceOptions: { value: EvidenceSource; label: string }[] = [
 ];
 const isEvidenceSource = (value: string): value is EvidenceSource => value === 'all' || value === 'observed' || value === 'model';
 
-type PanelTab = 'area' | 'outlook' | 'history';
+const panelTabs = ['area', 'outlook', 'history'] as const;
+type PanelTab = (typeof panelTabs)[number];
+const panelTabLabels: Record<PanelTab, string> = { area: 'Selected area', outlook: 'All areas', history: 'Revisions' };
 
 function isTyping(target: EventTarget | null): boolean {
   if (!(target instanceof HTMLElement)) return false;
@@ -82,6 +85,8 @@ function Workspace({ initial, office, mayAuthor }: { initial: Outlook; office: O
   const [source, setSource] = useState<EvidenceSource>('all');
   const [tab, setTab] = useState<PanelTab>('area');
   const [helpOpen, setHelpOpen] = useState(false);
+  const { tabProps, panelProps } = useTabs(panelTabs, tab, setTab);
+  const mapArea = useRef<HTMLDivElement>(null);
   const ladder = office.riskLadder;
   const ladderKeys = useMemo(() => ladder.map((l) => l.key), [ladder]);
 
@@ -132,29 +137,33 @@ function Workspace({ initial, office, mayAuthor }: { initial: Outlook; office: O
   const onFix = (areaId: string, fix: AreaFix) => change(applyAreaFix(document, areaId, fix, ladderKeys, office.region));
   const onImported = (areas: RiskAreaInput[]) => change({ ...document, areas: [...document.areas, ...areas.map((a) => ({ id: crypto.randomUUID(), levelKey: a.levelKey, hazards: a.hazards, geometry: a.geometry, label: a.label }))] });
 
-  // Keyboard shortcuts (not while typing in a field).
+  // Keyboard shortcuts. Those with Ctrl (or ⌘) work anywhere on the page; single keys act only
+  // while focus is in the map, so they never fire while someone types or reads elsewhere
+  // (WCAG 2.1.4), and never while typing in a field.
   useEffect(() => {
-    const onKey = (event: KeyboardEvent) => {
+    const onPageKey = (event: KeyboardEvent) => {
       const ctrl = event.ctrlKey || event.metaKey;
-      if (ctrl && event.key.toLowerCase() === 's') {
+      if (!ctrl) return;
+      if (event.key.toLowerCase() === 's') {
         event.preventDefault();
         if (editable) editor.saveNow();
         return;
       }
       if (isTyping(event.target)) return;
-      if (ctrl && event.key.toLowerCase() === 'z') {
+      if (event.key.toLowerCase() === 'z') {
         event.preventDefault();
         if (readOnly) return;
         if (event.shiftKey) editor.redo();
         else editor.undo();
         return;
       }
-      if (ctrl && event.key.toLowerCase() === 'y') {
+      if (event.key.toLowerCase() === 'y') {
         event.preventDefault();
         if (!readOnly) editor.redo();
-        return;
       }
-      if (ctrl || event.altKey) return;
+    };
+    const onMapKey = (event: KeyboardEvent) => {
+      if (event.ctrlKey || event.metaKey || event.altKey || isTyping(event.target)) return;
       switch (event.key) {
         case 'Escape':
         case 'v':
@@ -177,8 +186,13 @@ function Workspace({ initial, office, mayAuthor }: { initial: Outlook; office: O
         if (level) editArea(selectedId, { levelKey: level.key });
       }
     };
-    window.addEventListener('keydown', onKey);
-    return () => window.removeEventListener('keydown', onKey);
+    const map = mapArea.current;
+    window.addEventListener('keydown', onPageKey);
+    map?.addEventListener('keydown', onMapKey);
+    return () => {
+      window.removeEventListener('keydown', onPageKey);
+      map?.removeEventListener('keydown', onMapKey);
+    };
   }, [editor, editable, readOnly, selectedId, deleteSelected, ladder, editArea]);
 
   const validFromInput = toUtcInputValue(document.validFrom);
@@ -236,7 +250,7 @@ function Workspace({ initial, office, mayAuthor }: { initial: Outlook; office: O
 
       <div className="grid grid-cols-[minmax(0,1fr)] items-start gap-3 xl:grid-cols-[minmax(0,1fr)_24rem]">
         <div className="space-y-2">
-          <div className="relative">
+          <div className="relative" ref={mapArea}>
             <AreaEditorMap
               label="Outlook map"
               className="h-[calc(100dvh-16rem)] min-h-[28rem]"
@@ -303,26 +317,13 @@ function Workspace({ initial, office, mayAuthor }: { initial: Outlook; office: O
 
         <aside aria-label="Evidence panel" className="rounded-lg border border-line bg-panel">
           <div role="tablist" aria-label="Panel" className="flex border-b border-line text-[13px]">
-            {(
-              [
-                ['area', 'Selected area'],
-                ['outlook', 'All areas'],
-                ['history', 'Revisions'],
-              ] as const
-            ).map(([key, label]) => (
-              <button
-                key={key}
-                role="tab"
-                type="button"
-                aria-selected={tab === key}
-                onClick={() => setTab(key)}
-                className={clsx('flex-1 px-3 py-2 font-medium', tab === key ? 'border-b-2 border-accent text-ink' : 'text-ink-muted hover:text-ink')}
-              >
-                {label}
+            {panelTabs.map((key) => (
+              <button key={key} {...tabProps(key)} className={clsx('flex-1 px-3 py-2 font-medium', tab === key ? 'border-b-2 border-accent text-ink' : 'text-ink-muted hover:text-ink')}>
+                {panelTabLabels[key]}
               </button>
             ))}
           </div>
-          <div className="max-h-[calc(100dvh-14rem)] space-y-4 overflow-y-auto p-3">
+          <div {...panelProps} className="max-h-[calc(100dvh-14rem)] space-y-4 overflow-y-auto p-3">
             {tab === 'area' ? (
               selected ? (
                 <>
