@@ -360,7 +360,8 @@ class BuoyancyAreas {
   summary(): AreasSummary {
     const areas = this.positiveAreas;
     let chosen = -1;
-    let largest = 0;
+    // Areas below 1e-6 J/kg are rounding noise (a parcel starting exactly at its environment).
+    let largest = 1e-6;
     for (let i = 0; i < areas.length; i++) {
       const area = (areas[i] as PositiveArea).area;
       if (area > largest) {
