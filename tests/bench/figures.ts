@@ -1,7 +1,7 @@
 import { analyzeSounding, parseSoundingCsv } from '../../shared/sounding';
 import { matchTenThousandSubscribers, smtpMessagesPerSecond } from './distribution';
 import { evidenceSixAreas } from './evidence';
-import { assertParses, fixtureTexts, syntheticSounding } from './soundings';
+import { assertParses, fixtureTexts, oddSoundingTexts, syntheticSounding } from './soundings';
 
 /** One benchmark figure: how to measure it and the unit it is printed in. */
 export interface BenchFigure {
@@ -81,5 +81,32 @@ const twoThousandSoundings: BenchFigure = {
   },
 };
 
+/**
+ * The slowest single file among odd but legal soundings (superadiabatic surface, sparse,
+ * truncated, 5,000 levels, isothermal, saturated, and the three observed fixtures): parse and
+ * full analysis, the median of 5 runs per file after a warm-up, in ms.
+ */
+const slowestFile: BenchFigure = {
+  name: 'slowest_file_ms',
+  unit: 'ms',
+  measure() {
+    const texts = [...oddSoundingTexts(), ...fixtureTexts()];
+    assertParses(texts);
+    let slowest = 0;
+    for (const { name, text } of texts) {
+      const runs: number[] = [];
+      for (let run = 0; run < 7; run++) {
+        const start = performance.now();
+        const parsed = parseSoundingCsv(text, name);
+        if (parsed.ok) analyzeSounding(parsed.value.levels, { latitude: parsed.value.metadata.latitude });
+        if (run >= 2) runs.push(performance.now() - start);
+      }
+      runs.sort((a, b) => a - b);
+      slowest = Math.max(slowest, runs[2] ?? 0);
+    }
+    return Math.round(slowest * 10) / 10;
+  },
+};
+
 /** Every figure `npm run -s bench` prints, in order. Add new figures here. */
-export const BENCH_FIGURES: BenchFigure[] = [analysesPerSecond(100), analysesPerSecond(1000), twoThousandSoundings, evidenceSixAreas, matchTenThousandSubscribers, smtpMessagesPerSecond];
+export const BENCH_FIGURES: BenchFigure[] = [analysesPerSecond(100), analysesPerSecond(1000), analysesPerSecond(5000), slowestFile, twoThousandSoundings, evidenceSixAreas, matchTenThousandSubscribers, smtpMessagesPerSecond];
