@@ -1,5 +1,5 @@
 /**
- * Colours of the sounding views (PRODUCT.md "Look and feel"). The three profile colours are the
+ * Colours of the sounding views (the product palette). The three profile colours are the
  * same as the `--color-sounding-*` tokens in src/index.css; they are repeated here as values so
  * the SVG also renders outside the app stylesheet (static export, e-mail images).
  */
@@ -30,7 +30,7 @@ export const HODOGRAPH_BANDS = [
   { fromM: 6000, toM: 10000, label: '6–10 km', colour: '#4058b5' },
 ] as const;
 
-/** Dash patterns of the background lines (PRODUCT.md: dry dashed, moist dotted, mixing ratio short-dashed). */
+/** Dash patterns of the background lines (dry dashed, moist dotted, mixing ratio short-dashed). */
 export const DASHES = {
   dryAdiabat: '7 4',
   pseudoAdiabat: '1.2 3',

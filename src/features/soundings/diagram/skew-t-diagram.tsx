@@ -50,7 +50,7 @@ type Handle = 'temperature' | 'dewpoint';
 const BARB_X = FULL_FRAME.left + FULL_FRAME.width + 44;
 const round1 = (value: number): number => Math.round(value * 10) / 10;
 
-/** Skew-T log-p diagram of a sounding in Stormdraft's own styling (PRODUCT.md). */
+/** Skew-T log-p diagram of a sounding in Stormdraft's own styling. */
 export function SkewTDiagram({
   levels,
   analysis,
