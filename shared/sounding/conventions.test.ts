@@ -202,3 +202,19 @@ describe('odd soundings keep the invariants (CAPE ≥ 0, CIN ≤ 0, EL above LFC
     );
   });
 });
+
+describe('Southern Hemisphere: the left mover is the cyclonic deviant one (Bunkers2000)', () => {
+  it('a mirrored hodograph south of the equator gives the negated helicity and the same composites', () => {
+    const levels = parse(fixtureText('oax_20140616_19z.csv')).levels;
+    const mirrored = levels.map((l) => ({ ...l, vMs: l.vMs === null ? null : -l.vMs }));
+    const north = analyzeSounding(levels, { latitude: 41.3 });
+    const south = analyzeSounding(mirrored, { latitude: -41.3 });
+    expect(north.kinematics.deviantMover).toBe('right');
+    expect(south.kinematics.deviantMover).toBe('left');
+    expect(south.kinematics.stormMotionDeviant?.v).toBeCloseTo(-(north.kinematics.stormMotionDeviant?.v ?? NaN), 9);
+    expect(north.srh0to1km).toBeGreaterThan(50);
+    expect(south.srh0to1km).toBeCloseTo(-(north.srh0to1km ?? NaN), 6);
+    expect(south.composites.significantTornadoFixedLayer).toBeCloseTo(north.composites.significantTornadoFixedLayer ?? NaN, 9);
+    expect(south.composites.supercellComposite).toBeCloseTo(north.composites.supercellComposite ?? NaN, 9);
+  });
+});
