@@ -1,10 +1,12 @@
 /**
  * `npm run -s analyze -- FILE.csv [--json]`: analyse one sounding in the exchange CSV format.
  *
- * With --json, prints the analysis JSON whose first keys are the contract of SCIENCE.md
- * (plus `metadata` and `warnings`). Without it, prints a readable table grouped as
- * instability, moisture, cloud base, kinematics and composites. Invalid input (unreadable
- * file, parse or validation errors): messages on stderr naming file, line and column, exit 2.
+ * With --json, prints the analysis JSON described in docs/analysis.md and
+ * docs/analysis.schema.json (plus `metadata` and `warnings`). Without it, prints a readable
+ * table grouped as instability, moisture, cloud base, kinematics and composites. Warnings
+ * (missing metadata, sorted levels…) and quality flags go to stderr; the exit status stays 0.
+ * Invalid input (unreadable file, parse or validation errors): messages on stderr naming
+ * file, line and column, exit 2.
  */
 import { readFileSync, statSync } from 'node:fs';
 import { basename } from 'node:path';
@@ -50,7 +52,8 @@ function main(argv: string[]): void {
   }
   const sounding: ParsedSounding = parsed.value;
   for (const warning of sounding.warnings) process.stderr.write(`warning ${warning.code}: ${warning.message}\n`);
-  const analysis: SoundingAnalysis = analyzeSounding(sounding.levels);
+  const analysis: SoundingAnalysis = analyzeSounding(sounding.levels, { latitude: sounding.metadata.latitude });
+  for (const flag of analysis.flags) process.stderr.write(`flag ${flag.code}: ${name}: ${flag.message}\n`);
   if (json) {
     const output = { ...analysis, metadata: sounding.metadata, warnings: sounding.warnings };
     process.stdout.write(`${JSON.stringify(roundNumbers(output), null, 2)}\n`);

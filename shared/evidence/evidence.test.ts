@@ -62,3 +62,13 @@ describe('soundingsInPeriod', () => {
     expect(soundingsInPeriod(list, '2027-04-18T06:00:00Z', '2027-04-19T12:00:00Z').map((s) => s.id)).toEqual(['in']);
   });
 });
+
+describe('areaEvidence: flagged soundings (issue 10)', () => {
+  it('When two of three soundings inside carry quality flags, then they still count and flaggedCount is 2', () => {
+    const flagged = (s: EvidenceSounding, flagCount: number): EvidenceSounding => ({ ...s, figures: { ...s.figures, flagCount } });
+    const evidence = areaEvidence('a', square, [flagged(at('x', -93, 38, 1000), 2), flagged(at('y', -93.5, 38.5, 1500), 1), at('z', -92.5, 37.5, 500), flagged(at('out', -80, 30, 100), 3)]);
+    expect(evidence.count).toBe(3);
+    expect(evidence.flaggedCount).toBe(2);
+    expect(evidence.stats.mlCape?.count).toBe(3);
+  });
+});

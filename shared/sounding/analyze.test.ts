@@ -17,7 +17,7 @@ describe.each(['bna_20021111_00z.csv', 'bna_20140728_00z.csv', 'oax_20140616_19z
   const levels = fixtureLevels(name);
   const analysis = analyzeSounding(levels);
 
-  it('has every contract key of SCIENCE.md, numbers or null, never NaN', () => {
+  it('has every contract key of docs/analysis.md, numbers or null, never NaN', () => {
     for (const parcel of [analysis.surfaceBased, analysis.mixedLayer, analysis.mostUnstable]) {
       for (const key of CONTRACT_PARCEL_KEYS) expect(parcel).toHaveProperty(key);
     }

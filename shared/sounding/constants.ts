@@ -1,14 +1,14 @@
 /**
  * Physical constants used by the sounding engine, in SI units.
  *
- * The values are the ones SCIENCE.md fixes for the project, so every quantity the engine
+ * The values are the ones docs/analysis.md lists for the project, so every quantity the engine
  * reports is computed with the same numbers. Sources are AuthorYear keys in REFERENCES.md.
  */
 
 /** Standard gravity, m s⁻². Notes: exact by definition (NOAA1976 pg. 2). */
 export const GRAVITY = 9.80665;
 
-/** Gas constant of dry air, J kg⁻¹ K⁻¹. Notes: WallaceHobbs2006 pg. 66 (rounded, SCIENCE.md). */
+/** Gas constant of dry air, J kg⁻¹ K⁻¹. Notes: WallaceHobbs2006 pg. 66 (rounded). */
 export const RD = 287.04;
 
 /** Gas constant of water vapour, J kg⁻¹ K⁻¹. Notes: WallaceHobbs2006 pg. 66. */

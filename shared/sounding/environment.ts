@@ -9,7 +9,7 @@ import { lclTemperature } from './lcl';
 import { wetBulbTemperature } from './wet-bulb';
 
 // Constants copied once at load (fast access in hot loops).
-const { EPSILON, GRAVITY, ZERO_CELSIUS_K } = constants;
+const { EPSILON, GRAVITY, KAPPA, ZERO_CELSIUS_K } = constants;
 
 /** Moisture and temperature structure of the environment. Units in the names and docs. */
 export interface EnvironmentAnalysis {
@@ -97,7 +97,10 @@ export const DOWNDRAFT_SEARCH_DEPTH_HPA = 400;
  * area, floored at 0.
  */
 export function downdraftCape(profile: Profile): { dcape: number; pressure: number } | null {
-  const top = profile.moistureTopIndex;
+  // Only the levels the search can reach: the lowest 400 hPa plus half a layer above.
+  const reach = (profile.pressureHpa[0] as number) - DOWNDRAFT_SEARCH_DEPTH_HPA - DOWNDRAFT_LAYER_DEPTH_HPA;
+  let top = profile.moistureTopIndex;
+  while (top > 1 && (profile.pressureHpa[top - 1] as number) < reach) top--;
   if (top < 1) return null;
   const table = pseudoAdiabatTable();
   const count = top + 1;
@@ -108,7 +111,9 @@ export function downdraftCape(profile: Profile): { dcape: number; pressure: numb
     const temperature = profile.temperatureK[k] as number;
     const dewpoint = profile.dewpointK[k] as number;
     thetaE[k] = equivalentPotentialTemperatureFromMixingRatio(pk, temperature, profile.mixingRatio[k] as number, lclTemperature(temperature, dewpoint));
-    thetaW[k] = table.thetaW(wetBulbTemperature(pk, temperature, dewpoint), profile.logPressure[k] as number);
+    // θ_w is the label of the pseudo-adiabat through the level's LCL (Bolton1980 eq. 15).
+    const lclT = lclTemperature(temperature, dewpoint);
+    thetaW[k] = table.thetaW(lclT, (profile.logPressure[k] as number) + Math.log(lclT / temperature) / KAPPA);
   }
   // Cumulative pressure-weighted integrals (trapezoid) for O(1) layer means.
   const cumulativeE = new Float64Array(count);

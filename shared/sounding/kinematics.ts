@@ -1,5 +1,5 @@
 import * as constants from './constants';
-import { finiteOrNull, meetsEffectiveInflowCriteria, mostUnstableLevelIndex, type ParcelResult } from './parcel';
+import { finiteOrNull, meetsEffectiveInflowCriteria, type ParcelResult } from './parcel';
 import type { Profile } from './profile';
 
 // Constants copied once at load (fast access in hot loops).
@@ -161,7 +161,8 @@ function bunkersMotion(winds: WindProfile): { right: WindVector; left: WindVecto
   const su = high.u - low.u;
   const sv = high.v - low.v;
   const magnitude = Math.hypot(su, sv);
-  if (magnitude === 0) return { right: mean, left: mean, mean };
+  // No shear to speak of (below 1 mm/s, e.g. rounding noise): no deviation, and no 7.5/|S| overflow.
+  if (!(magnitude > 1e-3)) return { right: mean, left: mean, mean };
   const deviation = 7.5 / magnitude;
   return {
     right: { u: mean.u + deviation * sv, v: mean.v - deviation * su },
@@ -188,49 +189,58 @@ function stormRelativeHelicity(winds: WindProfile, bottom: number, top: number, 
   return sum;
 }
 
+/** Candidate parcels of the effective-layer search are at least this far apart, hPa. */
+export const EFFECTIVE_LAYER_CANDIDATE_SPACING_HPA = 5;
+
 /**
- * The effective inflow layer: the layer of levels whose parcels have CAPE ≥ 100 J kg⁻¹ and
- * CIN ≥ −250 J kg⁻¹ (Thompson2007 pg. 104), containing the most-unstable level.
+ * The effective inflow layer: the lowest contiguous layer of levels whose parcels have
+ * CAPE ≥ 100 J kg⁻¹ and CIN ≥ −250 J kg⁻¹ (Thompson2007 pg. 104).
  *
- * Bisection from the most-unstable level (the level of highest θₑ in the lowest 300 hPa):
- * when its parcel fails, there is no layer; otherwise the base is found by bisection between
- * the surface and that level and the top by bisection between that level and the top of the
- * moisture data, each step lifting one parcel. Work: O(n log n) for n levels, instead of a
- * parcel from every level. It assumes, as the layer's definition does, that the levels
- * meeting the criteria form one contiguous layer around the most-unstable level.
+ * The base is searched in the lowest 300 hPa; once found, the layer extends up to the level
+ * before the first one that fails. Candidates are levels at least 5 hPa apart, so however
+ * dense the sounding, at most about 60 parcels are lifted for the base search and one per
+ * 5 hPa of layer depth; at each edge the skipped levels of one 5 hPa window are then checked
+ * one by one, so the edges are exactly those of a scan of every level, unless a failing (or
+ * passing) level hides inside a window whose both ends pass (or fail).
  * @param profile - the prepared environment
- * @param mostUnstableIndex - index of the most-unstable level
- * @returns the layer, or null when the most-unstable parcel fails the criteria
+ * @returns the layer, or null when no candidate meets the criteria
  */
-export function effectiveInflowLayer(profile: Profile, mostUnstableIndex = mostUnstableLevelIndex(profile, 300)): EffectiveInflowLayer | null {
-  const top = profile.moistureTopIndex;
-  if (top < 0 || mostUnstableIndex > top || !meetsEffectiveInflowCriteria(profile, mostUnstableIndex)) return null;
-  let bottom = mostUnstableIndex;
-  if (mostUnstableIndex > 0) {
-    if (meetsEffectiveInflowCriteria(profile, 0)) bottom = 0;
-    else {
-      let fails = 0;
-      let passes = mostUnstableIndex;
-      while (passes - fails > 1) {
-        const middle = (fails + passes) >> 1;
-        if (meetsEffectiveInflowCriteria(profile, middle)) passes = middle;
-        else fails = middle;
+export function effectiveInflowLayer(profile: Profile): EffectiveInflowLayer | null {
+  const limit = (profile.pressureHpa[0] as number) - 300;
+  const meets = (k: number): boolean => meetsEffectiveInflowCriteria(profile, k);
+  let bottom = -1;
+  let lastPassing = -1;
+  let lastCandidate = -1;
+  for (let k = 0; k <= profile.moistureTopIndex; k++) {
+    const pressure = profile.pressureHpa[k] as number;
+    if (bottom < 0 && pressure < limit) break;
+    const spaced = lastCandidate < 0 || (profile.pressureHpa[lastCandidate] as number) - pressure >= EFFECTIVE_LAYER_CANDIDATE_SPACING_HPA;
+    if (!spaced && k !== profile.moistureTopIndex) continue;
+    const passes = meets(k);
+    if (bottom < 0) {
+      if (passes) {
+        // Refine within the skipped levels: the base is the lowest passing level.
+        bottom = k;
+        for (let j = lastCandidate + 1; j < k; j++) {
+          if (meets(j)) {
+            bottom = j;
+            break;
+          }
+        }
+        lastPassing = k;
       }
-      bottom = passes;
+    } else if (!passes) {
+      // Refine within the skipped levels: the top is the level below the first failing one.
+      for (let j = lastPassing + 1; j < k; j++) {
+        if (!meets(j)) return layerOf(profile, bottom, j - 1);
+      }
+      return layerOf(profile, bottom, k - 1);
+    } else {
+      lastPassing = k;
     }
+    lastCandidate = k;
   }
-  let upper = top;
-  if (top > mostUnstableIndex && !meetsEffectiveInflowCriteria(profile, top)) {
-    let passes = mostUnstableIndex;
-    let fails = top;
-    while (fails - passes > 1) {
-      const middle = (fails + passes) >> 1;
-      if (meetsEffectiveInflowCriteria(profile, middle)) passes = middle;
-      else fails = middle;
-    }
-    upper = passes;
-  }
-  return layerOf(profile, bottom, upper);
+  return bottom < 0 ? null : layerOf(profile, bottom, lastPassing);
 }
 
 function layerOf(profile: Profile, bottom: number, top: number): EffectiveInflowLayer {
@@ -263,7 +273,7 @@ export function analyzeKinematics(profile: Profile, mostUnstable: ParcelResult, 
   const motion = bunkersMotion(winds);
   const deviantMover = options.latitude !== undefined && options.latitude !== null && options.latitude < 0 ? 'left' : 'right';
   const deviant = motion ? (deviantMover === 'left' ? motion.left : motion.right) : null;
-  const layer = effectiveInflowLayer(profile, options.mostUnstableIndex);
+  const layer = effectiveInflowLayer(profile);
   let effectiveSrh: number | null = null;
   let effectiveBulkShear: number | null = null;
   if (deviant) effectiveSrh = layer ? finiteOrNull(stormRelativeHelicity(winds, layer.bottomHeight, layer.topHeight, deviant)) : 0;

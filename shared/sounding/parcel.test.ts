@@ -14,7 +14,7 @@ function handSounding(rows: [p: number, z: number, t: number, td: number][]): So
 describe('Weisman and Klemp (1982) analytic sounding', () => {
   // WeismanKlemp1982 report CAPE ≈ 2200 m² s⁻² for q_v0 = 14 g/kg (from memory). Their
   // buoyancy used θ and their model's moist thermodynamics, and their parcel was a
-  // near-surface one; ours adds the virtual-temperature correction (SCIENCE.md). We
+  // near-surface one; ours adds the virtual-temperature correction (docs/analysis.md). We
   // therefore allow 10 % and check the mixed-layer and the most-unstable parcel, which
   // bracket the published value.
   const analysis = analyzeSounding(weismanKlempSounding(0.014));
@@ -127,7 +127,7 @@ describe('parcel properties (fast-check)', () => {
   });
 });
 
-describe('parcel conventions (SCIENCE.md)', () => {
+describe('parcel conventions (docs/analysis.md)', () => {
   // A stable sounding: isothermal 20 °C, dry: no parcel becomes buoyant.
   const stable = handSounding([
     [1000, 0, 20, 0],

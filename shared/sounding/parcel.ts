@@ -103,8 +103,8 @@ export const EFFECTIVE_CIN_MIN = -250;
  * LCL inserted as a point and zero crossings found by linear interpolation. The LFC is the
  * base of the positive area (above the LCL) that holds the most energy; the EL the highest
  * crossing above it; CAPE the positive area between them; CIN all negative area from the
- * start to the LFC. When `effectiveCheck` is set, it stops as soon as the parcel is sure to
- * fail the Thompson2007 criteria (CIN already below −250 J kg⁻¹ before any positive area).
+ * start to the LFC. When `effectiveCheck` is set, it decides the Thompson2007 criteria on the
+ * first LFC and stops as soon as the answer is known.
  */
 function ascend(profile: Profile, start: ParcelStart, options: ParcelOptions, effectiveCheck: boolean): AscentOutcome {
   const table = (options.moistAscent ?? 'table') === 'table' ? pseudoAdiabatTable() : undefined;
@@ -225,7 +225,7 @@ function ascend(profile: Profile, start: ParcelStart, options: ParcelOptions, ef
     negativeAreaLfcToEl: Math.min(0, summary.negativeLfcToEl),
     capeClippedAtTop: found && !summary.elFound,
     ...(trace ? { trace } : {}),
-    meetsEffectiveCriteria: !areas.decided && found && summary.cape >= EFFECTIVE_CAPE_MIN && summary.cin >= EFFECTIVE_CIN_MIN,
+    meetsEffectiveCriteria: effectiveCheck ? areas.decided && areas.effectivePasses : found && summary.cape >= EFFECTIVE_CAPE_MIN && summary.cin >= EFFECTIVE_CIN_MIN,
   };
 }
 
@@ -341,8 +341,21 @@ class BuoyancyAreas {
     this.prevZ = z;
     this.prevLog = logPressure;
     this.prevB = buoyancy;
-    if (this.effectiveCheck && this.positiveAreas.length === 0 && this.negative < EFFECTIVE_CIN_MIN) this.decided = true;
+    if (this.effectiveCheck) {
+      // The effective-layer check decides on the first LFC, as Thompson2007 did, and stops as
+      // soon as the answer is known: too much CIN before any positive area, or 100 J/kg of
+      // CAPE above the first LFC with little enough CIN below it.
+      const first = this.positiveAreas[0];
+      if (!first && this.negative < EFFECTIVE_CIN_MIN) this.decided = true;
+      else if (first && this.positive - first.positiveBefore >= EFFECTIVE_CAPE_MIN) {
+        this.decided = true;
+        this.effectivePasses = first.negativeBefore >= EFFECTIVE_CIN_MIN;
+      }
+    }
   }
+
+  /** Effective-layer check only: the decision once `decided`. */
+  effectivePasses = false;
 
   private addPositive(za: number, ba: number, zb: number, bb: number): void {
     const area = 0.5 * (ba + bb) * (zb - za);
@@ -360,7 +373,8 @@ class BuoyancyAreas {
   summary(): AreasSummary {
     const areas = this.positiveAreas;
     let chosen = -1;
-    let largest = 0;
+    // Areas below 1e-6 J/kg are rounding noise (a parcel starting exactly at its environment).
+    let largest = 1e-6;
     for (let i = 0; i < areas.length; i++) {
       const area = (areas[i] as PositiveArea).area;
       if (area > largest) {

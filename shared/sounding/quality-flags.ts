@@ -12,7 +12,7 @@ export const QUALITY_FLAG_CODES = {
   SURFACE_IMPLAUSIBLE: 'A surface value lies outside the range observed anywhere on Earth.',
   TOP_BELOW_500_HPA: 'The sounding ends below 500 hPa: the lifted index is missing and CAPE and EL may be cut.',
   CAPE_CLIPPED_AT_TOP: 'A parcel is still buoyant at the top of the data: its CAPE is cut there and its EL is unknown.',
-  SUPERADIABATIC_LAYER: 'A layer deeper than 200 m cools faster with height than the dry adiabat.',
+  SUPERADIABATIC_LAYER: 'A layer deeper than 500 m cools faster with height than the dry adiabat.',
   LAPSE_RATE_IMPLAUSIBLE: 'The temperature falls faster than the dry adiabat over several kilometres: check the temperature unit.',
   SURFACE_WIND_MISSING: 'No wind at the lowest level: the lowest reported wind stands in for it.',
 } as const;
@@ -41,7 +41,7 @@ export const SURFACE_BOUNDS = {
 } as const;
 
 /** A superadiabatic layer deeper than this is flagged, m. */
-export const SUPERADIABATIC_DEPTH_M = 200;
+export const SUPERADIABATIC_DEPTH_M = 500;
 /** Depth over which a mean lapse rate steeper than dry adiabatic means a unit mistake, m. */
 export const IMPLAUSIBLE_LAPSE_DEPTH_M = 2000;
 /** Dry-adiabatic lapse rate g/c_p, K m⁻¹ (WallaceHobbs2006 eq. 3.53). */
@@ -95,7 +95,7 @@ export function qualityFlags(
   if (superadiabatic.depth > SUPERADIABATIC_DEPTH_M) {
     flags.push({
       code: 'SUPERADIABATIC_LAYER',
-      message: `The layer from ${round(superadiabatic.bottom)} to ${round(superadiabatic.top)} m above ground (${round(superadiabatic.depth)} m deep) cools faster than the dry adiabat (${round(DRY_ADIABATIC_LAPSE_K_PER_M * 1000, 1)} K/km). Such layers rarely exceed ${SUPERADIABATIC_DEPTH_M} m outside the lowest air over a hot surface (common practice); check the data.`,
+      message: `The layer from ${round(superadiabatic.bottom)} to ${round(superadiabatic.top)} m above ground (${round(superadiabatic.depth)} m deep) cools faster than the dry adiabat (${round(DRY_ADIABATIC_LAPSE_K_PER_M * 1000, 1)} K/km). Observed superadiabatic layers are shallow: a surface layer over hot ground of a few hundred metres at most, or thin layers from rounded reports (common practice; our threshold is ${SUPERADIABATIC_DEPTH_M} m); check the data.`,
     });
   }
   const lapse = meanLapseRateOverDepth(profile);

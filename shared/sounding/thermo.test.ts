@@ -22,7 +22,7 @@ describe('potentialTemperature (WallaceHobbs2006 eq. 3.54)', () => {
     expect(dryAdiabatTemperature(623, potentialTemperature(623, 260))).toBeCloseTo(260, 10);
   });
 
-  it('uses κ = Rd/cp ≈ 0.2857 (SCIENCE.md; WallaceHobbs2006 pg. 78)', () => {
+  it('uses κ = Rd/cp ≈ 0.2857 (WallaceHobbs2006 pg. 78)', () => {
     expect(KAPPA).toBeCloseTo(0.2854, 3);
   });
 });
@@ -100,7 +100,7 @@ describe('equivalentPotentialTemperature (Bolton1980 eq. 39)', () => {
     // there is θₑ. For saturated air the two agree to 0.025 K (moist-adiabat.test.ts), the
     // accuracy Bolton1980 states for eq. 39 (about 0.02 K, from memory). For unsaturated air
     // Bolton's θ_DL (eq. 24) lets the vapour change κ below the LCL (κ(1 − 0.28 r)), while
-    // our parcels use the dry-air κ there (SCIENCE.md); that moves the LCL by up to about
+    // our parcels use the dry-air κ there (docs/analysis.md); that moves the LCL by up to about
     // 1 hPa and θₑ by up to 0.15 K, hence 0.2 K. Domain: θₑ ≤ 368 K as in moist-adiabat.test.ts.
     let worst = 0;
     for (let tC = -30; tC <= 35; tC += 5) {

@@ -1,5 +1,6 @@
 import { readFileSync } from 'node:fs';
 import { layerThickness, parseSoundingCsv, type SoundingLevel } from '../../shared/sounding';
+import { buildSounding, type SoundingRecipe } from '../../shared/sounding/testing/random-sounding';
 
 /**
  * Deterministic synthetic soundings for the benchmark: a warm-season profile (moist boundary
@@ -54,4 +55,36 @@ export function assertParses(texts: { name: string; text: string }[]): void {
     const result = parseSoundingCsv(text, name);
     if (!result.ok) throw new Error(`${name} does not parse: ${result.error[0]?.message}`);
   }
+}
+
+/** Levels as exchange-CSV text (u/v winds in m/s). */
+function toCsv(levels: readonly SoundingLevel[]): string {
+  const rows = levels.map((l) => `${l.pressureHpa.toFixed(3)},${l.heightM.toFixed(1)},${l.temperatureC.toFixed(2)},${l.dewpointC === null ? '' : l.dewpointC.toFixed(2)},${(l.uMs ?? 0).toFixed(2)},${(l.vMs ?? 0).toFixed(2)}`);
+  return ['# station: ODD', '# latitude: 38', '# longitude: -92', '# valid: 2027-04-18T18:00:00Z', '# source: model', 'pressure_hPa,height_m,temperature_C,dewpoint_C,u_ms,v_ms', ...rows].join('\n');
+}
+
+/** A deterministic recipe: `count` levels, lapse rates and depressions from simple rules. */
+function recipe(count: number, options: { lapse?: (i: number) => number; depression?: number; top?: number } = {}): SoundingRecipe {
+  return {
+    surfacePressureHpa: 1000,
+    surfaceTemperatureC: 30,
+    surfaceDewpointDepressionK: options.depression ?? 8,
+    lapseRatesKPerKm: Array.from({ length: count - 1 }, (_, i) => (options.lapse ? options.lapse(i) : i < count * 0.8 ? 7 : -1)),
+    dewpointDepressionsK: Array.from({ length: count - 1 }, (_, i) => options.depression ?? Math.min(30, 5 + i * (40 / count))),
+    windSpeedsMs: Array.from({ length: count }, (_, i) => 5 + (i * 40) / count),
+    topPressureHpa: options.top ?? 100,
+  };
+}
+
+/** Odd but legal soundings as CSV texts, for the slowest-file figure. */
+export function oddSoundingTexts(): { name: string; text: string }[] {
+  const cases: [string, SoundingRecipe][] = [
+    ['superadiabatic.csv', recipe(60, { lapse: (i) => (i < 4 ? 15 : 7) })],
+    ['sparse.csv', recipe(5)],
+    ['truncated.csv', recipe(40, { top: 650 })],
+    ['dense-5000.csv', recipe(5000)],
+    ['isothermal.csv', recipe(80, { lapse: () => 0 })],
+    ['saturated.csv', recipe(100, { depression: 0 })],
+  ];
+  return cases.map(([name, r]) => ({ name, text: toCsv(buildSounding(r)) }));
 }

@@ -12,6 +12,8 @@ export interface SoundingRecipe {
   /** Dewpoint depression at each level above the surface, K. */
   dewpointDepressionsK: number[];
   windSpeedsMs: number[];
+  /** Pressure of the top level, hPa (default 100). */
+  topPressureHpa?: number;
 }
 
 /** fast-check arbitrary of physically plausible soundings from the surface to about 100 hPa. */
@@ -34,7 +36,7 @@ export const soundingRecipe = (minLevels = 12, maxLevels = 45): fc.Arbitrary<Sou
  */
 export function buildSounding(recipe: SoundingRecipe): SoundingLevel[] {
   const count = recipe.lapseRatesKPerKm.length + 1;
-  const logStep = Math.log(recipe.surfacePressureHpa / 100) / (count - 1);
+  const logStep = Math.log(recipe.surfacePressureHpa / (recipe.topPressureHpa ?? 100)) / (count - 1);
   const levels: SoundingLevel[] = [];
   let temperatureC = recipe.surfaceTemperatureC;
   let heightM = 0;
@@ -61,3 +63,34 @@ export function buildSounding(recipe: SoundingRecipe): SoundingLevel[] {
   }
   return levels;
 }
+
+/** The kinds of odd soundings the property tests must also survive. */
+export type OddKind = 'superadiabatic' | 'sparse' | 'truncated' | 'dense' | 'isothermal' | 'saturated';
+
+/**
+ * fast-check arbitrary of odd but legal soundings: a superadiabatic surface layer (12–20 K/km
+ * in the lowest layers), sparse (5 levels), truncated (top at 600–700 hPa), very dense
+ * (2,000–2,500 levels), isothermal, or saturated throughout.
+ */
+export const oddSoundingRecipe = (kind: OddKind): fc.Arbitrary<SoundingRecipe> => {
+  const count = kind === 'sparse' ? 5 : kind === 'dense' ? 2000 : 30;
+  const base = kind === 'dense' ? fc.integer({ min: 2000, max: 2500 }) : fc.constant(count);
+  return base.chain((levels) =>
+    fc.record({
+      surfacePressureHpa: fc.double({ min: 850, max: 1050, noNaN: true }),
+      surfaceTemperatureC: fc.double({ min: 0, max: 38, noNaN: true }),
+      surfaceDewpointDepressionK: kind === 'saturated' ? fc.constant(0) : fc.double({ min: 0, max: 20, noNaN: true }),
+      lapseRatesKPerKm: fc.array(
+        kind === 'isothermal' ? fc.constant(0) : fc.double({ min: -4, max: 9.7, noNaN: true }),
+        { minLength: levels - 1, maxLength: levels - 1 },
+      ).chain((rates) =>
+        kind === 'superadiabatic'
+          ? fc.double({ min: 12, max: 20, noNaN: true }).map((steep) => rates.map((rate, i) => (i < Math.max(1, Math.floor(levels / 15)) ? steep : rate)))
+          : fc.constant(rates),
+      ),
+      dewpointDepressionsK: fc.array(kind === 'saturated' ? fc.constant(0) : fc.double({ min: 0, max: 30, noNaN: true }), { minLength: levels - 1, maxLength: levels - 1 }),
+      windSpeedsMs: fc.array(fc.double({ min: 0, max: 60, noNaN: true }), { minLength: levels, maxLength: levels }),
+      topPressureHpa: kind === 'truncated' ? fc.double({ min: 600, max: 700, noNaN: true }) : fc.constant(100),
+    }),
+  );
+};

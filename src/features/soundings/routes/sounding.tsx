@@ -9,6 +9,8 @@ import { useUnits } from '../../../hooks/use-units';
 import { useState } from 'react';
 import { soundingQuery, useSounding } from '../api/get-sounding';
 import { SoundingHeader } from '../components/sounding-header';
+import { SoundingFlags } from '../components/sounding-flags';
+import { SoundingMetadataForm } from '../components/sounding-metadata-form';
 import { SoundingWarnings } from '../components/sounding-warnings';
 import { SoundingDiagramArea } from '../components/sounding-diagram-area';
 
@@ -56,6 +58,8 @@ export function SoundingPage() {
           This is the new sounding. The original is unchanged; both appear in the library and on the map, this one marked as modified.
         </Notice>
       ) : null}
+      <SoundingMetadataForm key={`${data.id}-metadata`} sounding={data} />
+      <SoundingFlags analysis={data.analysis} />
       <SoundingWarnings warnings={data.warnings} />
       {/* Keyed by id: a saved what-if opens fresh, not with the original's edits still applied. */}
       <SoundingDiagramArea key={data.id} sounding={data} />
