@@ -11,6 +11,7 @@ import { createMailer } from './mail/send-mail';
 import { sendPasswordResetMail, sendVerificationMail, storeCaughtMail } from './services/mail.service';
 import { ensureOffice, seedDemo } from './services/seed.service';
 import { recoverOutbox, startOutboxWorker } from './services/outbox.service';
+import { startVerificationWorker, verifyDueIssuances } from './services/verification.service';
 
 export interface StartOptions {
   clientMode: ClientMode;
@@ -47,6 +48,9 @@ export async function startStormdraft(config: Config, options: StartOptions): Pr
   else await ensureOffice(db);
   await recoverOutbox(db);
   const stopWorker = config.outboxIntervalMs > 0 ? startOutboxWorker(db, mailer, config.outboxIntervalMs, (error) => logger.error({ err: error }, 'outbox worker')) : async () => {};
+  // Issuances whose period ended while the app was down are scored now; then every few minutes.
+  await verifyDueIssuances(db);
+  const stopVerification = config.outboxIntervalMs > 0 ? startVerificationWorker(db, 5 * 60_000, (error) => logger.error({ err: error }, 'verification worker')) : async () => {};
   const app = await createApp(ctx, options.clientMode);
   return {
     app,
@@ -55,6 +59,7 @@ export async function startStormdraft(config: Config, options: StartOptions): Pr
     dump: database.dump,
     async close() {
       await stopWorker();
+      await stopVerification();
       mailer.close();
       await catcher?.close();
       await database.close();

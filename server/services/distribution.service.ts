@@ -1,3 +1,4 @@
+import { hasExpired } from '../../shared/issuances/in-force';
 import { and, eq, inArray, isNull } from 'drizzle-orm';
 import type { AreaGeometry, HazardKind, RiskArea } from '../../shared/contracts/outlooks';
 import { hazardLabels } from '../../shared/contracts/outlooks';
@@ -57,6 +58,8 @@ export function discussionExcerpt(markdown: string): string {
  * issuance does; unique keys make it idempotent.
  */
 export async function queueIssuanceNotices(tx: Transaction, config: Config, office: OfficeForNotice, issuance: IssuanceForNotice): Promise<number> {
+  // An issuance whose valid period has already ended (published late, or the demo's past day) alerts nobody.
+  if (hasExpired(issuance, new Date())) return 0;
   const subs = await tx
     .select()
     .from(subscriptions)

@@ -21,7 +21,7 @@ const COLUMNS = ['time_utc', 'latitude', 'longitude', 'hazard', 'hail_cm', 'gust
 const REQUIRED = ['time_utc', 'latitude', 'longitude', 'hazard'] as const;
 const METADATA_KEYS = new Set(['source', 'office', 'note']);
 
-const ISO_UTC = /^(\d{4})-(\d{2})-(\d{2})T(\d{2}):(\d{2})(?::(\d{2}))?Z$/;
+const ISO_UTC = /^(\d{4})-(\d{2})-(\d{2})T(\d{2}):(\d{2})(?::(\d{2})(?:\.\d{1,3})?)?Z$/;
 
 /** Parses an ISO 8601 UTC time, refusing impossible dates (30 February) rather than rolling them over. */
 export function parseUtcTime(text: string): string | undefined {

@@ -25,19 +25,24 @@ const KERNEL_CUTOFF_SIGMAS = 5;
 export function practicallyPerfectField(grid: VerificationGrid, marked: ArrayLike<boolean | number>, sigmaKm: number): Float64Array {
   const field = new Float64Array(grid.cells.length);
   const reach = Math.ceil((KERNEL_CUTOFF_SIGMAS * sigmaKm) / grid.spacingKm);
+  // The kernel depends only on the offset in cells: tabulate it once.
+  const width = 2 * reach + 1;
+  const kernel = new Float64Array(width * width);
+  for (let dr = -reach; dr <= reach; dr++) {
+    for (let dc = -reach; dc <= reach; dc++) kernel[(dr + reach) * width + (dc + reach)] = gaussianWeight(grid.spacingKm * Math.hypot(dr, dc), sigmaKm, grid.spacingKm);
+  }
   for (let index = 0; index < marked.length; index++) {
     if (!marked[index]) continue;
     const row = Math.floor(index / grid.columns);
     const column = index % grid.columns;
     for (let r = Math.max(0, row - reach); r <= Math.min(grid.rows - 1, row + reach); r++) {
+      const kernelRow = (r - row + reach) * width + reach - column;
+      const fieldRow = r * grid.columns;
       for (let c = Math.max(0, column - reach); c <= Math.min(grid.columns - 1, column + reach); c++) {
-        const target = r * grid.columns + c;
-        if (!grid.cells[target]) continue;
-        const distance = grid.spacingKm * Math.hypot(r - row, c - column);
-        field[target] = (field[target] ?? 0) + gaussianWeight(distance, sigmaKm, grid.spacingKm);
+        field[fieldRow + c] = (field[fieldRow + c] ?? 0) + (kernel[kernelRow + c] ?? 0);
       }
     }
   }
-  for (let i = 0; i < field.length; i++) field[i] = Math.min(1, field[i] ?? 0);
+  for (let i = 0; i < field.length; i++) field[i] = grid.cells[i] ? Math.min(1, field[i] ?? 0) : 0;
   return field;
 }

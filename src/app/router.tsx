@@ -156,6 +156,18 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               element: <RoleGate roles={soundingReaders} />,
               children: [
                 {
+                  path: 'verification',
+                  lazy: async () => {
+                    const page = await import('../features/verification/routes/verification');
+                    return { Component: page.VerificationPage, loader: loaderForRoles(queryClient, soundingReaders, page.verificationLoader(queryClient)) };
+                  },
+                },
+              ],
+            },
+            {
+              element: <RoleGate roles={soundingReaders} />,
+              children: [
+                {
                   path: 'soundings',
                   lazy: async () => {
                     const page = await import('../features/soundings/routes/library');

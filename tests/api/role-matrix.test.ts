@@ -83,6 +83,12 @@ const matrix: MatrixRow[] = [
   { method: 'get', route: '/api/unsubscribe', url: '/api/unsubscribe?token=not-a-real-token', expect: anyone(200) },
   { method: 'post', route: '/api/unsubscribe', url: '/api/unsubscribe?token=not-a-real-token', body: {}, expect: anyone(400) },
   { method: 'get', route: '/api/mail-outbox', url: '/api/mail-outbox', expect: staffOnly(200) },
+  { method: 'post', route: '/api/storm-reports', url: '/api/storm-reports', body: {}, expect: readers(400) },
+  { method: 'post', route: '/api/storm-reports/uploads', url: '/api/storm-reports/uploads', expect: readers(400) },
+  { method: 'get', route: '/api/storm-reports', url: '/api/storm-reports', expect: readers(200) },
+  { method: 'get', route: '/api/public/issuances/:issuanceNumber/verification', url: '/api/public/issuances/1999-0001/verification', expect: anyone(404) },
+  { method: 'get', route: '/api/verification', url: '/api/verification', expect: readers(200) },
+  { method: 'get', route: '/api/verification/export.csv', url: '/api/verification/export.csv', expect: readers(200) },
   { method: 'post', route: '/api/mail-outbox/:messageId/resend', url: `/api/mail-outbox/${missingId}/resend`, body: {}, expect: staffOnly(409) },
 ];
 

@@ -5,3 +5,4 @@ export * from './outlooks';
 export * from './issuances';
 export * from './subscriptions';
 export * from './mail';
+export * from './verification';

@@ -1,5 +1,5 @@
 import { clsx } from 'clsx';
-import { Bell, ChartSpline, CircleUserRound, ClipboardCheck, Inbox, LogOut, Newspaper, PencilRuler, Settings2, Users, type LucideIcon } from 'lucide-react';
+import { Bell, ChartScatter, ChartSpline, CircleUserRound, ClipboardCheck, Inbox, LogOut, Newspaper, PencilRuler, Settings2, Users, type LucideIcon } from 'lucide-react';
 import { NavLink } from 'react-router';
 import type { Me } from '../../../shared/contracts/users';
 import { roleName } from '../../utils/roles';
@@ -15,6 +15,7 @@ const icons: Record<NavigationIcon, LucideIcon> = {
   mail: Inbox,
   bulletin: Newspaper,
   account: CircleUserRound,
+  verification: ChartScatter,
 };
 
 interface AppNavProps {

@@ -1,8 +1,10 @@
 import './leaflet-setup';
 import type { FeatureCollection } from 'geojson';
-import { GeoJSON, MapContainer, Pane, Tooltip } from 'react-leaflet';
+import L from 'leaflet';
+import { GeoJSON, MapContainer, Marker, Pane, Tooltip } from 'react-leaflet';
+import { markerSvg } from './marker-symbol';
 import { BoundaryLines, FitBounds, useOfflineBoundaries } from './base-map';
-import type { MapArea, MapBounds } from './risk-area-types';
+import type { MapArea, MapBounds, MapMarker } from './risk-area-types';
 
 
 const asFeature = (area: MapArea): FeatureCollection => ({ type: 'FeatureCollection', features: [{ type: 'Feature', id: area.id, properties: {}, geometry: area.geometry }] });
@@ -11,7 +13,7 @@ const asFeature = (area: MapArea): FeatureCollection => ({ type: 'FeatureCollect
  * A read-only map of risk areas over the offline state and county boundaries. Areas draw in the
  * order given (lowest level first); significant hazards get a bold dark inner outline.
  */
-export function RiskAreaMap({ label, bounds, areas, className }: { label: string; bounds: MapBounds; areas: readonly MapArea[]; className?: string }) {
+export function RiskAreaMap({ label, bounds, areas, markers = [], className }: { label: string; bounds: MapBounds; areas: readonly MapArea[]; markers?: readonly MapMarker[]; className?: string }) {
   const { boundaries } = useOfflineBoundaries();
 
   return (
@@ -54,6 +56,17 @@ export function RiskAreaMap({ label, bounds, areas, className }: { label: string
               style={() => ({ color: '#101624', weight: 3.5, opacity: 0.9, fill: false, dashArray: '1 0' })}
             />
           ))}
+        {markers.map((marker) => (
+          <Marker
+            key={marker.id}
+            position={[marker.latitude, marker.longitude]}
+            icon={L.divIcon({ html: markerSvg(marker.shape, marker.filled), className: 'stormdraft-marker', iconSize: [16, 16], iconAnchor: [8, 8] })}
+            title={marker.title}
+            alt={marker.title}
+          >
+            <Tooltip>{marker.title}</Tooltip>
+          </Marker>
+        ))}
       </MapContainer>
     </div>
   );

@@ -11,4 +11,5 @@ export const bulletinKeys = {
   list: (query: ArchiveQuery) => [...bulletinKeys.lists(), query] as const,
   details: () => [...bulletinKeys.all, 'detail'] as const,
   detail: (issuanceNumber: string) => [...bulletinKeys.details(), issuanceNumber] as const,
+  verification: (issuanceNumber: string) => [...bulletinKeys.detail(issuanceNumber), 'verification'] as const,
 };

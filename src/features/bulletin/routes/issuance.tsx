@@ -7,6 +7,7 @@ import { isApiError } from '../../../lib/api-client';
 import { issuanceQuery, useIssuance } from '../api/get-issuance';
 import { IssuanceDetails } from '../components/issuance-details';
 import { IssuanceLeadActions } from '../components/issuance-lead-actions';
+import { VerificationPanel } from '../components/verification-panel';
 import { formatInstant } from '../utils/issuance-format';
 
 export const issuanceLoader =
@@ -76,6 +77,7 @@ export function IssuancePage() {
             </p>
           ) : null}
           <IssuanceDetails issuance={issuance.data} variant="page" />
+          <VerificationPanel issuance={issuance.data} />
           {isLead && issuance.data.state === 'published' ? <IssuanceLeadActions issuance={issuance.data} /> : null}
         </>
       ) : null}
