@@ -62,7 +62,7 @@ function ScoredView({ issuance, verification }: { issuance: Issuance; verificati
   const flagged = new Set(snapshot.areas.flatMap((a) => a.hazards.map((h) => `${h.hazard}:${h.significant}`)));
   const hazards = result.hazards
     .filter((h) => h.reports > 0 || flagged.has(`${h.hazard}:${h.significant}`) || (!h.significant && flagged.has(`${h.hazard}:true`)))
-    .map((h) => ({ key: `${h.hazard}:${h.significant}`, label: `${h.significant ? 'Significant ' : ''}${hazardLabels[h.hazard].toLowerCase()} (${h.reports} report${h.reports === 1 ? '' : 's'})`, table: h.table, scores: h.scores }));
+    .map((h) => ({ key: `${h.hazard}:${h.significant}`, label: `${h.significant ? `Significant ${hazardLabels[h.hazard].toLowerCase()}` : hazardLabels[h.hazard]} (${h.reports} report${h.reports === 1 ? '' : 's'})`, table: h.table, scores: h.scores }));
   return (
     <div className="space-y-4">
       <p className="text-sm text-ink-muted">

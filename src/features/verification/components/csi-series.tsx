@@ -16,6 +16,7 @@ const y = unitScale([height - margin.bottom, margin.top]);
 export function CsiSeries({ series }: { series: readonly Series[] }) {
   const times = series.flatMap((s) => s.points.map((p) => Date.parse(p.time)));
   if (times.length === 0) return <p className="text-sm text-ink-muted">No scored issuances match the filters.</p>;
+  if (new Set(times).size < 2) return <p className="text-sm text-ink-muted">One scored issuance so far: the trend appears from the second one on. Its scores are in the performance diagram.</p>;
   const t0 = Math.min(...times);
   const t1 = Math.max(...times);
   const x = (time: string) => (t1 === t0 ? (margin.left + width - margin.right) / 2 : margin.left + ((width - margin.left - margin.right) * (Date.parse(time) - t0)) / (t1 - t0));
