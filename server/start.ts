@@ -14,6 +14,7 @@ import { ensureOffice, seedDemo } from './services/seed.service';
 import { startOutboxWorker } from './services/outbox.service';
 import { startDistributionWorker } from './services/distribution.service';
 import { startWebhookWorker } from './services/webhooks.service';
+import { startVerificationWorker, verifyDueIssuances } from './services/verification.service';
 import { closeGeometryPool } from './workers/geometry-pool';
 
 export interface StartOptions {
@@ -55,6 +56,9 @@ export async function startStormdraft(config: Config, options: StartOptions): Pr
   // Publishing leaves a distribution job; this worker turns it into mail (tests drive it themselves).
   const stopDistribution = config.outboxIntervalMs > 0 ? startDistributionWorker(db, config, config.outboxIntervalMs, (error) => logger.error({ err: error }, 'distribution worker')) : async () => {};
   const stopWebhooks = config.outboxIntervalMs > 0 ? startWebhookWorker(db, config.outboxIntervalMs, (error) => logger.error({ err: error }, 'webhook worker')) : async () => {};
+  // Issuances whose period ended while the app was down are scored now; then every few minutes.
+  await verifyDueIssuances(db);
+  const stopVerification = config.outboxIntervalMs > 0 ? startVerificationWorker(db, 5 * 60_000, (error) => logger.error({ err: error }, 'verification worker')) : async () => {};
   const app = await createApp(ctx, options.clientMode);
   return {
     app,
@@ -66,6 +70,7 @@ export async function startStormdraft(config: Config, options: StartOptions): Pr
       await stopWorker();
       await closeGeometryPool();
       await stopWebhooks();
+      await stopVerification();
       mailer.close();
       await catcher?.close();
       await database.close();

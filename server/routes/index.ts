@@ -10,8 +10,9 @@ import type { RouteDefinition } from './route-definition';
 import { soundingsRoutes } from './soundings.routes';
 import { subscriptionsRoutes } from './subscriptions.routes';
 import { usersRoutes } from './users.routes';
+import { verificationRoutes } from './verification.routes';
 import { webhooksRoutes } from './webhooks.routes';
 import { workflowRoutes } from './workflow.routes';
 
 /** Every API route of the app (better-auth's own routes under /api/auth are separate). */
-export const apiRoutes: RouteDefinition[] = [...healthRoutes, ...meRoutes, ...officeRoutes, ...usersRoutes, ...mailMessagesRoutes, ...soundingsRoutes, ...outlooksRoutes, ...workflowRoutes, ...issuancesRoutes, ...subscriptionsRoutes, ...capRoutes, ...ogcRoutes, ...webhooksRoutes];
+export const apiRoutes: RouteDefinition[] = [...healthRoutes, ...meRoutes, ...officeRoutes, ...usersRoutes, ...mailMessagesRoutes, ...soundingsRoutes, ...outlooksRoutes, ...workflowRoutes, ...issuancesRoutes, ...subscriptionsRoutes, ...capRoutes, ...ogcRoutes, ...webhooksRoutes, ...verificationRoutes];

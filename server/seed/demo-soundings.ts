@@ -28,7 +28,7 @@ const stationNames = [
 ];
 
 /** Deterministic pseudo-random numbers (mulberry32), so the demo is the same on every machine. */
-function seededRandom(seed: number): () => number {
+export function seededRandom(seed: number): () => number {
   let a = seed >>> 0;
   return () => {
     a = (a + 0x6d2b79f5) >>> 0;

@@ -1,4 +1,5 @@
 import { and, asc, eq, gt, inArray, isNull, lt, or, sql } from 'drizzle-orm';
+import { hasExpired } from '../../shared/issuances/in-force';
 import type { AreaGeometry, HazardKind, RiskArea } from '../../shared/contracts/outlooks';
 import { hazardLabels } from '../../shared/contracts/outlooks';
 import type { RiskLevel } from '../../shared/contracts/office';
@@ -157,6 +158,8 @@ async function distributeIssuance(db: Database, config: Config, job: JobRow): Pr
   if (!officeRow) throw new Error(`distribution job ${job.id}: office is missing`);
   const office: OfficeForNotice = { id: officeRow.id, name: officeRow.name, timeZone: officeRow.timeZone, region: officeRow.region, riskLadder: officeRow.riskLadder };
   const issuance = issuanceForNotice(row);
+  // An issuance whose valid period had already ended (published late, or the demo's past day) alerts nobody.
+  if (hasExpired(issuance, new Date())) return 0;
   const ladderKeys = office.riskLadder.map((l) => l.key);
   let queued = 0;
   let after = '00000000-0000-0000-0000-000000000000';

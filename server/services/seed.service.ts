@@ -17,6 +17,8 @@ import { transitionOutlook } from './workflow.service';
 import { processDistributionJobs } from './distribution.service';
 import { generateDemoSoundings } from '../seed/demo-soundings';
 import { seedSoundings } from './soundings.service';
+import { ingestReports } from './verification.service';
+import { generateDemoReports } from '../seed/demo-reports';
 import { createUser } from './users.service';
 
 export const demoPassword = 'stormdraft-demo';
@@ -98,6 +100,22 @@ function must<T>(result: Result<T, AppError>, what: string): T {
   return result.value;
 }
 
+/** A past demo day: a published Day 1 issuance and the storm reports that fell that day. */
+async function seedPastIssuance(db: Database, config: Config, forecaster: DemoActor, lead: DemoActor, pastDay: Date): Promise<void> {
+  const at = (hourUtc: number) => new Date(Date.UTC(pastDay.getUTCFullYear(), pastDay.getUTCMonth(), pastDay.getUTCDate(), hourUtc)).toISOString();
+  const past = must(await createOutlook(db, forecaster, { day: 1, issuanceTime: at(13), headline: 'Scattered severe storms in the warm sector; large hail and damaging wind' }), 'past outlook');
+  const saved = must(
+    await saveOutlook(db, forecaster, past.id, { version: past.version, headline: past.headline, discussion: demoOutlookDiscussion, hazardNotes: {}, validFrom: past.validFrom, validUntil: past.validUntil, areas: demoOutlookAreas }),
+    'past outlook',
+  );
+  let version = must(await transitionOutlook(db, config, forecaster, past.id, 'submit', { version: saved.version }), 'past submit').version;
+  version = must(await transitionOutlook(db, config, lead, past.id, 'approve', { version }), 'past approve').version;
+  must(await transitionOutlook(db, config, lead, past.id, 'publish', { version }), 'past publish');
+  must(await ingestReports(db, null, { reports: generateDemoReports(pastDay), merged: 0 }, 'demo', 'demo-reports'), 'storm reports');
+}
+
+type DemoActor = Awaited<ReturnType<typeof demoActor>>;
+
 /**
  * The demo workflow, once: an early Day 1 outlook issued at 12 UTC and published
  * (forecaster writes, lead approves and publishes), the current Day 1 draft that amends it
@@ -110,6 +128,9 @@ async function seedDemoOutlooks(db: Database, config: Config, demoDay: Date): Pr
   const lead = await demoActor(db, 'lead');
   const at = (hourUtc: number) => new Date(Date.UTC(demoDay.getUTCFullYear(), demoDay.getUTCMonth(), demoDay.getUTCDate(), hourUtc)).toISOString();
   const [thunder, level1, level2] = demoOutlookAreas;
+
+  // 0. A Day 1 issuance two days back, whose period has ended: scored against invented reports.
+  await seedPastIssuance(db, config, forecaster, lead, new Date(demoDay.getTime() - 2 * 86_400_000));
 
   // 1. The early Day 1 issuance.
   const early = must(await createOutlook(db, forecaster, { day: 1, issuanceTime: at(12), headline: 'Isolated severe storms possible this afternoon' }), 'early outlook');

@@ -19,14 +19,14 @@ describe('app shell by role', () => {
     fakeServer({ role: 'lead' });
     renderApp('/desk');
     expect(await screen.findByRole('heading', { level: 1, name: 'Forecast desk' })).toBeDefined();
-    expect(await navLinks()).toEqual(['Review queue', 'Forecast desk', 'Soundings', 'Subscribers', 'Public bulletin', 'Account']);
+    expect(await navLinks()).toEqual(['Review queue', 'Forecast desk', 'Soundings', 'Verification', 'Subscribers', 'Public bulletin', 'Account']);
   });
 
   it('when an admin is signed in, the navigation lists users, settings, subscribers, outbox, webhooks and mail', async () => {
     fakeServer({ role: 'admin', routes: [({ path }) => (path === '/api/users' ? { status: 200, body: { users: [] } } : undefined)] });
     renderApp('/admin/users');
     expect(await screen.findByRole('heading', { level: 1, name: 'Users' })).toBeDefined();
-    expect(await navLinks()).toEqual(['Users', 'Office settings', 'Subscribers', 'Outbox', 'Webhooks', 'Mail catcher', 'Soundings', 'Public bulletin', 'Account']);
+    expect(await navLinks()).toEqual(['Users', 'Office settings', 'Subscribers', 'Outbox', 'Webhooks', 'Mail catcher', 'Soundings', 'Verification', 'Public bulletin', 'Account']);
   });
 
   it('when a subscriber opens an admin page, a panel names their role and no admin data is requested', async () => {

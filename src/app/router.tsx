@@ -157,6 +157,18 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               lazy: roleGate(officeReaderRoles),
               children: [
                 {
+                  path: 'verification',
+                  lazy: async () => {
+                    const page = await import('../features/verification/routes/verification');
+                    return { Component: page.VerificationPage, loader: loaderForRoles(queryClient, officeReaderRoles, page.verificationLoader(queryClient)) };
+                  },
+                },
+              ],
+            },
+            {
+              lazy: roleGate(officeReaderRoles),
+              children: [
+                {
                   path: 'soundings',
                   lazy: async () => {
                     const page = await import('../features/soundings/routes/library');

@@ -101,6 +101,12 @@ const matrix: MatrixRow[] = [
   { method: 'get', route: '/api/public/cap', url: '/api/public/cap', expect: anyone(200) },
   { method: 'get', route: '/api/public/cap/:issuanceNumber', url: '/api/public/cap/1999-0001', expect: anyone(404) },
   { method: 'get', route: '/api/public/cap/:issuanceNumber/withdrawal', url: '/api/public/cap/1999-0001/withdrawal', expect: anyone(404) },
+  { method: 'post', route: '/api/storm-reports', url: '/api/storm-reports', body: {}, expect: readers(400) },
+  { method: 'post', route: '/api/storm-reports/uploads', url: '/api/storm-reports/uploads', expect: readers(400) },
+  { method: 'get', route: '/api/storm-reports', url: '/api/storm-reports', expect: readers(200) },
+  { method: 'get', route: '/api/public/issuances/:issuanceNumber/verification', url: '/api/public/issuances/1999-0001/verification', expect: anyone(404) },
+  { method: 'get', route: '/api/verification', url: '/api/verification', expect: readers(200) },
+  { method: 'get', route: '/api/verification/export.csv', url: '/api/verification/export.csv', expect: readers(200) },
   { method: 'post', route: '/api/mail-outbox/:messageId/resend', url: `/api/mail-outbox/${missingId}/resend`, body: {}, expect: staffOnly(409) },
 ];
 

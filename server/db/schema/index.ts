@@ -8,3 +8,4 @@ export * from './mail';
 export * from './security';
 export * from './distribution';
 export * from './webhooks';
+export * from './verification';

@@ -12,4 +12,5 @@ export const issuancesKeys = {
   list: (query: ArchiveQuery) => [...issuancesKeys.lists(), query] as const,
   details: () => [...issuancesKeys.all, 'detail'] as const,
   detail: (issuanceNumber: string) => [...issuancesKeys.details(), issuanceNumber] as const,
+  verification: (issuanceNumber: string) => [...issuancesKeys.detail(issuanceNumber), 'verification'] as const,
 };

@@ -1,5 +1,5 @@
 import { clsx } from 'clsx';
-import { Bell, ChartSpline, CircleUserRound, ClipboardCheck, Inbox, LogOut, Menu, Newspaper, PencilRuler, Settings2, Users, Webhook, X, type LucideIcon } from 'lucide-react';
+import { Bell, ChartScatter, ChartSpline, CircleUserRound, ClipboardCheck, Inbox, LogOut, Menu, Newspaper, PencilRuler, Settings2, Users, Webhook, X, type LucideIcon } from 'lucide-react';
 import { useState } from 'react';
 import { NavLink } from 'react-router';
 import type { Me } from '../../../shared/contracts/users';
@@ -17,6 +17,7 @@ const icons: Record<NavigationIcon, LucideIcon> = {
   bulletin: Newspaper,
   account: CircleUserRound,
   webhooks: Webhook,
+  verification: ChartScatter,
 };
 
 interface AppNavProps {

@@ -6,7 +6,8 @@ import { textColourOn } from '../../../shared/contracts/office';
 import { AREA_FILL_OPACITY, AREA_OUTLINE } from './area-outline';
 import { BoundaryLines, FitBounds, useOfflineBoundaries } from './base-map';
 import { labelAnchor } from './inset-outline';
-import type { MapArea, MapBounds } from './risk-area-types';
+import { markerSvg } from './marker-symbol';
+import type { MapArea, MapBounds, MapMarker } from './risk-area-types';
 
 function escapeHtml(text: string): string {
   return text.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
@@ -27,7 +28,7 @@ const asFeature = (area: MapArea): FeatureCollection => ({ type: 'FeatureCollect
  * order given (lowest level first), each with its two-colour outline (area-outline.ts) and its
  * label; significant hazards get a bold dark inner outline.
  */
-export function RiskAreaMap({ label, bounds, areas, className }: { label: string; bounds: MapBounds; areas: readonly MapArea[]; className?: string }) {
+export function RiskAreaMap({ label, bounds, areas, markers = [], className }: { label: string; bounds: MapBounds; areas: readonly MapArea[]; markers?: readonly MapMarker[]; className?: string }) {
   const { boundaries } = useOfflineBoundaries();
 
   return (
@@ -78,6 +79,17 @@ export function RiskAreaMap({ label, bounds, areas, className }: { label: string
           ))}
         {areas.map((area) => (
           <AreaLabel key={`label:${area.id}`} area={area} />
+        ))}
+        {markers.map((marker) => (
+          <Marker
+            key={marker.id}
+            position={[marker.latitude, marker.longitude]}
+            icon={L.divIcon({ html: markerSvg(marker.shape, marker.filled), className: 'stormdraft-marker', iconSize: [16, 16], iconAnchor: [8, 8] })}
+            title={marker.title}
+            alt={marker.title}
+          >
+            <Tooltip>{marker.title}</Tooltip>
+          </Marker>
         ))}
       </MapContainer>
     </div>

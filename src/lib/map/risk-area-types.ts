@@ -18,3 +18,17 @@ export interface MapBounds {
   east: number;
   north: number;
 }
+
+/** Shapes of the point symbols the read-only map can draw (storm reports use one per hazard). */
+export type MarkerShape = 'triangle-down' | 'circle' | 'square' | 'diamond';
+
+/** One point symbol on the read-only map: plain data, no Leaflet objects. */
+export interface MapMarker {
+  id: string;
+  latitude: number;
+  longitude: number;
+  shape: MarkerShape;
+  /** Filled dark for the significant form; white with a dark outline otherwise. */
+  filled: boolean;
+  title: string;
+}

@@ -10,6 +10,7 @@ import { IssuanceLeadActions } from '../components/issuance-lead-actions';
 import { IssuanceRecord } from '../components/issuance-record';
 import { issuanceStanding } from '../components/issuance-state-badge';
 import { useNow } from '../../../hooks/use-now';
+import { VerificationPanel } from '../components/verification-panel';
 import { formatInstant } from '../utils/issuance-format';
 
 export const issuanceLoader =
@@ -80,18 +81,10 @@ export function IssuancePage() {
               .
             </p>
           ) : null}
-          {issuanceStanding(issuance.data, now) === 'expired' ? (
-            <Notice tone="warning" title="This outlook has expired">
-              Its valid period ended {formatInstant(issuance.data.validUntil)}
-              {officeZone !== 'UTC' ? ` (${formatInstant(issuance.data.validUntil, officeZone)})` : ''}. It is no longer in force and stays here as a record.{' '}
-              <Link to="/bulletin" className="font-semibold text-accent hover:underline">
-                See what is in force now.
-              </Link>
-            </Notice>
-          ) : null}
           <IssuanceDetails issuance={issuance.data} variant="page" now={now}>
             <IssuanceRecord issuance={issuance.data} />
           </IssuanceDetails>
+          <VerificationPanel issuance={issuance.data} />
           {isLead && issuance.data.state === 'published' ? <IssuanceLeadActions issuance={issuance.data} /> : null}
         </>
       ) : null}

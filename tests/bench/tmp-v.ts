@@ -1,0 +1,2 @@
+import { verifyOneIssuance } from './verification';
+console.log(verifyOneIssuance.name, await verifyOneIssuance.measure());
