@@ -9,7 +9,7 @@ import { validateSounding } from '../../shared/sounding/validate';
 import type { StormReport } from '../../shared/reports/storm-report';
 import { generateDemoSoundings, seededRandom } from './demo-soundings';
 
-const remarks: Record<StormReport['hazard'], string[]> = {
+const remarks: Record<StormReport['hazard'], [string, ...string[]]> = {
   hail: ['Hail covering the road', 'Hail dented car roofs', 'Hail with heavy rain', 'Stones bouncing off the porch'],
   wind: ['Large limbs down', 'Trees uprooted along the county road', 'Shed roof blown off', 'Power lines down'],
   tornado: ['Brief touchdown in open fields', 'Barn destroyed, trees snapped', 'Rotating wall cloud with debris'],
@@ -31,7 +31,7 @@ export function generateDemoReports(day: Date): StormReport[] {
   const base = Date.UTC(day.getUTCFullYear(), day.getUTCMonth(), day.getUTCDate(), 19);
   const reports: StormReport[] = [];
   const at = (offsetHours: number) => new Date(base + offsetHours * 3_600_000).toISOString();
-  const pick = <T>(list: readonly T[]): T => list[Math.floor(random() * list.length)] as T;
+  const pick = <T>(list: readonly [T, ...T[]]): T => list[Math.floor(random() * list.length)] ?? list[0];
   ranked.forEach((centre, clusterIndex) => {
     const count = 9 - clusterIndex; // more reports where it was most unstable
     for (let i = 0; i < count; i++) {

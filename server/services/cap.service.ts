@@ -2,8 +2,6 @@ import { desc, eq } from 'drizzle-orm';
 import { isInForce } from '../../shared/issuances/in-force';
 import { appError, type AppError } from '../../shared/errors';
 import { err, ok, type Result } from '../../shared/result';
-import type { RiskArea } from '../../shared/contracts/outlooks';
-import type { RiskLevel } from '../../shared/contracts/office';
 import type { DatabaseOrTransaction } from '../db/client';
 import { issuances } from '../db/schema';
 import { buildCapAlert, type CapMsgType, type CapReference } from '../exports/cap';
@@ -23,8 +21,8 @@ export const capUrl = (publicUrl: string, number: string) => `${publicUrl}/api/p
 export const capCancelUrl = (publicUrl: string, number: string) => `${publicUrl}/api/public/cap/${number}/withdrawal`;
 
 function snapshotOf(view: IssuanceView) {
-  const s = view.snapshot as { riskLadder?: RiskLevel[]; areas?: RiskArea[]; headline?: string; discussion?: string; office?: { name?: string } };
-  return { ladder: s.riskLadder ?? [], areas: s.areas ?? [], headline: s.headline ?? '', discussion: s.discussion ?? '', officeName: s.office?.name ?? 'Stormdraft' };
+  const s = view.snapshot;
+  return { ladder: s.riskLadder, areas: s.areas.map((a, i) => ({ ...a, sortOrder: a.sortOrder ?? i })), headline: s.headline, discussion: s.discussion, officeName: s.office.name };
 }
 
 function buildFor(view: IssuanceView, publicUrl: string, message: { msgType: CapMsgType; identifier: string; sent: Date; references: CapReference[]; note?: string }): string {

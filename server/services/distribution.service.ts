@@ -1,10 +1,10 @@
+import { issuanceSnapshotSchema } from '../../shared/contracts/issuances';
 import { and, asc, eq, gt, inArray, isNull, lt, or, sql } from 'drizzle-orm';
 import { hasExpired } from '../../shared/issuances/in-force';
 import type { AreaGeometry, HazardKind, RiskArea } from '../../shared/contracts/outlooks';
 import { hazardLabels } from '../../shared/contracts/outlooks';
 import type { RiskLevel } from '../../shared/contracts/office';
 import type { NoticeKind } from '../../shared/distribution/match';
-import { publicCautionShort } from '../../shared/workflow/caution';
 import { markdownExcerpt } from '../../shared/text/markdown-excerpt';
 import type { Config } from '../config';
 import type { Database, Transaction } from '../db/client';
@@ -141,8 +141,8 @@ export function startDistributionWorker(db: Database, config: Config, intervalMs
 
 /** The snapshot fields distribution needs from an issuance row. */
 function issuanceForNotice(row: typeof issuances.$inferSelect): IssuanceForNotice {
-  const s = row.snapshot as { headline?: string; discussion?: string; areas?: RiskArea[] };
-  return { id: row.id, number: row.number, day: row.day, validFrom: row.validFrom.toISOString(), validUntil: row.validUntil.toISOString(), supersedesId: row.supersedesId, headline: s.headline ?? '', discussion: s.discussion ?? '', areas: s.areas ?? [] };
+  const s = issuanceSnapshotSchema.parse(row.snapshot);
+  return { id: row.id, number: row.number, day: row.day, validFrom: row.validFrom.toISOString(), validUntil: row.validUntil.toISOString(), supersedesId: row.supersedesId, headline: s.headline, discussion: s.discussion, areas: s.areas.map((a, i) => ({ ...a, sortOrder: a.sortOrder ?? i })) };
 }
 
 /**

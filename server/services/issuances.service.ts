@@ -133,7 +133,7 @@ export async function getIssuance(db: DatabaseOrTransaction, number: string): Pr
 }
 
 /** An issuance's areas as RFC 7946 GeoJSON, carrying its number, valid times and the caution. */
-export async function issuanceGeoJson(db: Database, number: string): Promise<Result<FeatureCollection & { properties: Record<string, unknown> }, AppError>> {
+export async function issuanceGeoJson(db: DatabaseOrTransaction, number: string): Promise<Result<FeatureCollection & { properties: Record<string, unknown> }, AppError>> {
   const found = await getIssuance(db, number);
   if (!found.ok) return found;
   const view = found.value;

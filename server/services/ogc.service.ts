@@ -1,3 +1,4 @@
+import { issuanceSnapshotSchema } from '../../shared/contracts/issuances';
 import { asc, eq } from 'drizzle-orm';
 import { bboxPolygon, booleanIntersects } from '@turf/turf';
 import type { Feature, Geometry, MultiPolygon } from 'geojson';
@@ -119,8 +120,8 @@ interface Snapshot {
   areas: RiskArea[];
 }
 function snapshotOf(row: IssuanceRow): Snapshot {
-  const s = row.snapshot as { headline?: string; riskLadder?: RiskLevel[]; areas?: RiskArea[] };
-  return { headline: s.headline ?? '', ladder: s.riskLadder ?? [], areas: s.areas ?? [] };
+  const s = issuanceSnapshotSchema.parse(row.snapshot);
+  return { headline: s.headline, ladder: s.riskLadder, areas: s.areas.map((a, i) => ({ ...a, sortOrder: a.sortOrder ?? i })) };
 }
 
 const featureIdOf = (number: string, index: number) => `${number}-${index + 1}`;

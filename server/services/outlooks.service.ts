@@ -18,8 +18,6 @@ import { auditEvents, outlookRevisions, outlooks, riskAreas, soundings, users } 
 import { findOffice } from './office.service';
 import { keyFigures } from './soundings.service';
 import { runGeometryTask } from '../workers/geometry-pool';
-import type { AreaEvidenceReport } from '../workers/evidence-report';
-import type { SoundingAnalysis } from '../../shared/sounding';
 
 type OutlookRow = typeof outlooks.$inferSelect;
 type AreaRow = typeof riskAreas.$inferSelect;

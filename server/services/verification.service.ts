@@ -1,11 +1,11 @@
 import { and, asc, eq, gte, isNull, lt, lte, or, type SQL } from 'drizzle-orm';
-import type { MultiPolygon, Polygon } from 'geojson';
 import { localDate } from '../../shared/time/valid-period';
-import type { RiskLadder, Region } from '../../shared/contracts/office';
-import type { IssuanceVerification, ReportIntakeResult, StormReportView, VerificationResult, VerificationSummary, VerificationSummaryQuery } from '../../shared/contracts/verification';
+import type { Region } from '../../shared/contracts/office';
+import { issuanceSnapshotSchema } from '../../shared/contracts/issuances';
+import type { IssuanceVerification, ReportIntakeResult, StormReportInput, StormReportView, VerificationResult, VerificationSummary, VerificationSummaryQuery } from '../../shared/contracts/verification';
 import { isDuplicate, parseReportsCsv, parseReportsGeoJson, type ReportIssue } from '../../shared/reports/parse-reports';
 import type { StormReport } from '../../shared/reports/storm-report';
-import { scoreIssuance, verificationMethod, type ScoredArea } from '../../shared/verification/score-issuance';
+import { scoreIssuance, verificationMethod } from '../../shared/verification/score-issuance';
 import { appError, type AppError } from '../../shared/errors';
 import { err, ok, type Result } from '../../shared/result';
 import type { Actor } from '../auth/require-role';
@@ -59,11 +59,11 @@ export function parseReportFile(text: string, fileName: string): Result<{ report
 }
 
 /** Checks reports that arrived as JSON (pipelines) with the same rules as a file. */
-export function parseReportJson(reports: unknown[]): Result<{ reports: StormReport[]; merged: number }, AppError> {
+export function parseReportJson(reports: readonly StormReportInput[]): Result<{ reports: StormReport[]; merged: number }, AppError> {
   const parsed = parseReportsGeoJson({
     type: 'FeatureCollection',
     features: reports.map((r) => {
-      const { latitude, longitude, ...properties } = (r ?? {}) as Record<string, unknown>;
+      const { latitude, longitude, ...properties } = r;
       return { type: 'Feature', geometry: { type: 'Point', coordinates: [longitude, latitude] }, properties };
     }),
   });
@@ -143,16 +143,11 @@ function regionFilter(region: Region | undefined): SQL[] {
   return [gte(stormReports.latitude, region.south), lte(stormReports.latitude, region.north), gte(stormReports.longitude, region.west), lte(stormReports.longitude, region.east)];
 }
 
-interface SnapshotShape {
-  riskLadder?: RiskLadder;
-  office?: { region?: Region };
-  areas?: { levelKey: string; hazards?: ScoredArea['hazards']; geometry: Polygon | MultiPolygon }[];
-}
 
 /** Scores one issuance (or records why it is not scored) and stores the result beside it. */
 export async function verifyIssuance(db: Database, row: IssuanceRow, now = new Date()): Promise<void> {
   const window = await windowOf(db, row);
-  const snapshot = row.snapshot as SnapshotShape;
+  const snapshot = issuanceSnapshotSchema.parse(row.snapshot);
   let status: 'scored' | 'not_scored' = 'scored';
   let reason: string | null = null;
   let result: VerificationResult | null = null;
@@ -236,7 +231,7 @@ export async function getIssuanceVerification(db: Database, number: string, now 
       ? await db
           .select()
           .from(stormReports)
-          .where(and(eq(stormReports.officeId, row.officeId), gte(stormReports.time, verification.windowFrom), lt(stormReports.time, verification.windowUntil), ...regionFilter((row.snapshot as SnapshotShape).office?.region)))
+          .where(and(eq(stormReports.officeId, row.officeId), gte(stormReports.time, verification.windowFrom), lt(stormReports.time, verification.windowUntil), ...regionFilter(issuanceSnapshotSchema.parse(row.snapshot).office.region)))
           .orderBy(asc(stormReports.time))
           .limit(5000)
       : [];

@@ -41,7 +41,7 @@ export async function queueWebhookEvents(tx: Transaction, config: Config, eventT
   const endpoints = await tx.select({ id: webhookEndpoints.id }).from(webhookEndpoints).where(and(eq(webhookEndpoints.officeId, row.officeId), eq(webhookEndpoints.active, true)));
   if (!endpoints.length) return;
   // issuanceGeoJson reads through whatever handle it is given; inside the transaction that must be tx (PGlite has one connection).
-  const geojson = await issuanceGeoJson(tx as unknown as Database, row.number);
+  const geojson = await issuanceGeoJson(tx, row.number);
   if (!geojson.ok) throw new Error(`queueWebhookEvents: ${geojson.error.message}`);
   const [previous] = row.supersedesId ? await tx.select({ number: issuances.number }).from(issuances).where(eq(issuances.id, row.supersedesId)) : [];
   const publicUrl = config.publicUrl;
@@ -163,8 +163,8 @@ export async function retryWebhookDelivery(db: Database, actor: Actor, deliveryI
 /** A short, secret-free reason for a failed attempt (network errors carry their code). */
 function failureReason(error: unknown): string {
   if (error instanceof Error) {
-    const cause = (error as Error & { cause?: { code?: unknown } }).cause;
-    const code = cause && typeof cause.code === 'string' ? cause.code : undefined;
+    const cause: unknown = error.cause;
+    const code = typeof cause === 'object' && cause !== null && 'code' in cause && typeof cause.code === 'string' ? cause.code : undefined;
     if (error.name === 'TimeoutError') return `No answer within ${webhookTimeoutMs / 1000} s.`;
     return code ? `Could not connect (${code}).` : error.message.slice(0, 200);
   }

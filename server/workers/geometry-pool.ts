@@ -41,6 +41,7 @@ export async function runGeometryTask<K extends GeometryTask['kind']>(task: Extr
     if (drillsLeft > 0) drillsLeft--;
     try {
       // Our own worker returns the result type of the task kind it was given (geometry-tasks.ts).
+      // eslint-disable-next-line @typescript-eslint/no-unsafe-type-assertion -- piscina's run() is untyped; the worker maps each task kind to its result type.
       return ok((await geometryPool().run(envelope)) as GeometryTaskResults[K]);
     } catch (error) {
       lastError = error;

@@ -15,6 +15,8 @@ export const stormReportInputSchema = z.object({
   remark: z.string().max(500).optional(),
 });
 
+export type StormReportInput = z.infer<typeof stormReportInputSchema>;
+
 export const stormReportsInputSchema = z.object({
   reports: z.array(stormReportInputSchema).min(1, { message: 'Send at least one report.' }).max(10_000, { message: 'Send at most 10,000 reports at once.' }),
 });

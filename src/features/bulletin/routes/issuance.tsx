@@ -81,6 +81,15 @@ export function IssuancePage() {
               .
             </p>
           ) : null}
+          {issuanceStanding(issuance.data, now) === 'expired' ? (
+            <Notice tone="warning" title="This outlook has expired">
+              Its valid period ended {formatInstant(issuance.data.validUntil)}
+              {officeZone !== 'UTC' ? ` (${formatInstant(issuance.data.validUntil, officeZone)})` : ''}. It is no longer in force and stays here as a record.{' '}
+              <Link to="/bulletin" className="font-semibold text-accent hover:underline">
+                See what is in force now.
+              </Link>
+            </Notice>
+          ) : null}
           <IssuanceDetails issuance={issuance.data} variant="page" now={now}>
             <IssuanceRecord issuance={issuance.data} />
           </IssuanceDetails>
