@@ -4,6 +4,7 @@ import { and, eq, like } from 'drizzle-orm';
 import type { Stormdraft } from '../../server/start';
 import { caughtMail, mailOutbox } from '../../server/db/schema';
 import { processOutbox } from '../../server/services/outbox.service';
+import { processDistributionJobs } from '../../server/services/distribution.service';
 import { agentFor, signedInAgent, startTestApp, waitFor } from './helpers/test-app';
 
 // Issue 11 item 10: alert mail goes only to confirmed addresses.
@@ -36,6 +37,8 @@ async function publishOverBoone(headline: string): Promise<string> {
   v = (await lead.post(`/api/outlooks/${id}/approve`).send({ version: v })).body.version;
   const res = await lead.post(`/api/outlooks/${id}/publish`).send({ version: v });
   expect(res.status, JSON.stringify(res.body)).toBe(200);
+  // Publishing leaves a distribution job; run it as the worker would, so the alerts are queued.
+  await processDistributionJobs(sd.ctx.db, sd.ctx.config);
   return res.body.issuanceNumber;
 }
 

@@ -48,6 +48,7 @@ const matrix: MatrixRow[] = [
   { method: 'post', route: '/api/soundings/uploads', url: '/api/soundings/uploads', expect: authors(400) },
   { method: 'get', route: '/api/soundings/:soundingId', url: `/api/soundings/${missingId}`, expect: readers(404) },
   { method: 'delete', route: '/api/soundings/:soundingId', url: `/api/soundings/${missingId}`, expect: authors(404) },
+  { method: 'patch', route: '/api/soundings/:soundingId/metadata', url: `/api/soundings/${missingId}/metadata`, body: {}, expect: authors(400) },
   { method: 'post', route: '/api/soundings/:soundingId/modified', url: `/api/soundings/${missingId}/modified`, body: {}, expect: authors(400) },
   { method: 'get', route: '/api/outlooks', url: '/api/outlooks', expect: readers(200) },
   { method: 'post', route: '/api/outlooks', url: '/api/outlooks', body: {}, expect: authors(400) },

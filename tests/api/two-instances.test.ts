@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { randomUUID } from 'node:crypto';
 import { and, count, eq } from 'drizzle-orm';
 import type { Stormdraft } from '../../server/start';
-import { mailOutbox, subscriptions, users } from '../../server/db/schema';
+import { areasOfInterest, mailOutbox, subscriptions, users } from '../../server/db/schema';
 import { findOffice } from '../../server/services/office.service';
 import { startMailCatcher, type MailCatcher } from '../../server/mail/mail-catcher';
 import { signedInAgent, startTestApp, testPostgresUrl, waitFor } from './helpers/test-app';
@@ -35,7 +35,7 @@ afterAll(async () => {
 });
 
 describe.skipIf(!testPostgresUrl())('two app instances on one PostgreSQL', () => {
-  it('When 1,000 subscribers are alerted and an outlook is published while two instances drain the outbox, then each gets exactly one message and a live claim is left alone', async () => {
+  it('When an outlook reaching 1,000 subscribers is published while two instances distribute and drain the outbox, then each gets exactly one message and a live claim is left alone', async () => {
     // The first instance seeds the database; its worker is off while the distribution is queued.
     const first = await startTestApp({ smtpUrl: catcher.url, outboxIntervalMs: 0 });
     instances.push(first);
@@ -49,9 +49,11 @@ describe.skipIf(!testPostgresUrl())('two app instances on one PostgreSQL', () =>
       .insert(subscriptions)
       .values(people.map((p) => ({ officeId: office!.id, userId: p.id, alertThreshold: 'level1', emails: [p.email] }))) // the seeded office exists
       .returning({ id: subscriptions.id, emails: subscriptions.emails });
-    // What publishing an issuance that reaches all of them leaves in the outbox: one message each.
+    // Each of them watches Boone County (the demo subscriber's county): the publish below reaches all 1,000.
+    const [boone] = await db.select().from(areasOfInterest).where(eq(areasOfInterest.fipsCode, '29019'));
+    expect(boone?.geometry.type).toMatch(/Polygon/);
+    await db.insert(areasOfInterest).values(subs.map((sub) => ({ subscriptionId: sub.id, name: 'Boone County', kind: boone!.kind, fipsCode: '29019', geometry: boone!.geometry }))); // checked just above
     const issuanceId = randomUUID();
-    await db.insert(mailOutbox).values(subs.map((s) => ({ dedupeKey: `alert:${issuanceId}:${s.id}`, toAddress: s.emails.join(', '), subject: 'Your area is at Level 1 · Isolated · Day 1 outlook 2027-0001', html: '<p>Alert</p>', text: 'Alert' })));
     // A message another instance claimed a moment ago and is still sending: nobody else may send it.
     await db.insert(mailOutbox).values({ dedupeKey: `alert:${issuanceId}:in-flight`, toAddress: 'in-flight@county.test', subject: 'In flight', html: '<p>x</p>', text: 'x', status: 'sending', claimedAt: new Date() });
 

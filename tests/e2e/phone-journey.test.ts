@@ -26,8 +26,9 @@ beforeAll(async () => {
   await page.setViewportSize(phone);
 
   // A Day 2 issued long ago (its valid period ended in 2025), published through the real API.
-  const forecaster = await signedInAgent(journey.sd.app, 'forecaster');
-  const lead = await signedInAgent(journey.sd.app, 'lead');
+  // The app only takes writes from its own origin (the journey's PUBLIC_URL).
+  const forecaster = await signedInAgent(journey.sd.app, 'forecaster', demoPassword, journey.baseUrl);
+  const lead = await signedInAgent(journey.sd.app, 'lead', demoPassword, journey.baseUrl);
   const created = (await forecaster.post('/api/outlooks').send({ day: 2, issuanceTime: '2025-05-01T15:00:00Z', headline: 'Expired Day 2 headline' })).body;
   const square = { type: 'Polygon', coordinates: [[[-94, 37], [-92, 37], [-92, 39], [-94, 39], [-94, 37]]] };
   let version: number = (

@@ -96,13 +96,13 @@ export async function startTestApp(overrides: Partial<Config> = {}, clientMode: 
 export const demoEmail = (role: Role) => `${role}@demo.stormdraft.test`;
 
 /** A supertest agent that keeps cookies and always sends Origin (better-auth refuses cookie POSTs without it). */
-export function agentFor(app: Stormdraft['app']): TestAgent {
-  return request.agent(app).set('Origin', testOrigin);
+export function agentFor(app: Stormdraft['app'], origin = testOrigin): TestAgent {
+  return request.agent(app).set('Origin', origin);
 }
 
 /** Signs a demo account in over HTTP and returns the agent holding its session cookie. */
-export async function signedInAgent(app: Stormdraft['app'], role: Role, password = demoPassword): Promise<TestAgent> {
-  const agent = agentFor(app);
+export async function signedInAgent(app: Stormdraft['app'], role: Role, password = demoPassword, origin = testOrigin): Promise<TestAgent> {
+  const agent = agentFor(app, origin);
   const res = await agent.post('/api/auth/sign-in/email').send({ email: demoEmail(role), password });
   if (res.status !== 200) throw new Error(`sign-in as ${role} failed: ${res.status} ${JSON.stringify(res.body)}`);
   return agent;
