@@ -18,21 +18,24 @@ describe('app shell by role', () => {
   it('when a lead opens the forecast desk, the navigation offers review and the desk but no admin pages', async () => {
     fakeServer({ role: 'lead' });
     renderApp('/desk');
-    expect(await screen.findByRole('heading', { level: 1, name: 'Forecast desk' })).toBeDefined();
+    await screen.findByRole('heading', { level: 1, name: 'Forecast desk' });
+    expect(screen.getAllByRole('heading', { level: 1 }).map((heading) => heading.textContent)).toEqual(['Forecast desk']);
     expect(await navLinks()).toEqual(['Review queue', 'Forecast desk', 'Soundings', 'Verification', 'Subscribers', 'Public bulletin', 'Account']);
   });
 
   it('when an admin is signed in, the navigation lists users, settings, subscribers, outbox, webhooks and mail', async () => {
     fakeServer({ role: 'admin', routes: [({ path }) => (path === '/api/users' ? { status: 200, body: { users: [] } } : undefined)] });
     renderApp('/admin/users');
-    expect(await screen.findByRole('heading', { level: 1, name: 'Users' })).toBeDefined();
+    await screen.findByRole('heading', { level: 1, name: 'Users' });
+    expect(screen.getAllByRole('heading', { level: 1 }).map((heading) => heading.textContent)).toEqual(['Users']);
     expect(await navLinks()).toEqual(['Users', 'Office settings', 'Subscribers', 'Outbox', 'Webhooks', 'Mail catcher', 'Soundings', 'Verification', 'Public bulletin', 'Account']);
   });
 
   it('when a subscriber opens an admin page, a panel names their role and no admin data is requested', async () => {
     const server = fakeServer({ role: 'subscriber' });
     renderApp('/admin/users');
-    expect(await screen.findByRole('heading', { name: 'Your role (subscriber) cannot open this page' })).toBeDefined();
+    await screen.findByRole('heading', { name: 'Your role (subscriber) cannot open this page' });
+    expect(screen.queryByRole('heading', { level: 1, name: 'Users' })).toBeNull();
     expect(server.requests.some((request) => request.path === '/api/users')).toBe(false);
   });
 
@@ -42,28 +45,32 @@ describe('app shell by role', () => {
       routes: [({ path }) => (path === '/api/public/bulletin' ? { status: 200, body: { issuances: [], caution: 'planning guidance, not a warning' } } : undefined)],
     });
     renderApp('/');
-    expect(await screen.findByRole('heading', { level: 1, name: 'Severe-thunderstorm outlook' })).toBeDefined();
-    expect(await screen.findByText('No outlook has been published yet')).toBeDefined();
+    await screen.findByRole('heading', { level: 1, name: 'Severe-thunderstorm outlook' });
+    expect(screen.getAllByRole('heading', { level: 1 }).map((heading) => heading.textContent)).toEqual(['Severe-thunderstorm outlook']);
+    expect((await screen.findByText('No outlook has been published yet')).closest('a')).toBeNull();
     expect(screen.getByRole('complementary', { name: 'Caution' }).textContent).toContain('planning guidance, not a warning');
   });
 
   it('when a signed-in forecaster opens /, they land on the forecast desk', async () => {
     fakeServer({ role: 'forecaster' });
     const { router } = renderApp('/');
-    expect(await screen.findByRole('heading', { level: 1, name: 'Forecast desk' })).toBeDefined();
+    await screen.findByRole('heading', { level: 1, name: 'Forecast desk' });
+    expect(screen.getAllByRole('heading', { level: 1 }).map((heading) => heading.textContent)).toEqual(['Forecast desk']);
     expect(router.state.location.pathname).toBe('/desk');
   });
 
   it('when nobody is signed in, a staff page sends them to sign in and remembers where they were going', async () => {
     fakeServer({ role: null });
     const { router } = renderApp('/review');
-    expect(await screen.findByRole('heading', { level: 1, name: 'Sign in to Stormdraft' })).toBeDefined();
+    await screen.findByRole('heading', { level: 1, name: 'Sign in to Stormdraft' });
+    expect(screen.getAllByRole('heading', { level: 1 }).map((heading) => heading.textContent)).toEqual(['Sign in to Stormdraft']);
     expect(router.state.location.search).toBe('?next=%2Freview');
   });
 
   it('when the path is unknown, the 404 page says so', async () => {
     fakeServer({ role: null });
     renderApp('/no/such/page');
-    expect(await screen.findByRole('heading', { level: 1, name: 'We could not find that page' })).toBeDefined();
+    await screen.findByRole('heading', { level: 1, name: 'We could not find that page' });
+    expect(screen.getAllByRole('heading', { level: 1 }).map((heading) => heading.textContent)).toEqual(['We could not find that page']);
   });
 });

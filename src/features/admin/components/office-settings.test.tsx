@@ -31,9 +31,9 @@ describe('office settings page', () => {
     fireEvent.change(name, { target: { value: 'Meridian Valley Office' } });
     fireEvent.click(screen.getByRole('button', { name: 'Save settings' }));
 
-    expect(await screen.findByText('Changed by someone else since you opened it')).toBeDefined();
+    expect((await screen.findByText('Changed by someone else since you opened it')).closest('[role="alert"], [role="status"]')).not.toBeNull();
     fireEvent.click(screen.getByRole('button', { name: 'Keep mine' }));
-    expect(await screen.findByText('Settings saved. Every page now uses them.')).toBeDefined();
+    expect((await screen.findByText('Settings saved. Every page now uses them.')).closest('[role="status"]')).not.toBeNull();
 
     const sent = server.requests.filter((request) => request.method === 'PUT').map((request) => request.body as { name: string; version: number });
     expect(sent).toEqual([expect.objectContaining({ name: 'Meridian Valley Office', version: 3 }), expect.objectContaining({ name: 'Meridian Valley Office', version: 4 })]);
@@ -56,7 +56,7 @@ describe('office settings page', () => {
     await screen.findByLabelText('Office name');
     fireEvent.click(screen.getByRole('button', { name: 'Save settings' }));
     const north = screen.getByLabelText('North');
-    expect(await screen.findByText('The region lies outside the service area.')).toBeDefined();
+    expect((await screen.findByText('The region lies outside the service area.')).id).toMatch(/error$/);
     expect(north.getAttribute('aria-invalid')).toBe('true');
   });
 
@@ -65,7 +65,7 @@ describe('office settings page', () => {
     renderApp('/admin/settings');
     fireEvent.change(await screen.findByLabelText('East'), { target: { value: '-100' } });
     fireEvent.click(screen.getByRole('button', { name: 'Save settings' }));
-    expect(await screen.findByText('East must be greater than west.')).toBeDefined();
+    expect((await screen.findByText('East must be greater than west.')).id).toMatch(/error$/);
     expect(server.requests.some((request) => request.method === 'PUT')).toBe(false);
   });
 });
