@@ -36,15 +36,4 @@ describe('production start-up', () => {
     const { loadConfig } = await import('../../server/config');
     expect(() => loadConfig({ NODE_ENV: 'production' }, [])).toThrow(/BETTER_AUTH_SECRET/);
   });
-
-  it('When the app runs in production, then no demo accounts are created', async () => {
-    const sd = await startTestApp({ env: 'production', seedDemo: false });
-    try {
-      const res = await agentFor(sd.app).post('/api/auth/sign-in/email').send({ email: 'admin@demo.stormdraft.test', password: 'stormdraft-demo' });
-      expect(res.status).toBe(401);
-      expect((await agentFor(sd.app).get('/api/office')).status).toBe(200);
-    } finally {
-      await sd.close();
-    }
-  });
 });
