@@ -4,7 +4,7 @@ import tailwindcss from '@tailwindcss/vite';
 
 /** Modules the public bulletin loads first (see tests/bench/bulletin-bundle.ts for the budget). */
 const publicBulletinModules =
-  /[\\/](src[\\/](app[\\/]layouts[\\/]public-layout|components[\\/]ui[\\/](caution|notice|empty-state|risk-swatch)|features[\\/]bulletin[\\/](routes[\\/]bulletin|components[\\/](issuance-details|issuance-map|issuance-downloads|issuance-state-badge|map-legend|discussion-text)|utils[\\/](issuance-format|map-areas)|api[\\/](get-bulletin|issuance-schema|bulletin-keys))|lib[\\/]map[\\/](static-risk-map|svg-paths|use-offline-boundaries|offline-boundaries))|shared[\\/](contracts[\\/](outlooks|workflow)|issuances[\\/]in-force))\.tsx?$|[\\/]node_modules[\\/]topojson-client[\\/]/;
+  /[\\/](src[\\/](app[\\/]layouts[\\/]public-layout|components[\\/]ui[\\/](caution|notice|empty-state|risk-swatch)|features[\\/]bulletin[\\/](routes[\\/]bulletin|components[\\/](issuance-details|issuance-map|issuance-downloads|issuance-state-badge|map-legend|discussion-text)|utils[\\/](issuance-format|map-areas)|api[\\/](issuance-schema))|api[\\/]issuances[\\/](get-bulletin|issuances-keys)|lib[\\/]map[\\/](static-risk-map|svg-paths|use-offline-boundaries|offline-boundaries))|shared[\\/](contracts[\\/](risk-areas|issuances|me)|issuances[\\/]in-force))\.tsx?$|[\\/]node_modules[\\/]topojson-client[\\/]/;
 
 export default defineConfig({
   plugins: [react(), tailwindcss()],
@@ -14,7 +14,7 @@ export default defineConfig({
     sourcemap: false,
     manifest: true,
     // Every browser we support has modulepreload; the polyfill would only add to the first load.
-    modulePreload: { polyfill: false },
+    modulePreload: false,
     rolldownOptions: {
       output: {
         codeSplitting: {

@@ -1,7 +1,10 @@
 import { z } from 'zod';
 import { regionSchema, riskLevelSchema } from './office';
-import { riskAreaSchema, supportCheckSchema } from './outlooks';
-import { issuanceStates } from './workflow';
+
+/** The states of a published issuance: in force until superseded by an amendment or withdrawn. */
+export const issuanceStates = ['published', 'superseded', 'withdrawn'] as const;
+export type IssuanceState = (typeof issuanceStates)[number];
+import { riskAreaSchema, supportCheckSchema } from './risk-areas';
 
 /** Per area of an issuance: the evidence as it stood at publication (medians only). */
 export const issuanceEvidenceSchema = z.object({

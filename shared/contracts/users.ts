@@ -1,16 +1,8 @@
 import { z } from 'zod';
 import { roleSchema } from './common';
 
-export const unitsSchema = z.object({
-  temperature: z.enum(['C', 'F'], { message: 'Temperature unit must be C or F.' }),
-  height: z.enum(['m', 'ft'], { message: 'Height unit must be m or ft.' }),
-  speed: z.enum(['kt', 'ms', 'mph'], { message: 'Speed unit must be kt, ms or mph.' }),
-});
-export type Units = z.infer<typeof unitsSchema>;
-export const defaultUnits: Units = { temperature: 'C', height: 'm', speed: 'kt' };
+export * from './me';
 
-export const preferencesSchema = z.object({ units: unitsSchema });
-export type Preferences = z.infer<typeof preferencesSchema>;
 
 export const userSummarySchema = z.object({
   id: z.string(),
@@ -22,11 +14,6 @@ export const userSummarySchema = z.object({
 });
 export type UserSummary = z.infer<typeof userSummarySchema>;
 
-export const meSchema = z.object({
-  user: z.object({ id: z.string(), name: z.string(), email: z.string(), role: roleSchema }),
-  preferences: preferencesSchema,
-});
-export type Me = z.infer<typeof meSchema>;
 
 const password = z
   .string()

@@ -22,8 +22,7 @@ export const withdrawInputSchema = z.object({
   reason: z.string().trim().min(5, { message: 'Give the public a reason for the withdrawal (at least 5 characters).' }).max(1000),
 });
 
-export const issuanceStates = ['published', 'superseded', 'withdrawn'] as const;
-export type IssuanceState = (typeof issuanceStates)[number];
+export { issuanceStates, type IssuanceState } from './issuances';
 
 /** What a workflow action answers. */
 export const transitionResultSchema = z.object({ outlookId: z.string(), state: z.enum(outlookStates), version: z.number(), issuanceNumber: z.string().optional() });

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest, isApiError } from '../lib/api-client';
-import { meSchema, type Me } from '../../shared/contracts/users';
+import { meSchema, type Me } from '../../shared/contracts/me';
 
 /** Keys for the signed-in person: `['me']` is the prefix every write to the session invalidates. */
 export const meKeys = {

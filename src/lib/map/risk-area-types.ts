@@ -1,4 +1,4 @@
-import type { AreaGeometry } from '../../../shared/contracts/outlooks';
+import type { AreaGeometry } from '../../../shared/contracts/risk-areas';
 
 /** One risk area as the read-only map draws it: plain data, no Leaflet objects. */
 export interface MapArea {

@@ -1,5 +1,5 @@
 import type { MultiLineString, Position } from 'geojson';
-import type { AreaGeometry } from '../../../shared/contracts/outlooks';
+import type { AreaGeometry } from '../../../shared/contracts/risk-areas';
 import type { MapBounds } from './risk-area-types';
 
 /** A projection from longitude/latitude (degrees) to SVG pixels. */

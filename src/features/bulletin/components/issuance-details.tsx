@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 import { Link } from 'react-router';
-import { hazardKinds, hazardLabels } from '../../../../shared/contracts/outlooks';
+import { hazardKinds, hazardLabels } from '../../../../shared/contracts/risk-areas';
 import { RiskSwatch } from '../../../components/ui/risk-swatch';
 import type { Issuance } from '../api/issuance-schema';
 import { dayLabel, formatInstant, hazardsText, levelsPresent, stepFor, validPeriodText } from '../utils/issuance-format';

@@ -1,6 +1,6 @@
 import { reportHazardLabels, reportHazards } from '../../../../shared/reports/storm-report';
 import type { IssuanceVerification } from '../../../../shared/contracts/verification';
-import { hazardLabels } from '../../../../shared/contracts/outlooks';
+import { hazardLabels } from '../../../../shared/contracts/risk-areas';
 import { Loading } from '../../../components/ui/loading';
 import { Notice } from '../../../components/ui/notice';
 import { RiskAreaMap } from '../../../lib/map/risk-area-map';

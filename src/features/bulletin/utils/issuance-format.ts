@@ -1,4 +1,4 @@
-import { hazardKinds, hazardLabels, type HazardKind } from '../../../../shared/contracts/outlooks';
+import { hazardKinds, hazardLabels, type HazardKind } from '../../../../shared/contracts/risk-areas';
 import { textColourOn } from '../../../../shared/contracts/office';
 
 /** A ladder step as the public pages show it (from the issuance's frozen snapshot). */

@@ -1,5 +1,5 @@
 import type { MapArea, MapBounds } from '../../../lib/map/risk-area-types';
-import type { AreaGeometry, HazardKind } from '../../../../shared/contracts/outlooks';
+import type { AreaGeometry, HazardKind } from '../../../../shared/contracts/risk-areas';
 import { hazardsText, stepFor, type LadderStep } from './issuance-format';
 
 export type { MapArea, MapBounds };
