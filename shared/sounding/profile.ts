@@ -1,8 +1,11 @@
 import * as constants from './constants';
+import { lclTemperature } from './lcl';
+import { pseudoAdiabatTable } from './moist-adiabat';
+import { equivalentPotentialTemperatureFromMixingRatio } from './thermo';
 import type { SoundingLevel } from './types';
 
 // Constants copied once at load (fast access in hot loops).
-const { EPSILON, GRAVITY, RD, ZERO_CELSIUS_K } = constants;
+const { EPSILON, GRAVITY, KAPPA, RD, ZERO_CELSIUS_K } = constants;
 
 /**
  * The environment prepared once per analysis: plain arrays in engine units, sorted by
@@ -38,6 +41,64 @@ export interface Profile {
   heightsReplaced: boolean;
   /** Pressure of the level with the largest height difference, hPa. */
   largestHeightDifferencePressureHpa: number;
+  /** Per-level moist thermodynamics, computed on first use (see {@link levelThermodynamics}). */
+  thermodynamics?: LevelThermodynamics;
+}
+
+/**
+ * Per-level values several parts of the analysis need (most-unstable level, downdraft
+ * source), computed once per profile for the levels from the ground up to
+ * {@link LevelThermodynamics.count}.
+ */
+export interface LevelThermodynamics {
+  /** Number of levels covered (from index 0). */
+  count: number;
+  /** Temperature at each level's LCL, K (Bolton1980 eq. 15). */
+  lclTemperatureK: Float64Array;
+  /** Equivalent potential temperature, K (Bolton1980 eq. 39). */
+  thetaE: Float64Array;
+  /** Wet-bulb potential temperature, K: the label of the pseudo-adiabat through the level's LCL. */
+  thetaW: Float64Array;
+}
+
+/** How deep above the ground per-level moist thermodynamics are kept, hPa (the downdraft search reach). */
+export const LEVEL_THERMODYNAMICS_DEPTH_HPA = 500;
+
+/**
+ * Index of the last level the per-level moist thermodynamics cover: the moist levels within
+ * {@link LEVEL_THERMODYNAMICS_DEPTH_HPA} of the ground plus the first one above (−1: none).
+ */
+export function levelThermodynamicsTop(profile: Profile): number {
+  const reach = (profile.pressureHpa[0] as number) - LEVEL_THERMODYNAMICS_DEPTH_HPA;
+  let top = profile.moistureTopIndex;
+  while (top > 1 && (profile.pressureHpa[top - 1] as number) < reach) top--;
+  return top;
+}
+
+/**
+ * The profile's per-level moist thermodynamics, computed on first use and kept on the profile.
+ * @param profile - the prepared environment
+ * @returns LCL temperature, θₑ and θ_w of the levels 0…levelThermodynamicsTop
+ */
+export function levelThermodynamics(profile: Profile): LevelThermodynamics {
+  if (profile.thermodynamics) return profile.thermodynamics;
+  const count = levelThermodynamicsTop(profile) + 1;
+  const table = pseudoAdiabatTable();
+  const buffer = new Float64Array(3 * count);
+  const lclTemperatureK = buffer.subarray(0, count);
+  const thetaE = buffer.subarray(count, 2 * count);
+  const thetaW = buffer.subarray(2 * count, 3 * count);
+  for (let k = 0; k < count; k++) {
+    const pk = profile.pressureHpa[k] as number;
+    const temperature = profile.temperatureK[k] as number;
+    const lclT = lclTemperature(temperature, profile.dewpointK[k] as number);
+    lclTemperatureK[k] = lclT;
+    thetaE[k] = equivalentPotentialTemperatureFromMixingRatio(pk, temperature, profile.mixingRatio[k] as number, lclT);
+    // θ_w is the label of the pseudo-adiabat through the level's LCL (Bolton1980 eq. 15).
+    thetaW[k] = table.thetaW(lclT, (profile.logPressure[k] as number) + Math.log(lclT / temperature) / KAPPA);
+  }
+  profile.thermodynamics = { count, lclTemperatureK, thetaE, thetaW };
+  return profile.thermodynamics;
 }
 
 /** Fixed part of the height tolerance, m. */
@@ -89,15 +150,18 @@ export function buildProfile(levels: readonly SoundingLevel[]): Profile {
   }
   const sorted = sortByDecreasingPressure(levels);
   const count = sorted.length;
-  const pressureHpa = new Float64Array(count);
-  const logPressure = new Float64Array(count);
-  const heightAglM = new Float64Array(count);
-  const temperatureK = new Float64Array(count);
-  const dewpointK = new Float64Array(count);
-  const mixing = new Float64Array(count);
-  const virtualTemperatureK = new Float64Array(count);
-  const uMs = new Float64Array(count);
-  const vMs = new Float64Array(count);
+  // One allocation for every per-level array (typed-array allocations dominate small profiles).
+  const buffer = new Float64Array(10 * count);
+  const pressureHpa = buffer.subarray(0, count);
+  const logPressure = buffer.subarray(count, 2 * count);
+  const heightAglM = buffer.subarray(2 * count, 3 * count);
+  const temperatureK = buffer.subarray(3 * count, 4 * count);
+  const dewpointK = buffer.subarray(4 * count, 5 * count);
+  const mixing = buffer.subarray(5 * count, 6 * count);
+  const virtualTemperatureK = buffer.subarray(6 * count, 7 * count);
+  const uMs = buffer.subarray(7 * count, 8 * count);
+  const vMs = buffer.subarray(8 * count, 9 * count);
+  const computed = buffer.subarray(9 * count, 10 * count);
   const ground = (sorted[0] as SoundingLevel).heightM;
   let moistureTopIndex = -1;
   for (let i = 0; i < count; i++) {
@@ -148,7 +212,6 @@ export function buildProfile(levels: readonly SoundingLevel[]): Profile {
   // Check the reported heights against the hypsometric equation (WallaceHobbs2006 eq. 3.29,
   // virtual temperature linear in ln p inside a layer), and use the computed ones when any
   // level is off by more than the tolerance.
-  const computed = new Float64Array(count);
   let largestDifference = 0;
   let largestAt = pressureHpa[0] as number;
   let replace = false;
