@@ -61,6 +61,16 @@ export function precipitableWater(profile: Profile): number {
   return (sum / (1000 * GRAVITY)) * 1000;
 }
 
+/**
+ * Reused room for arrays that live only during one synchronous call (the wet-bulb scan, then
+ * the downdraft integrals; never both at once): typed-array allocations cost more than the work.
+ */
+let scratchBuffer = new Float64Array(0);
+function scratch(length: number): Float64Array {
+  if (scratchBuffer.length < length) scratchBuffer = new Float64Array(Math.max(length, 2 * scratchBuffer.length));
+  return scratchBuffer;
+}
+
 /** Lowest height above ground where `values` (K) falls to 0 °C going up; 0 if already ≤ 0 °C at the ground. */
 function zeroCrossingHeight(profile: Profile, values: Float64Array, lastIndex: number): number {
   const first = (values[0] as number) - ZERO_CELSIUS_K;
@@ -108,9 +118,11 @@ export function downdraftCape(profile: Profile): { dcape: number; pressure: numb
   const thetaE = known.thetaE;
   const thetaW = known.thetaW;
   // Cumulative pressure-weighted integrals (trapezoid) for O(1) layer means.
-  const cumulative = new Float64Array(2 * count);
+  const cumulative = scratch(2 * count);
   const cumulativeE = cumulative.subarray(0, count);
   const cumulativeW = cumulative.subarray(count, 2 * count);
+  cumulativeE[0] = 0;
+  cumulativeW[0] = 0;
   for (let k = 1; k < count; k++) {
     const dp = (profile.pressureHpa[k - 1] as number) - (profile.pressureHpa[k] as number);
     cumulativeE[k] = (cumulativeE[k - 1] as number) + 0.5 * ((thetaE[k - 1] as number) + (thetaE[k] as number)) * dp;
@@ -189,7 +201,7 @@ export function analyzeEnvironment(profile: Profile): EnvironmentAnalysis {
   const t500 = valueAtPressure(profile, profile.temperatureK, 500);
   const z700 = heightAtPressure(profile, 700);
   const z500 = heightAtPressure(profile, 500);
-  const wetBulb = new Float64Array(profile.moistureTopIndex + 1);
+  const wetBulb = scratch(profile.moistureTopIndex + 1);
   let wetBulbZero = NaN;
   for (let k = 0; k <= profile.moistureTopIndex; k++) {
     wetBulb[k] = wetBulbTemperature(profile.pressureHpa[k] as number, profile.temperatureK[k] as number, profile.dewpointK[k] as number);

@@ -58,6 +58,12 @@ interface WindProfile {
   density: Float64Array;
 }
 
+/**
+ * Reused room for the wind profile: it lives only during one synchronous analyzeKinematics
+ * call, so one buffer serves every call (typed-array allocations cost more than the work).
+ */
+let windScratch = new Float64Array(0);
+
 function windProfile(profile: Profile): WindProfile {
   let reported = 0;
   for (let k = 0; k < profile.count; k++) {
@@ -74,7 +80,8 @@ function windProfile(profile: Profile): WindProfile {
   const first = reported > 0 ? firstReported() : -1;
   const substitute = first >= 0 && (profile.heightAglM[first] as number) > 0;
   const n = reported + (substitute ? 1 : 0);
-  const buffer = new Float64Array(4 * n);
+  if (windScratch.length < 4 * n) windScratch = new Float64Array(Math.max(4 * n, 2 * windScratch.length));
+  const buffer = windScratch;
   const winds: WindProfile = { n, height: buffer.subarray(0, n), u: buffer.subarray(n, 2 * n), v: buffer.subarray(2 * n, 3 * n), density: buffer.subarray(3 * n, 4 * n) };
   let i = 0;
   if (substitute) {

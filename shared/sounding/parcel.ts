@@ -2,7 +2,7 @@ import { EPSILON, GRAVITY, KAPPA, ZERO_CELSIUS_K } from './constants';
 import { lclTemperature } from './lcl';
 import { dewpointFromMixingRatio, mixingRatio } from './mixing-ratio';
 import { moistAdiabatTemperature, PseudoAdiabatPath, pseudoAdiabatTable, type MoistAscentMethod } from './moist-adiabat';
-import { buildProfile, layerIndexAtPressure, levelThermodynamics, valueAtPressure, type Profile } from './profile';
+import { buildProfile, layerIndexAtPressure, levelExner, levelTableCoordinates, levelThermodynamics, valueAtPressure, type Profile } from './profile';
 import { saturationVaporPressure } from './saturation';
 import { equivalentPotentialTemperatureFromMixingRatio } from './thermo';
 import type { SoundingLevel } from './types';
@@ -116,6 +116,8 @@ function ascend(profile: Profile, start: ParcelStart, options: ParcelOptions, ef
   const z = profile.heightAglM;
   const tve = profile.virtualTemperatureK;
   const count = profile.count;
+  const { node, fraction: nodeFraction } = levelTableCoordinates(profile);
+  const exner = levelExner(profile);
 
   const startPressure = start.pressureHpa;
   const startLogPressure = Math.log(startPressure);
@@ -169,7 +171,7 @@ function ascend(profile: Profile, start: ParcelStart, options: ParcelOptions, ef
     let parcelVirtual: number;
     if (areas.aboveLcl) {
       if (path) {
-        parcelTemperature = path.temperatureAt(pk, lnpk);
+        parcelTemperature = path.temperatureAtNode(pk, lnpk, node[k] as number, nodeFraction[k] as number);
       } else {
         referenceTemperature = moistAdiabatTemperature(referencePressure, referenceTemperature, pk, 1);
         referencePressure = pk;
@@ -177,7 +179,7 @@ function ascend(profile: Profile, start: ParcelStart, options: ParcelOptions, ef
       }
       parcelVirtual = saturatedVirtualTemperature(parcelTemperature, pk);
     } else {
-      parcelTemperature = theta * Math.exp(K * (lnpk - LOG_1000));
+      parcelTemperature = theta * (exner[k] as number);
       parcelVirtual = parcelTemperature * vaporFactor;
     }
     areas.add(zk, lnpk, (G * (parcelVirtual - envVirtual)) / envVirtual);

@@ -1,6 +1,6 @@
 import * as constants from './constants';
 import { lclTemperature } from './lcl';
-import { pseudoAdiabatTable } from './moist-adiabat';
+import { pseudoAdiabatTable, tablePressureCoordinates } from './moist-adiabat';
 import { equivalentPotentialTemperatureFromMixingRatio } from './thermo';
 import type { SoundingLevel } from './types';
 
@@ -43,6 +43,34 @@ export interface Profile {
   largestHeightDifferencePressureHpa: number;
   /** Per-level moist thermodynamics, computed on first use (see {@link levelThermodynamics}). */
   thermodynamics?: LevelThermodynamics;
+  /** Pseudo-adiabat table coordinates of the levels' pressures, computed on first use (see {@link levelTableCoordinates}). */
+  tableCoordinates?: { node: Int32Array; fraction: Float64Array };
+  /** (p/1000 hPa)^κ of each level (a dry parcel's T = θ times it), computed on first use (see {@link levelExner}). */
+  exner?: Float64Array;
+  /** Room for the per-level arrays computed on first use (6 × count values, one allocation with the rest). */
+  spare: Float64Array;
+}
+
+/** The levels' pseudo-adiabat table coordinates, computed once per profile. */
+export function levelTableCoordinates(profile: Profile): { node: Int32Array; fraction: Float64Array } {
+  const n = profile.count;
+  profile.tableCoordinates ??= tablePressureCoordinates(
+    profile.logPressure,
+    new Int32Array(profile.spare.buffer, profile.spare.byteOffset, n),
+    profile.spare.subarray(n, 2 * n),
+  );
+  return profile.tableCoordinates;
+}
+
+const LOG_1000 = Math.log(1000);
+
+/** exp(κ (ln p − ln 1000)) of each level, computed once per profile. */
+export function levelExner(profile: Profile): Float64Array {
+  if (profile.exner) return profile.exner;
+  const exner = profile.spare.subarray(2 * profile.count, 3 * profile.count);
+  for (let k = 0; k < profile.count; k++) exner[k] = Math.exp(KAPPA * ((profile.logPressure[k] as number) - LOG_1000));
+  profile.exner = exner;
+  return exner;
 }
 
 /**
@@ -84,10 +112,10 @@ export function levelThermodynamics(profile: Profile): LevelThermodynamics {
   if (profile.thermodynamics) return profile.thermodynamics;
   const count = levelThermodynamicsTop(profile) + 1;
   const table = pseudoAdiabatTable();
-  const buffer = new Float64Array(3 * count);
-  const lclTemperatureK = buffer.subarray(0, count);
-  const thetaE = buffer.subarray(count, 2 * count);
-  const thetaW = buffer.subarray(2 * count, 3 * count);
+  const n = profile.count;
+  const lclTemperatureK = profile.spare.subarray(3 * n, 3 * n + count);
+  const thetaE = profile.spare.subarray(4 * n, 4 * n + count);
+  const thetaW = profile.spare.subarray(5 * n, 5 * n + count);
   for (let k = 0; k < count; k++) {
     const pk = profile.pressureHpa[k] as number;
     const temperature = profile.temperatureK[k] as number;
@@ -151,7 +179,7 @@ export function buildProfile(levels: readonly SoundingLevel[]): Profile {
   const sorted = sortByDecreasingPressure(levels);
   const count = sorted.length;
   // One allocation for every per-level array (typed-array allocations dominate small profiles).
-  const buffer = new Float64Array(10 * count);
+  const buffer = new Float64Array(16 * count);
   const pressureHpa = buffer.subarray(0, count);
   const logPressure = buffer.subarray(count, 2 * count);
   const heightAglM = buffer.subarray(2 * count, 3 * count);
@@ -244,6 +272,10 @@ export function buildProfile(levels: readonly SoundingLevel[]): Profile {
     largestHeightDifferenceM: largestDifference,
     heightsReplaced: replace,
     largestHeightDifferencePressureHpa: largestAt,
+    thermodynamics: undefined,
+    tableCoordinates: undefined,
+    exner: undefined,
+    spare: buffer.subarray(10 * count, 16 * count),
   };
 }
 
