@@ -11,7 +11,7 @@ import {
   type ParcelOptions,
   type ParcelResult,
 } from './parcel';
-import { buildProfile } from './profile';
+import { buildProfile, type Profile } from './profile';
 import { qualityFlags, type QualityFlag } from './quality-flags';
 import type { SoundingLevel } from './types';
 import { ENGINE_VERSION } from './version';
@@ -61,7 +61,28 @@ export interface AnalysisOptions extends ParcelOptions {
  * Notes: methods and sources per quantity in docs/analysis.md.
  */
 export function analyzeSounding(levels: readonly SoundingLevel[], options: AnalysisOptions = {}): SoundingAnalysis {
-  const profile = buildProfile(levels);
+  const pooled = pooledStorage;
+  pooledStorage = undefined; // in use until this analysis ends
+  let kept = pooled;
+  try {
+    const profile = buildProfile(levels, pooled);
+    if (profile.count <= POOLED_LEVELS_MAX && (!kept || profile.storage.length > kept.length)) kept = profile.storage;
+    return analyzeProfile(profile, options);
+  } finally {
+    pooledStorage = kept;
+  }
+}
+
+/**
+ * Storage of a past analysis's profile, reused by the next: the profile never leaves
+ * analyzeSounding (results hold numbers and new objects only) and the analysis is
+ * synchronous, so one buffer serves every call; allocating typed arrays costs more than a
+ * small analysis. Profiles above POOLED_LEVELS_MAX levels get storage of their own.
+ */
+let pooledStorage: Float64Array | undefined;
+const POOLED_LEVELS_MAX = 2000;
+
+function analyzeProfile(profile: Profile, options: AnalysisOptions): SoundingAnalysis {
   const surface = liftParcelWithEffectiveDecision(profile, surfaceBasedStart(profile), options);
   const surfaceBased = surface.result;
   const mixedLayer = liftParcelOnProfile(profile, mixedLayerStart(profile, 100), options);

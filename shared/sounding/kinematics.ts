@@ -148,7 +148,25 @@ function meanWind(winds: WindProfile, bottom: number, top: number, densityWeight
   let aU = bottomU;
   let aV = at(winds, winds.v, bottom);
   let aW = densityWeighted ? at(winds, winds.density, bottom) : 1;
-  const step = (height: number, u: number, v: number, w: number): void => {
+  // The points inside the layer, then its top (i = n); written without a closure so the
+  // running sums stay unboxed.
+  for (let i = 0; i <= winds.n; i++) {
+    let height: number;
+    let u: number;
+    let v: number;
+    let w: number;
+    if (i < winds.n) {
+      height = winds.height[i] as number;
+      if (!(height > bottom && height < top)) continue;
+      u = winds.u[i] as number;
+      v = winds.v[i] as number;
+      w = densityWeighted ? (winds.density[i] as number) : 1;
+    } else {
+      height = top;
+      u = topU;
+      v = at(winds, winds.v, top);
+      w = densityWeighted ? at(winds, winds.density, top) : 1;
+    }
     const dz = height - aHeight;
     su += 0.5 * (aW * aU + w * u) * dz;
     sv += 0.5 * (aW * aV + w * v) * dz;
@@ -157,12 +175,7 @@ function meanWind(winds: WindProfile, bottom: number, top: number, densityWeight
     aU = u;
     aV = v;
     aW = w;
-  };
-  for (let i = 0; i < winds.n; i++) {
-    const h = winds.height[i] as number;
-    if (h > bottom && h < top) step(h, winds.u[i] as number, winds.v[i] as number, densityWeighted ? (winds.density[i] as number) : 1);
   }
-  step(top, topU, at(winds, winds.v, top), densityWeighted ? at(winds, winds.density, top) : 1);
   return sw > 0 ? { u: su / sw, v: sv / sw } : null;
 }
 

@@ -227,7 +227,7 @@ export class PseudoAdiabatPath {
    * @param startTemperatureK - and its temperature, K
    */
   constructor(
-    private readonly table: PseudoAdiabatTable,
+    readonly table: PseudoAdiabatTable,
     startPressureHpa: number,
     startTemperatureK: number,
   ) {

@@ -2,7 +2,7 @@ import { EPSILON, GRAVITY, KAPPA, ZERO_CELSIUS_K } from './constants';
 import { lclTemperature } from './lcl';
 import { dewpointFromMixingRatio, mixingRatio } from './mixing-ratio';
 import { moistAdiabatTemperature, PseudoAdiabatPath, pseudoAdiabatTable, type MoistAscentMethod } from './moist-adiabat';
-import { buildProfile, layerIndexAtPressure, levelExner, levelTableCoordinates, levelThermodynamics, valueAtPressure, type Profile } from './profile';
+import { buildProfile, exnerAt, layerIndexAtPressure, levelExner, levelTableCoordinates, levelThermodynamics, valueAtPressure, type Profile } from './profile';
 import { saturationVaporPressure } from './saturation';
 import { equivalentPotentialTemperatureFromMixingRatio } from './thermo';
 import type { SoundingLevel } from './types';
@@ -179,7 +179,7 @@ function ascend(profile: Profile, start: ParcelStart, options: ParcelOptions, ef
       }
       parcelVirtual = saturatedVirtualTemperature(parcelTemperature, pk);
     } else {
-      parcelTemperature = theta * (exner[k] as number);
+      parcelTemperature = theta * exnerAt(exner, lnps, k);
       parcelVirtual = parcelTemperature * vaporFactor;
     }
     areas.add(zk, lnpk, (G * (parcelVirtual - envVirtual)) / envVirtual);
@@ -200,7 +200,10 @@ function ascend(profile: Profile, start: ParcelStart, options: ParcelOptions, ef
       parcel500 = theta * Math.exp(K * (LOG_500 - LOG_1000));
       parcelVirtual500 = parcel500 * vaporFactor;
     } else {
-      parcel500 = table ? new PseudoAdiabatPath(table, pressureLcl, temperatureLcl).temperatureAt(500, LOG_500) : moistAdiabatTemperature(pressureLcl, temperatureLcl, 500, 1);
+      // On the ascent's own curve (the same θ_w a new walk from the LCL would find); outside
+      // the table, integrated from the LCL as such a walk would.
+      const inTable = path ? path.table.temperatureInTable(path.thetaWK, LOG_500) : NaN;
+      parcel500 = Number.isNaN(inTable) ? moistAdiabatTemperature(pressureLcl, temperatureLcl, 500, 1) : inTable;
       parcelVirtual500 = saturatedVirtualTemperature(parcel500, 500);
     }
     liftedIndex = environment500 - parcel500;

@@ -45,10 +45,12 @@ export interface Profile {
   thermodynamics?: LevelThermodynamics;
   /** Pseudo-adiabat table coordinates of the levels' pressures, computed on first use (see {@link levelTableCoordinates}). */
   tableCoordinates?: { node: Int32Array; fraction: Float64Array };
-  /** (p/1000 hPa)^κ of each level (a dry parcel's T = θ times it), computed on first use (see {@link levelExner}). */
+  /** (p/1000 hPa)^κ of each level (a dry parcel's T = θ times it), NaN until first needed (see {@link levelExner}). */
   exner?: Float64Array;
   /** Room for the per-level arrays computed on first use (6 × count values, one allocation with the rest). */
   spare: Float64Array;
+  /** The whole storage every array above is a view of. */
+  storage: Float64Array;
 }
 
 /** The levels' pseudo-adiabat table coordinates, computed once per profile. */
@@ -64,13 +66,31 @@ export function levelTableCoordinates(profile: Profile): { node: Int32Array; fra
 
 const LOG_1000 = Math.log(1000);
 
-/** exp(κ (ln p − ln 1000)) of each level, computed once per profile. */
+/**
+ * The profile's cache of exp(κ (ln p − ln 1000)) per level: NaN where not yet computed (only
+ * the levels below some parcel's LCL are ever needed); use {@link exnerAt}.
+ */
 export function levelExner(profile: Profile): Float64Array {
   if (profile.exner) return profile.exner;
   const exner = profile.spare.subarray(2 * profile.count, 3 * profile.count);
-  for (let k = 0; k < profile.count; k++) exner[k] = Math.exp(KAPPA * ((profile.logPressure[k] as number) - LOG_1000));
+  exner.fill(NaN);
   profile.exner = exner;
   return exner;
+}
+
+/**
+ * exp(κ (ln p − ln 1000)) of level k, from the cache or computed into it.
+ * @param exner - the cache of {@link levelExner}
+ * @param logPressure - the profile's ln p
+ * @param k - level index
+ */
+export function exnerAt(exner: Float64Array, logPressure: Float64Array, k: number): number {
+  let value = exner[k] as number;
+  if (Number.isNaN(value)) {
+    value = Math.exp(KAPPA * ((logPressure[k] as number) - LOG_1000));
+    exner[k] = value;
+  }
+  return value;
 }
 
 /**
@@ -162,6 +182,9 @@ export function sortByDecreasingPressure(levels: readonly SoundingLevel[]): read
   return levels;
 }
 
+/** Values per level a profile stores (10 arrays, and room for 6 computed on first use). */
+export const PROFILE_VALUES_PER_LEVEL = 16;
+
 /**
  * Build the analysis profile from sounding levels.
  *
@@ -169,17 +192,19 @@ export function sortByDecreasingPressure(levels: readonly SoundingLevel[]): read
  * below and above them (docs/analysis.md); above the last reported dewpoint the moisture profile
  * ends. A dewpoint above the temperature is capped at the temperature.
  * @param levels - at least two levels with distinct pressures, in any order
+ * @param storage - optional room to build it in (at least PROFILE_VALUES_PER_LEVEL × levels
+ *   values; reused storage must not be used again while the profile is in use)
  * @returns the profile
  * @throws RangeError for fewer than two levels (validate input first)
  */
-export function buildProfile(levels: readonly SoundingLevel[]): Profile {
+export function buildProfile(levels: readonly SoundingLevel[], storage?: Float64Array): Profile {
   if (levels.length < 2) {
     throw new RangeError('A sounding needs at least two levels; validate it with validateSounding first.');
   }
   const sorted = sortByDecreasingPressure(levels);
   const count = sorted.length;
   // One allocation for every per-level array (typed-array allocations dominate small profiles).
-  const buffer = new Float64Array(16 * count);
+  const buffer = storage && storage.length >= PROFILE_VALUES_PER_LEVEL * count ? storage : new Float64Array(PROFILE_VALUES_PER_LEVEL * count);
   const pressureHpa = buffer.subarray(0, count);
   const logPressure = buffer.subarray(count, 2 * count);
   const heightAglM = buffer.subarray(2 * count, 3 * count);
@@ -240,6 +265,7 @@ export function buildProfile(levels: readonly SoundingLevel[]): Profile {
   // Check the reported heights against the hypsometric equation (WallaceHobbs2006 eq. 3.29,
   // virtual temperature linear in ln p inside a layer), and use the computed ones when any
   // level is off by more than the tolerance.
+  computed[0] = 0; // the storage may be reused: every other value is written before it is read
   let largestDifference = 0;
   let largestAt = pressureHpa[0] as number;
   let replace = false;
@@ -276,6 +302,7 @@ export function buildProfile(levels: readonly SoundingLevel[]): Profile {
     tableCoordinates: undefined,
     exner: undefined,
     spare: buffer.subarray(10 * count, 16 * count),
+    storage: buffer,
   };
 }
 
