@@ -4,13 +4,14 @@ import { analyzeKinematics, type KinematicsAnalysis, type WindVector } from './k
 import {
   levelStart,
   liftParcelOnProfile,
+  liftParcelWithEffectiveDecision,
   mixedLayerStart,
   mostUnstableLevelIndex,
   surfaceBasedStart,
   type ParcelOptions,
   type ParcelResult,
 } from './parcel';
-import { buildProfile } from './profile';
+import { buildProfile, type Profile } from './profile';
 import { qualityFlags, type QualityFlag } from './quality-flags';
 import type { SoundingLevel } from './types';
 import { ENGINE_VERSION } from './version';
@@ -38,6 +39,11 @@ export interface SoundingAnalysis {
   engineVersion: string;
 }
 
+/** A parcel result that shares nothing with the original (its trace is copied). */
+function copyParcel(parcel: ParcelResult): ParcelResult {
+  return parcel.trace ? { ...parcel, trace: parcel.trace.map((point) => ({ ...point })) } : { ...parcel };
+}
+
 /** Options of {@link analyzeSounding}. */
 export interface AnalysisOptions extends ParcelOptions {
   /** Latitude, degrees north: below 0 the left mover is the cyclonic deviant one (Bunkers2000). */
@@ -55,13 +61,42 @@ export interface AnalysisOptions extends ParcelOptions {
  * Notes: methods and sources per quantity in docs/analysis.md.
  */
 export function analyzeSounding(levels: readonly SoundingLevel[], options: AnalysisOptions = {}): SoundingAnalysis {
-  const profile = buildProfile(levels);
-  const surfaceBased = liftParcelOnProfile(profile, surfaceBasedStart(profile), options);
+  const pooled = pooledStorage;
+  pooledStorage = undefined; // in use until this analysis ends
+  let kept = pooled;
+  try {
+    const profile = buildProfile(levels, pooled);
+    if (profile.count <= POOLED_LEVELS_MAX && (!kept || profile.storage.length > kept.length)) kept = profile.storage;
+    return analyzeProfile(profile, options);
+  } finally {
+    pooledStorage = kept;
+  }
+}
+
+/**
+ * Storage of a past analysis's profile, reused by the next: the profile never leaves
+ * analyzeSounding (results hold numbers and new objects only) and the analysis is
+ * synchronous, so one buffer serves every call; allocating typed arrays costs more than a
+ * small analysis. Profiles above POOLED_LEVELS_MAX levels get storage of their own.
+ */
+let pooledStorage: Float64Array | undefined;
+const POOLED_LEVELS_MAX = 2000;
+
+function analyzeProfile(profile: Profile, options: AnalysisOptions): SoundingAnalysis {
+  const surface = liftParcelWithEffectiveDecision(profile, surfaceBasedStart(profile), options);
+  const surfaceBased = surface.result;
   const mixedLayer = liftParcelOnProfile(profile, mixedLayerStart(profile, 100), options);
   const mostUnstableIndex = mostUnstableLevelIndex(profile, 300);
-  const mostUnstable = liftParcelOnProfile(profile, levelStart(profile, mostUnstableIndex), options);
+  // The surface level is often the most unstable one: its start, hence its ascent, is the
+  // surface-based parcel's (levelStart(0) equals surfaceBasedStart), so it is not lifted again.
+  const lifted = mostUnstableIndex === 0 ? { result: copyParcel(surfaceBased), meetsEffectiveCriteria: surface.meetsEffectiveCriteria } : liftParcelWithEffectiveDecision(profile, levelStart(profile, mostUnstableIndex), options);
+  const mostUnstable = lifted.result;
   const environment = analyzeEnvironment(profile);
-  const kinematics = analyzeKinematics(profile, mostUnstable, { latitude: options.latitude ?? null, mostUnstableIndex });
+  // Decisions the effective-layer search would otherwise get by lifting these levels again.
+  const knownEffective: { index: number; meets: boolean }[] = [];
+  if (surface.meetsEffectiveCriteria !== null) knownEffective.push({ index: 0, meets: surface.meetsEffectiveCriteria });
+  if (lifted.meetsEffectiveCriteria !== null) knownEffective.push({ index: mostUnstableIndex, meets: lifted.meetsEffectiveCriteria });
+  const kinematics = analyzeKinematics(profile, mostUnstable, { latitude: options.latitude ?? null, mostUnstableIndex, knownEffective });
   const composites = analyzeComposites({ surfaceBased, mixedLayer, mostUnstable }, kinematics);
   const flags = qualityFlags(profile, { surfaceBased, mixedLayer, mostUnstable }, kinematics);
   return {

@@ -2,14 +2,12 @@ import * as constants from './constants';
 import { dewpointFromMixingRatio } from './mixing-ratio';
 import { pseudoAdiabatTable } from './moist-adiabat';
 import { finiteOrNull, mixedLayerStart } from './parcel';
-import { heightAtPressure, layerIndexAtPressure, valueAtHeight, valueAtPressure, type Profile } from './profile';
+import { heightAtPressure, layerIndexAtPressure, LEVEL_THERMODYNAMICS_DEPTH_HPA, levelThermodynamics, valueAtHeight, valueAtPressure, type Profile } from './profile';
 import { saturationVaporPressure } from './saturation';
-import { equivalentPotentialTemperatureFromMixingRatio } from './thermo';
-import { lclTemperature } from './lcl';
 import { wetBulbTemperature } from './wet-bulb';
 
 // Constants copied once at load (fast access in hot loops).
-const { EPSILON, GRAVITY, KAPPA, ZERO_CELSIUS_K } = constants;
+const { EPSILON, GRAVITY, ZERO_CELSIUS_K } = constants;
 
 /** Moisture and temperature structure of the environment. Units in the names and docs. */
 export interface EnvironmentAnalysis {
@@ -63,6 +61,16 @@ export function precipitableWater(profile: Profile): number {
   return (sum / (1000 * GRAVITY)) * 1000;
 }
 
+/**
+ * Reused room for arrays that live only during one synchronous call (the wet-bulb scan, then
+ * the downdraft integrals; never both at once): typed-array allocations cost more than the work.
+ */
+let scratchBuffer = new Float64Array(0);
+function scratch(length: number): Float64Array {
+  if (scratchBuffer.length < length) scratchBuffer = new Float64Array(Math.max(length, 2 * scratchBuffer.length));
+  return scratchBuffer;
+}
+
 /** Lowest height above ground where `values` (K) falls to 0 °C going up; 0 if already ≤ 0 °C at the ground. */
 function zeroCrossingHeight(profile: Profile, values: Float64Array, lastIndex: number): number {
   const first = (values[0] as number) - ZERO_CELSIUS_K;
@@ -83,6 +91,9 @@ function zeroCrossingHeight(profile: Profile, values: Float64Array, lastIndex: n
 export const DOWNDRAFT_LAYER_DEPTH_HPA = 100;
 /** How deep above the ground the downdraft source is searched, hPa (GilmoreWicker1998 pg. 945). */
 export const DOWNDRAFT_SEARCH_DEPTH_HPA = 400;
+if (LEVEL_THERMODYNAMICS_DEPTH_HPA < DOWNDRAFT_SEARCH_DEPTH_HPA + DOWNDRAFT_LAYER_DEPTH_HPA) {
+  throw new Error('The per-level thermodynamics must reach as high as the downdraft search.');
+}
 
 /**
  * Downdraft CAPE: the negative buoyancy a saturated downdraft gains sinking to the ground.
@@ -97,27 +108,21 @@ export const DOWNDRAFT_SEARCH_DEPTH_HPA = 400;
  * area, floored at 0.
  */
 export function downdraftCape(profile: Profile): { dcape: number; pressure: number } | null {
-  // Only the levels the search can reach: the lowest 400 hPa plus half a layer above.
-  const reach = (profile.pressureHpa[0] as number) - DOWNDRAFT_SEARCH_DEPTH_HPA - DOWNDRAFT_LAYER_DEPTH_HPA;
-  let top = profile.moistureTopIndex;
-  while (top > 1 && (profile.pressureHpa[top - 1] as number) < reach) top--;
+  // Only the levels the search can reach: the lowest 400 hPa plus half a layer above
+  // (θₑ and θ_w of these levels are computed once per profile).
+  const known = levelThermodynamics(profile);
+  const top = known.count - 1;
   if (top < 1) return null;
   const table = pseudoAdiabatTable();
   const count = top + 1;
-  const thetaE = new Float64Array(count);
-  const thetaW = new Float64Array(count);
-  for (let k = 0; k < count; k++) {
-    const pk = profile.pressureHpa[k] as number;
-    const temperature = profile.temperatureK[k] as number;
-    const dewpoint = profile.dewpointK[k] as number;
-    thetaE[k] = equivalentPotentialTemperatureFromMixingRatio(pk, temperature, profile.mixingRatio[k] as number, lclTemperature(temperature, dewpoint));
-    // θ_w is the label of the pseudo-adiabat through the level's LCL (Bolton1980 eq. 15).
-    const lclT = lclTemperature(temperature, dewpoint);
-    thetaW[k] = table.thetaW(lclT, (profile.logPressure[k] as number) + Math.log(lclT / temperature) / KAPPA);
-  }
+  const thetaE = known.thetaE;
+  const thetaW = known.thetaW;
   // Cumulative pressure-weighted integrals (trapezoid) for O(1) layer means.
-  const cumulativeE = new Float64Array(count);
-  const cumulativeW = new Float64Array(count);
+  const cumulative = scratch(2 * count);
+  const cumulativeE = cumulative.subarray(0, count);
+  const cumulativeW = cumulative.subarray(count, 2 * count);
+  cumulativeE[0] = 0;
+  cumulativeW[0] = 0;
   for (let k = 1; k < count; k++) {
     const dp = (profile.pressureHpa[k - 1] as number) - (profile.pressureHpa[k] as number);
     cumulativeE[k] = (cumulativeE[k - 1] as number) + 0.5 * ((thetaE[k - 1] as number) + (thetaE[k] as number)) * dp;
@@ -196,7 +201,7 @@ export function analyzeEnvironment(profile: Profile): EnvironmentAnalysis {
   const t500 = valueAtPressure(profile, profile.temperatureK, 500);
   const z700 = heightAtPressure(profile, 700);
   const z500 = heightAtPressure(profile, 500);
-  const wetBulb = new Float64Array(profile.moistureTopIndex + 1);
+  const wetBulb = scratch(profile.moistureTopIndex + 1);
   let wetBulbZero = NaN;
   for (let k = 0; k <= profile.moistureTopIndex; k++) {
     wetBulb[k] = wetBulbTemperature(profile.pressureHpa[k] as number, profile.temperatureK[k] as number, profile.dewpointK[k] as number);

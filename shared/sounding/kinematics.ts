@@ -49,41 +49,65 @@ export interface KinematicsAnalysis {
   brnShear: number | null;
 }
 
-/** Winds of the levels that report one, by height above ground. */
+/** Winds of the levels that report one, by height above ground (the first `n` entries). */
 interface WindProfile {
-  height: number[];
-  u: number[];
-  v: number[];
-  density: number[];
+  n: number;
+  height: Float64Array;
+  u: Float64Array;
+  v: Float64Array;
+  density: Float64Array;
 }
 
+/**
+ * Reused room for the wind profile: it lives only during one synchronous analyzeKinematics
+ * call, so one buffer serves every call (typed-array allocations cost more than the work).
+ */
+let windScratch = new Float64Array(0);
+
 function windProfile(profile: Profile): WindProfile {
-  const result: WindProfile = { height: [], u: [], v: [], density: [] };
-  const surfaceDensity = ((profile.pressureHpa[0] as number) * 100) / (RD * (profile.virtualTemperatureK[0] as number));
+  let reported = 0;
+  for (let k = 0; k < profile.count; k++) {
+    if (!Number.isNaN(profile.uMs[k] as number) && !Number.isNaN(profile.vMs[k] as number)) reported++;
+  }
+  // No wind at the lowest level: the lowest reported wind stands in for it (flagged by the
+  // analysis), so shear and helicity are computed instead of all turning null.
+  const firstReported = (): number => {
+    for (let k = 0; k < profile.count; k++) {
+      if (!Number.isNaN(profile.uMs[k] as number) && !Number.isNaN(profile.vMs[k] as number)) return k;
+    }
+    return -1;
+  };
+  const first = reported > 0 ? firstReported() : -1;
+  const substitute = first >= 0 && (profile.heightAglM[first] as number) > 0;
+  const n = reported + (substitute ? 1 : 0);
+  if (windScratch.length < 4 * n) windScratch = new Float64Array(Math.max(4 * n, 2 * windScratch.length));
+  const buffer = windScratch;
+  const winds: WindProfile = { n, height: buffer.subarray(0, n), u: buffer.subarray(n, 2 * n), v: buffer.subarray(2 * n, 3 * n), density: buffer.subarray(3 * n, 4 * n) };
+  let i = 0;
+  if (substitute) {
+    winds.height[0] = 0;
+    winds.u[0] = profile.uMs[first] as number;
+    winds.v[0] = profile.vMs[first] as number;
+    winds.density[0] = ((profile.pressureHpa[0] as number) * 100) / (RD * (profile.virtualTemperatureK[0] as number));
+    i = 1;
+  }
   for (let k = 0; k < profile.count; k++) {
     const u = profile.uMs[k] as number;
     const v = profile.vMs[k] as number;
     if (Number.isNaN(u) || Number.isNaN(v)) continue;
-    result.height.push(profile.heightAglM[k] as number);
-    result.u.push(u);
-    result.v.push(v);
-    result.density.push(((profile.pressureHpa[k] as number) * 100) / (RD * (profile.virtualTemperatureK[k] as number)));
+    winds.height[i] = profile.heightAglM[k] as number;
+    winds.u[i] = u;
+    winds.v[i] = v;
+    winds.density[i] = ((profile.pressureHpa[k] as number) * 100) / (RD * (profile.virtualTemperatureK[k] as number));
+    i++;
   }
-  // No wind at the lowest level: the lowest reported wind stands in for it (flagged by the
-  // analysis), so shear and helicity are computed instead of all turning null.
-  if (result.height.length > 0 && (result.height[0] as number) > 0) {
-    result.height.unshift(0);
-    result.u.unshift(result.u[0] as number);
-    result.v.unshift(result.v[0] as number);
-    result.density.unshift(surfaceDensity);
-  }
-  return result;
+  return winds;
 }
 
 /** Interpolate a wind-profile array at a height (linear); NaN outside the reported winds. */
-function at(winds: WindProfile, values: number[], height: number): number {
+function at(winds: WindProfile, values: Float64Array, height: number): number {
   const h = winds.height;
-  const n = h.length;
+  const n = winds.n;
   if (n === 0 || height < (h[0] as number) || height > (h[n - 1] as number)) return NaN;
   let low = 0;
   let high = n - 1;
@@ -98,20 +122,6 @@ function at(winds: WindProfile, values: number[], height: number): number {
   return (values[low] as number) + fraction * ((values[high] as number) - (values[low] as number));
 }
 
-/** Sample points of a layer: its bottom, the reported levels inside it, its top. */
-function layerPoints(winds: WindProfile, bottom: number, top: number): { height: number; u: number; v: number; density: number }[] | null {
-  const bottomU = at(winds, winds.u, bottom);
-  const topU = at(winds, winds.u, top);
-  if (Number.isNaN(bottomU) || Number.isNaN(topU)) return null;
-  const points = [{ height: bottom, u: bottomU, v: at(winds, winds.v, bottom), density: at(winds, winds.density, bottom) }];
-  for (let i = 0; i < winds.height.length; i++) {
-    const h = winds.height[i] as number;
-    if (h > bottom && h < top) points.push({ height: h, u: winds.u[i] as number, v: winds.v[i] as number, density: winds.density[i] as number });
-  }
-  points.push({ height: top, u: topU, v: at(winds, winds.v, top), density: at(winds, winds.density, top) });
-  return points;
-}
-
 /**
  * Bulk wind difference (shear magnitude) between two heights.
  * Notes: |V(top) − V(bottom)| (common practice; Thompson2003 "BWD").
@@ -123,24 +133,48 @@ function bulkShear(winds: WindProfile, bottom: number, top: number): number {
 }
 
 /**
- * Mean wind of a layer, height-weighted (or density-weighted), trapezoid rule.
+ * Mean wind of a layer, height-weighted (or density-weighted), trapezoid rule over the
+ * layer's points: its bottom, the reported levels inside it, its top.
  * Notes: Bunkers2000 pg. 66 uses the non-pressure-weighted 0–6 km mean.
  */
 function meanWind(winds: WindProfile, bottom: number, top: number, densityWeighted = false): WindVector | null {
-  const points = layerPoints(winds, bottom, top);
-  if (!points) return null;
+  const bottomU = at(winds, winds.u, bottom);
+  const topU = at(winds, winds.u, top);
+  if (Number.isNaN(bottomU) || Number.isNaN(topU)) return null;
   let su = 0;
   let sv = 0;
   let sw = 0;
-  for (let i = 1; i < points.length; i++) {
-    const a = points[i - 1] as (typeof points)[number];
-    const b = points[i] as (typeof points)[number];
-    const dz = b.height - a.height;
-    const wa = densityWeighted ? a.density : 1;
-    const wb = densityWeighted ? b.density : 1;
-    su += 0.5 * (wa * a.u + wb * b.u) * dz;
-    sv += 0.5 * (wa * a.v + wb * b.v) * dz;
-    sw += 0.5 * (wa + wb) * dz;
+  let aHeight = bottom;
+  let aU = bottomU;
+  let aV = at(winds, winds.v, bottom);
+  let aW = densityWeighted ? at(winds, winds.density, bottom) : 1;
+  // The points inside the layer, then its top (i = n); written without a closure so the
+  // running sums stay unboxed.
+  for (let i = 0; i <= winds.n; i++) {
+    let height: number;
+    let u: number;
+    let v: number;
+    let w: number;
+    if (i < winds.n) {
+      height = winds.height[i] as number;
+      if (!(height > bottom && height < top)) continue;
+      u = winds.u[i] as number;
+      v = winds.v[i] as number;
+      w = densityWeighted ? (winds.density[i] as number) : 1;
+    } else {
+      height = top;
+      u = topU;
+      v = at(winds, winds.v, top);
+      w = densityWeighted ? at(winds, winds.density, top) : 1;
+    }
+    const dz = height - aHeight;
+    su += 0.5 * (aW * aU + w * u) * dz;
+    sv += 0.5 * (aW * aV + w * v) * dz;
+    sw += 0.5 * (aW + w) * dz;
+    aHeight = height;
+    aU = u;
+    aV = v;
+    aW = w;
   }
   return sw > 0 ? { u: su / sw, v: sv / sw } : null;
 }
@@ -174,18 +208,28 @@ function bunkersMotion(winds: WindProfile): { right: WindVector; left: WindVecto
 /**
  * Storm-relative helicity of a layer.
  * Notes: SRH = Σ [(u_{n+1} − c_x)(v_n − c_y) − (u_n − c_x)(v_{n+1} − c_y)] over the layer's
- * hodograph points (DaviesJones1990; the discrete form of −∫ k̂·(V − C) × ∂V/∂z dz).
- * Positive for a hodograph turning clockwise relative to the storm.
+ * hodograph points: its bottom, the reported levels inside it, its top (DaviesJones1990; the
+ * discrete form of −∫ k̂·(V − C) × ∂V/∂z dz). Positive for a hodograph turning clockwise
+ * relative to the storm.
  */
 function stormRelativeHelicity(winds: WindProfile, bottom: number, top: number, storm: WindVector): number {
-  const points = layerPoints(winds, bottom, top);
-  if (!points) return NaN;
+  const bottomU = at(winds, winds.u, bottom);
+  const topU = at(winds, winds.u, top);
+  if (Number.isNaN(bottomU) || Number.isNaN(topU)) return NaN;
   let sum = 0;
-  for (let i = 1; i < points.length; i++) {
-    const a = points[i - 1] as (typeof points)[number];
-    const b = points[i] as (typeof points)[number];
-    sum += (b.u - storm.u) * (a.v - storm.v) - (a.u - storm.u) * (b.v - storm.v);
+  let aU = bottomU;
+  let aV = at(winds, winds.v, bottom);
+  for (let i = 0; i < winds.n; i++) {
+    const h = winds.height[i] as number;
+    if (!(h > bottom && h < top)) continue;
+    const bU = winds.u[i] as number;
+    const bV = winds.v[i] as number;
+    sum += (bU - storm.u) * (aV - storm.v) - (aU - storm.u) * (bV - storm.v);
+    aU = bU;
+    aV = bV;
   }
+  const bV = at(winds, winds.v, top);
+  sum += (topU - storm.u) * (aV - storm.v) - (aU - storm.u) * (bV - storm.v);
   return sum;
 }
 
@@ -203,11 +247,15 @@ export const EFFECTIVE_LAYER_CANDIDATE_SPACING_HPA = 5;
  * one by one, so the edges are exactly those of a scan of every level, unless a failing (or
  * passing) level hides inside a window whose both ends pass (or fail).
  * @param profile - the prepared environment
+ * @param known - decisions already known for some levels (from parcels lifted anyway)
  * @returns the layer, or null when no candidate meets the criteria
  */
-export function effectiveInflowLayer(profile: Profile): EffectiveInflowLayer | null {
+export function effectiveInflowLayer(profile: Profile, known: readonly { index: number; meets: boolean }[] = []): EffectiveInflowLayer | null {
   const limit = (profile.pressureHpa[0] as number) - 300;
-  const meets = (k: number): boolean => meetsEffectiveInflowCriteria(profile, k);
+  const meets = (k: number): boolean => {
+    for (const decision of known) if (decision.index === k) return decision.meets;
+    return meetsEffectiveInflowCriteria(profile, k);
+  };
   let bottom = -1;
   let lastPassing = -1;
   let lastCandidate = -1;
@@ -258,6 +306,8 @@ export interface KinematicsOptions {
   latitude?: number | null;
   /** Index of the most-unstable level (saves finding it again). */
   mostUnstableIndex?: number;
+  /** Effective-criteria decisions already known for some levels (see {@link effectiveInflowLayer}). */
+  knownEffective?: readonly { index: number; meets: boolean }[];
 }
 
 /**
@@ -269,18 +319,18 @@ export interface KinematicsOptions {
  */
 export function analyzeKinematics(profile: Profile, mostUnstable: ParcelResult, options: KinematicsOptions = {}): KinematicsAnalysis {
   const winds = windProfile(profile);
-  const surfaceWindSubstituted = winds.height.length > 0 && Number.isNaN(profile.uMs[0] as number);
+  const surfaceWindSubstituted = winds.n > 0 && Number.isNaN(profile.uMs[0] as number);
   const motion = bunkersMotion(winds);
   const deviantMover = options.latitude !== undefined && options.latitude !== null && options.latitude < 0 ? 'left' : 'right';
   const deviant = motion ? (deviantMover === 'left' ? motion.left : motion.right) : null;
-  const layer = effectiveInflowLayer(profile);
+  const layer = effectiveInflowLayer(profile, options.knownEffective);
   let effectiveSrh: number | null = null;
   let effectiveBulkShear: number | null = null;
   if (deviant) effectiveSrh = layer ? finiteOrNull(stormRelativeHelicity(winds, layer.bottomHeight, layer.topHeight, deviant)) : 0;
   if (layer && mostUnstable.elHeight !== null) {
     const top = layer.bottomHeight + 0.5 * (mostUnstable.elHeight - layer.bottomHeight);
     effectiveBulkShear = finiteOrNull(bulkShear(winds, layer.bottomHeight, top));
-  } else if (!layer && winds.height.length > 0) {
+  } else if (!layer && winds.n > 0) {
     effectiveBulkShear = 0;
   }
   const deep = meanWind(winds, 0, 6000, true);

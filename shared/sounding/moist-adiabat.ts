@@ -108,7 +108,8 @@ function rk4LogPressureStep(logPressure: number, temperatureK: number, step: num
  * reference integration. Outside the table the reference integration is used.
  */
 export class PseudoAdiabatTable {
-  private readonly temperatures: Float64Array;
+  /** Temperatures, K: curve i (θ_w) at pressure node j is entry i·472 + j. */
+  readonly temperatures: Float64Array;
 
   constructor() {
     this.temperatures = new Float64Array(TABLE_THETA_W_NODES * TABLE_PRESSURE_NODES);
@@ -226,17 +227,54 @@ export class PseudoAdiabatPath {
    * @param startTemperatureK - and its temperature, K
    */
   constructor(
-    private readonly table: PseudoAdiabatTable,
+    readonly table: PseudoAdiabatTable,
     startPressureHpa: number,
     startTemperatureK: number,
   ) {
     this.lastPressure = startPressureHpa;
     this.lastTemperature = startTemperatureK;
     this.thetaWK = table.thetaW(startTemperatureK, Math.log(startPressureHpa));
+    // The row part of temperatureInTable's bilinear interpolation, fixed along the curve.
+    const y = (this.thetaWK - TABLE_THETA_W_MIN_K) / TABLE_THETA_W_STEP_K;
+    if (y >= 0 && y <= TABLE_THETA_W_NODES - 1) {
+      const i = Math.min(Math.floor(y), TABLE_THETA_W_NODES - 2);
+      this.row = i * TABLE_PRESSURE_NODES;
+      this.rowFraction = y - i;
+    } else {
+      this.row = -1;
+      this.rowFraction = 0;
+    }
   }
 
   /** Wet-bulb potential temperature of the curve, K. */
   readonly thetaWK: number;
+  /** Offset of the curve's lower table row (−1 when θ_w lies outside the table). */
+  private readonly row: number;
+  /** Fraction of the way from the lower row to the next one. */
+  private readonly rowFraction: number;
+
+  /**
+   * Temperature of the curve at the next pressure of the walk, from the pressure's table
+   * coordinates (see {@link tablePressureCoordinates}); the same value as
+   * {@link temperatureAt}, without recomputing the coordinates at every parcel.
+   * @param pressureHpa - pressure, hPa
+   * @param logPressure - its natural logarithm
+   * @param node - its pressure node (−1: outside the table)
+   * @param fraction - its fraction between that node and the next
+   * @returns temperature, K
+   */
+  temperatureAtNode(pressureHpa: number, logPressure: number, node: number, fraction: number): number {
+    if (node < 0 || this.row < 0) return this.temperatureAt(pressureHpa, logPressure);
+    const t = this.table.temperatures;
+    const a = this.row + node;
+    const b = a + TABLE_PRESSURE_NODES;
+    const lower = (t[a] as number) + fraction * ((t[a + 1] as number) - (t[a] as number));
+    const upper = (t[b] as number) + fraction * ((t[b + 1] as number) - (t[b] as number));
+    const temperature = lower + this.rowFraction * (upper - lower);
+    this.lastPressure = pressureHpa;
+    this.lastTemperature = temperature;
+    return temperature;
+  }
 
   /**
    * Temperature of the curve at the next pressure of the walk.
@@ -251,6 +289,34 @@ export class PseudoAdiabatPath {
     this.lastTemperature = temperature;
     return temperature;
   }
+}
+
+/**
+ * Table coordinates of pressures, as {@link PseudoAdiabatTable.temperatureInTable} computes
+ * them: the node below each pressure (−1 outside the table) and the fraction to the next.
+ * @param logPressure - natural logarithms of the pressures in hPa
+ * @param node - where to write the nodes (default: a new array)
+ * @param fraction - where to write the fractions (default: a new array)
+ * @returns `{node, fraction}`, one entry per pressure
+ */
+export function tablePressureCoordinates(
+  logPressure: Float64Array,
+  node: Int32Array = new Int32Array(logPressure.length),
+  fraction: Float64Array = new Float64Array(logPressure.length),
+): { node: Int32Array; fraction: Float64Array } {
+  const count = logPressure.length;
+  for (let k = 0; k < count; k++) {
+    const x = (LOG_TABLE_BOTTOM - (logPressure[k] as number)) / TABLE_LOG_STEP;
+    if (!(x >= 0 && x <= TABLE_PRESSURE_NODES - 1)) {
+      node[k] = -1;
+      fraction[k] = 0;
+      continue;
+    }
+    const j = Math.min(Math.floor(x), TABLE_PRESSURE_NODES - 2);
+    node[k] = j;
+    fraction[k] = x - j;
+  }
+  return { node, fraction };
 }
 
 let sharedTable: PseudoAdiabatTable | undefined;

@@ -2,7 +2,7 @@ import { EPSILON, GRAVITY, KAPPA, ZERO_CELSIUS_K } from './constants';
 import { lclTemperature } from './lcl';
 import { dewpointFromMixingRatio, mixingRatio } from './mixing-ratio';
 import { moistAdiabatTemperature, PseudoAdiabatPath, pseudoAdiabatTable, type MoistAscentMethod } from './moist-adiabat';
-import { buildProfile, layerIndexAtPressure, valueAtPressure, type Profile } from './profile';
+import { buildProfile, exnerAt, layerIndexAtPressure, levelExner, levelTableCoordinates, levelThermodynamics, valueAtPressure, type Profile } from './profile';
 import { saturationVaporPressure } from './saturation';
 import { equivalentPotentialTemperatureFromMixingRatio } from './thermo';
 import type { SoundingLevel } from './types';
@@ -84,10 +84,12 @@ const THREE_KM = 3000;
 /** The smallest mixing ratio used for a parcel, kg kg⁻¹ (keeps the dewpoint finite for bone-dry air). */
 const MIN_MIXING_RATIO = 1e-7;
 
-interface AscentOutcome extends ParcelResult {
-  /** For the effective-layer check: whether the parcel met CAPE ≥ 100 and CIN ≥ −250. */
-  meetsEffectiveCriteria: boolean;
-}
+/**
+ * The effective-inflow decision of the last {@link ascend} (set before it returns; the engine
+ * is synchronous, so the caller reads it at once): whether the parcel met CAPE ≥ 100 and
+ * CIN ≥ −250 J kg⁻¹ on its first LFC (Thompson2007).
+ */
+let lastEffectiveDecision = false;
 
 /** Effective inflow criteria, J kg⁻¹ (Thompson2007 pg. 104). */
 export const EFFECTIVE_CAPE_MIN = 100;
@@ -106,7 +108,7 @@ export const EFFECTIVE_CIN_MIN = -250;
  * start to the LFC. When `effectiveCheck` is set, it decides the Thompson2007 criteria on the
  * first LFC and stops as soon as the answer is known.
  */
-function ascend(profile: Profile, start: ParcelStart, options: ParcelOptions, effectiveCheck: boolean): AscentOutcome {
+function ascend(profile: Profile, start: ParcelStart, options: ParcelOptions, effectiveCheck: boolean): ParcelResult {
   const table = (options.moistAscent ?? 'table') === 'table' ? pseudoAdiabatTable() : undefined;
   const trace: ParcelTracePoint[] | undefined = options.trace ? [] : undefined;
   const p = profile.pressureHpa;
@@ -114,6 +116,8 @@ function ascend(profile: Profile, start: ParcelStart, options: ParcelOptions, ef
   const z = profile.heightAglM;
   const tve = profile.virtualTemperatureK;
   const count = profile.count;
+  const { node, fraction: nodeFraction } = levelTableCoordinates(profile);
+  const exner = levelExner(profile);
 
   const startPressure = start.pressureHpa;
   const startLogPressure = Math.log(startPressure);
@@ -167,7 +171,7 @@ function ascend(profile: Profile, start: ParcelStart, options: ParcelOptions, ef
     let parcelVirtual: number;
     if (areas.aboveLcl) {
       if (path) {
-        parcelTemperature = path.temperatureAt(pk, lnpk);
+        parcelTemperature = path.temperatureAtNode(pk, lnpk, node[k] as number, nodeFraction[k] as number);
       } else {
         referenceTemperature = moistAdiabatTemperature(referencePressure, referenceTemperature, pk, 1);
         referencePressure = pk;
@@ -175,7 +179,7 @@ function ascend(profile: Profile, start: ParcelStart, options: ParcelOptions, ef
       }
       parcelVirtual = saturatedVirtualTemperature(parcelTemperature, pk);
     } else {
-      parcelTemperature = theta * Math.exp(K * (lnpk - LOG_1000));
+      parcelTemperature = theta * exnerAt(exner, lnps, k);
       parcelVirtual = parcelTemperature * vaporFactor;
     }
     areas.add(zk, lnpk, (G * (parcelVirtual - envVirtual)) / envVirtual);
@@ -196,7 +200,10 @@ function ascend(profile: Profile, start: ParcelStart, options: ParcelOptions, ef
       parcel500 = theta * Math.exp(K * (LOG_500 - LOG_1000));
       parcelVirtual500 = parcel500 * vaporFactor;
     } else {
-      parcel500 = table ? new PseudoAdiabatPath(table, pressureLcl, temperatureLcl).temperatureAt(500, LOG_500) : moistAdiabatTemperature(pressureLcl, temperatureLcl, 500, 1);
+      // On the ascent's own curve (the same θ_w a new walk from the LCL would find); outside
+      // the table, integrated from the LCL as such a walk would.
+      const inTable = path ? path.table.temperatureInTable(path.thetaWK, LOG_500) : NaN;
+      parcel500 = Number.isNaN(inTable) ? moistAdiabatTemperature(pressureLcl, temperatureLcl, 500, 1) : inTable;
       parcelVirtual500 = saturatedVirtualTemperature(parcel500, 500);
     }
     liftedIndex = environment500 - parcel500;
@@ -205,7 +212,7 @@ function ascend(profile: Profile, start: ParcelStart, options: ParcelOptions, ef
 
   const summary = areas.summary();
   const found = summary.lfcFound;
-  return {
+  const result: ParcelResult = {
     parcelPressure: startPressure,
     parcelTemperatureC: startTemperature - ZERO_C,
     parcelDewpointC: startDewpoint - ZERO_C,
@@ -225,8 +232,9 @@ function ascend(profile: Profile, start: ParcelStart, options: ParcelOptions, ef
     negativeAreaLfcToEl: Math.min(0, summary.negativeLfcToEl),
     capeClippedAtTop: found && !summary.elFound,
     ...(trace ? { trace } : {}),
-    meetsEffectiveCriteria: effectiveCheck ? areas.decided && areas.effectivePasses : found && summary.cape >= EFFECTIVE_CAPE_MIN && summary.cin >= EFFECTIVE_CIN_MIN,
   };
+  lastEffectiveDecision = effectiveCheck ? areas.decided && areas.effectivePasses : areas.firstLfcDecision();
+  return result;
 }
 
 /** Virtual temperature of saturated air (wₛ from eₛ of Bolton1980 eq. 10; written out: hot loop), K. */
@@ -347,7 +355,11 @@ class BuoyancyAreas {
       // CAPE above the first LFC with little enough CIN below it.
       const first = this.positiveAreas[0];
       if (!first && this.negative < EFFECTIVE_CIN_MIN) this.decided = true;
-      else if (first && this.positive - first.positiveBefore >= EFFECTIVE_CAPE_MIN) {
+      else if (first && first.negativeBefore < EFFECTIVE_CIN_MIN) {
+        // Too much CIN below the first LFC: it fails whatever CAPE follows.
+        this.decided = true;
+        this.effectivePasses = false;
+      } else if (first && this.positive - first.positiveBefore >= EFFECTIVE_CAPE_MIN) {
         this.decided = true;
         this.effectivePasses = first.negativeBefore >= EFFECTIVE_CIN_MIN;
       }
@@ -356,6 +368,15 @@ class BuoyancyAreas {
 
   /** Effective-layer check only: the decision once `decided`. */
   effectivePasses = false;
+
+  /**
+   * After a full ascent: the decision the effective-layer check would have made (its areas
+   * only grow, so the end state decides as the early stop would have).
+   */
+  firstLfcDecision(): boolean {
+    const first = this.positiveAreas[0];
+    return first !== undefined && first.negativeBefore >= EFFECTIVE_CIN_MIN && this.positive - first.positiveBefore >= EFFECTIVE_CAPE_MIN;
+  }
 
   private addPositive(za: number, ba: number, zb: number, bb: number): void {
     const area = 0.5 * (ba + bb) * (zb - za);
@@ -436,11 +457,6 @@ function negativeArea(za: number, ba: number, zb: number, bb: number): number {
   return 0.5 * (ba + bb) * (zb - za) - positiveArea(za, ba, zb, bb);
 }
 
-/** Strip the internal field from an ascent outcome. */
-function toResult(outcome: AscentOutcome): ParcelResult {
-  const { meetsEffectiveCriteria: _unused, ...result } = outcome;
-  return result;
-}
 
 /**
  * Lift a parcel from a given starting state through a prepared profile.
@@ -450,7 +466,23 @@ function toResult(outcome: AscentOutcome): ParcelResult {
  * @returns the parcel result (see {@link ParcelResult})
  */
 export function liftParcelOnProfile(profile: Profile, start: ParcelStart, options: ParcelOptions = {}): ParcelResult {
-  return toResult(ascend(profile, start, options, false));
+  return ascend(profile, start, options, false);
+}
+
+/**
+ * Lift a parcel and also tell whether it meets the effective inflow criteria, as
+ * {@link meetsEffectiveInflowCriteria} would for the same start (so the analysis need not
+ * lift the surface and most-unstable levels again for the effective layer).
+ * @returns the result, and the decision (null with the reference moist ascent, whose
+ *   numbers may differ from the table's the effective check uses)
+ */
+export function liftParcelWithEffectiveDecision(
+  profile: Profile,
+  start: ParcelStart,
+  options: ParcelOptions = {},
+): { result: ParcelResult; meetsEffectiveCriteria: boolean | null } {
+  const result = ascend(profile, start, options, false);
+  return { result, meetsEffectiveCriteria: (options.moistAscent ?? 'table') === 'table' ? lastEffectiveDecision : null };
 }
 
 /**
@@ -462,7 +494,7 @@ export function meetsEffectiveInflowCriteria(profile: Profile, levelIndex: numbe
   const dewpoint = profile.dewpointK[levelIndex] as number;
   if (Number.isNaN(dewpoint)) return false;
   const pressure = profile.pressureHpa[levelIndex] as number;
-  return ascend(
+  ascend(
     profile,
     {
       pressureHpa: pressure,
@@ -471,7 +503,8 @@ export function meetsEffectiveInflowCriteria(profile: Profile, levelIndex: numbe
     },
     {},
     true,
-  ).meetsEffectiveCriteria;
+  );
+  return lastEffectiveDecision;
 }
 
 /** The surface-based parcel's start: the lowest level's temperature and mixing ratio. */
@@ -537,6 +570,7 @@ export function mixedLayerStart(profile: Profile, depthHpa = 100): ParcelStart {
  */
 export function mostUnstableLevelIndex(profile: Profile, depthHpa = 300): number {
   const limit = (profile.pressureHpa[0] as number) - depthHpa;
+  const known = levelThermodynamics(profile);
   let best = 0;
   let bestThetaE = -Infinity;
   for (let k = 0; k < profile.count; k++) {
@@ -545,12 +579,10 @@ export function mostUnstableLevelIndex(profile: Profile, depthHpa = 300): number
     const dewpoint = profile.dewpointK[k] as number;
     if (Number.isNaN(dewpoint)) continue;
     const temperature = profile.temperatureK[k] as number;
-    const thetaE = equivalentPotentialTemperatureFromMixingRatio(
-      pk,
-      temperature,
-      profile.mixingRatio[k] as number,
-      lclTemperature(temperature, dewpoint),
-    );
+    const thetaE =
+      k < known.count
+        ? (known.thetaE[k] as number)
+        : equivalentPotentialTemperatureFromMixingRatio(pk, temperature, profile.mixingRatio[k] as number, lclTemperature(temperature, dewpoint));
     if (thetaE > bestThetaE) {
       bestThetaE = thetaE;
       best = k;

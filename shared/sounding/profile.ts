@@ -1,8 +1,11 @@
 import * as constants from './constants';
+import { lclTemperature } from './lcl';
+import { pseudoAdiabatTable, tablePressureCoordinates } from './moist-adiabat';
+import { equivalentPotentialTemperatureFromMixingRatio } from './thermo';
 import type { SoundingLevel } from './types';
 
 // Constants copied once at load (fast access in hot loops).
-const { EPSILON, GRAVITY, RD, ZERO_CELSIUS_K } = constants;
+const { EPSILON, GRAVITY, KAPPA, RD, ZERO_CELSIUS_K } = constants;
 
 /**
  * The environment prepared once per analysis: plain arrays in engine units, sorted by
@@ -38,6 +41,112 @@ export interface Profile {
   heightsReplaced: boolean;
   /** Pressure of the level with the largest height difference, hPa. */
   largestHeightDifferencePressureHpa: number;
+  /** Per-level moist thermodynamics, computed on first use (see {@link levelThermodynamics}). */
+  thermodynamics?: LevelThermodynamics;
+  /** Pseudo-adiabat table coordinates of the levels' pressures, computed on first use (see {@link levelTableCoordinates}). */
+  tableCoordinates?: { node: Int32Array; fraction: Float64Array };
+  /** (p/1000 hPa)^κ of each level (a dry parcel's T = θ times it), NaN until first needed (see {@link levelExner}). */
+  exner?: Float64Array;
+  /** Room for the per-level arrays computed on first use (6 × count values, one allocation with the rest). */
+  spare: Float64Array;
+  /** The whole storage every array above is a view of. */
+  storage: Float64Array;
+}
+
+/** The levels' pseudo-adiabat table coordinates, computed once per profile. */
+export function levelTableCoordinates(profile: Profile): { node: Int32Array; fraction: Float64Array } {
+  const n = profile.count;
+  profile.tableCoordinates ??= tablePressureCoordinates(
+    profile.logPressure,
+    new Int32Array(profile.spare.buffer, profile.spare.byteOffset, n),
+    profile.spare.subarray(n, 2 * n),
+  );
+  return profile.tableCoordinates;
+}
+
+const LOG_1000 = Math.log(1000);
+
+/**
+ * The profile's cache of exp(κ (ln p − ln 1000)) per level: NaN where not yet computed (only
+ * the levels below some parcel's LCL are ever needed); use {@link exnerAt}.
+ */
+export function levelExner(profile: Profile): Float64Array {
+  if (profile.exner) return profile.exner;
+  const exner = profile.spare.subarray(2 * profile.count, 3 * profile.count);
+  exner.fill(NaN);
+  profile.exner = exner;
+  return exner;
+}
+
+/**
+ * exp(κ (ln p − ln 1000)) of level k, from the cache or computed into it.
+ * @param exner - the cache of {@link levelExner}
+ * @param logPressure - the profile's ln p
+ * @param k - level index
+ */
+export function exnerAt(exner: Float64Array, logPressure: Float64Array, k: number): number {
+  let value = exner[k] as number;
+  if (Number.isNaN(value)) {
+    value = Math.exp(KAPPA * ((logPressure[k] as number) - LOG_1000));
+    exner[k] = value;
+  }
+  return value;
+}
+
+/**
+ * Per-level values several parts of the analysis need (most-unstable level, downdraft
+ * source), computed once per profile for the levels from the ground up to
+ * {@link LevelThermodynamics.count}.
+ */
+export interface LevelThermodynamics {
+  /** Number of levels covered (from index 0). */
+  count: number;
+  /** Temperature at each level's LCL, K (Bolton1980 eq. 15). */
+  lclTemperatureK: Float64Array;
+  /** Equivalent potential temperature, K (Bolton1980 eq. 39). */
+  thetaE: Float64Array;
+  /** Wet-bulb potential temperature, K: the label of the pseudo-adiabat through the level's LCL. */
+  thetaW: Float64Array;
+}
+
+/** How deep above the ground per-level moist thermodynamics are kept, hPa (the downdraft search reach). */
+export const LEVEL_THERMODYNAMICS_DEPTH_HPA = 500;
+
+/**
+ * Index of the last level the per-level moist thermodynamics cover: the moist levels within
+ * {@link LEVEL_THERMODYNAMICS_DEPTH_HPA} of the ground plus the first one above (−1: none).
+ */
+export function levelThermodynamicsTop(profile: Profile): number {
+  const reach = (profile.pressureHpa[0] as number) - LEVEL_THERMODYNAMICS_DEPTH_HPA;
+  let top = profile.moistureTopIndex;
+  while (top > 1 && (profile.pressureHpa[top - 1] as number) < reach) top--;
+  return top;
+}
+
+/**
+ * The profile's per-level moist thermodynamics, computed on first use and kept on the profile.
+ * @param profile - the prepared environment
+ * @returns LCL temperature, θₑ and θ_w of the levels 0…levelThermodynamicsTop
+ */
+export function levelThermodynamics(profile: Profile): LevelThermodynamics {
+  if (profile.thermodynamics) return profile.thermodynamics;
+  const count = levelThermodynamicsTop(profile) + 1;
+  const table = pseudoAdiabatTable();
+  const n = profile.count;
+  const lclTemperatureK = profile.spare.subarray(3 * n, 3 * n + count);
+  const thetaE = profile.spare.subarray(4 * n, 4 * n + count);
+  const thetaW = profile.spare.subarray(5 * n, 5 * n + count);
+  for (let k = 0; k < count; k++) {
+    const pk = profile.pressureHpa[k] as number;
+    const temperature = profile.temperatureK[k] as number;
+    const lclT = lclTemperature(temperature, profile.dewpointK[k] as number);
+    lclTemperatureK[k] = lclT;
+    thetaE[k] = equivalentPotentialTemperatureFromMixingRatio(pk, temperature, profile.mixingRatio[k] as number, lclT);
+    // θ_w is the label of the pseudo-adiabat through the level's LCL (Bolton1980 eq. 15).
+    thetaW[k] = table.thetaW(lclT, (profile.logPressure[k] as number) + Math.log(lclT / temperature) / KAPPA);
+  }
+  profile.thermodynamics = { count, lclTemperatureK, thetaE, thetaW };
+  return profile.thermodynamics;
 }
 
 /** Fixed part of the height tolerance, m. */
@@ -73,6 +182,9 @@ export function sortByDecreasingPressure(levels: readonly SoundingLevel[]): read
   return levels;
 }
 
+/** Values per level a profile stores (10 arrays, and room for 6 computed on first use). */
+export const PROFILE_VALUES_PER_LEVEL = 16;
+
 /**
  * Build the analysis profile from sounding levels.
  *
@@ -80,24 +192,29 @@ export function sortByDecreasingPressure(levels: readonly SoundingLevel[]): read
  * below and above them (docs/analysis.md); above the last reported dewpoint the moisture profile
  * ends. A dewpoint above the temperature is capped at the temperature.
  * @param levels - at least two levels with distinct pressures, in any order
+ * @param storage - optional room to build it in (at least PROFILE_VALUES_PER_LEVEL × levels
+ *   values; reused storage must not be used again while the profile is in use)
  * @returns the profile
  * @throws RangeError for fewer than two levels (validate input first)
  */
-export function buildProfile(levels: readonly SoundingLevel[]): Profile {
+export function buildProfile(levels: readonly SoundingLevel[], storage?: Float64Array): Profile {
   if (levels.length < 2) {
     throw new RangeError('A sounding needs at least two levels; validate it with validateSounding first.');
   }
   const sorted = sortByDecreasingPressure(levels);
   const count = sorted.length;
-  const pressureHpa = new Float64Array(count);
-  const logPressure = new Float64Array(count);
-  const heightAglM = new Float64Array(count);
-  const temperatureK = new Float64Array(count);
-  const dewpointK = new Float64Array(count);
-  const mixing = new Float64Array(count);
-  const virtualTemperatureK = new Float64Array(count);
-  const uMs = new Float64Array(count);
-  const vMs = new Float64Array(count);
+  // One allocation for every per-level array (typed-array allocations dominate small profiles).
+  const buffer = storage && storage.length >= PROFILE_VALUES_PER_LEVEL * count ? storage : new Float64Array(PROFILE_VALUES_PER_LEVEL * count);
+  const pressureHpa = buffer.subarray(0, count);
+  const logPressure = buffer.subarray(count, 2 * count);
+  const heightAglM = buffer.subarray(2 * count, 3 * count);
+  const temperatureK = buffer.subarray(3 * count, 4 * count);
+  const dewpointK = buffer.subarray(4 * count, 5 * count);
+  const mixing = buffer.subarray(5 * count, 6 * count);
+  const virtualTemperatureK = buffer.subarray(6 * count, 7 * count);
+  const uMs = buffer.subarray(7 * count, 8 * count);
+  const vMs = buffer.subarray(8 * count, 9 * count);
+  const computed = buffer.subarray(9 * count, 10 * count);
   const ground = (sorted[0] as SoundingLevel).heightM;
   let moistureTopIndex = -1;
   for (let i = 0; i < count; i++) {
@@ -148,7 +265,7 @@ export function buildProfile(levels: readonly SoundingLevel[]): Profile {
   // Check the reported heights against the hypsometric equation (WallaceHobbs2006 eq. 3.29,
   // virtual temperature linear in ln p inside a layer), and use the computed ones when any
   // level is off by more than the tolerance.
-  const computed = new Float64Array(count);
+  computed[0] = 0; // the storage may be reused: every other value is written before it is read
   let largestDifference = 0;
   let largestAt = pressureHpa[0] as number;
   let replace = false;
@@ -181,6 +298,11 @@ export function buildProfile(levels: readonly SoundingLevel[]): Profile {
     largestHeightDifferenceM: largestDifference,
     heightsReplaced: replace,
     largestHeightDifferencePressureHpa: largestAt,
+    thermodynamics: undefined,
+    tableCoordinates: undefined,
+    exner: undefined,
+    spare: buffer.subarray(10 * count, 16 * count),
+    storage: buffer,
   };
 }
 
