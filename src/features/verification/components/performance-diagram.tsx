@@ -10,7 +10,7 @@ export interface DiagramPoint {
 }
 
 const size = 320;
-const margin = { left: 44, right: 12, top: 12, bottom: 40 };
+const margin = { left: 44, right: 40, top: 12, bottom: 40 };
 const x = unitScale([margin.left, size - margin.right]);
 const y = unitScale([size - margin.bottom, margin.top]);
 const csiLines = [0.1, 0.2, 0.3, 0.4, 0.5, 0.6, 0.7, 0.8, 0.9];
@@ -51,7 +51,7 @@ export function PerformanceDiagram({ points }: { points: readonly DiagramPoint[]
           return (
             <g key={`bias${bias}`}>
               <line x1={x(0)} y1={y(0)} x2={x(end.sr)} y2={y(end.pod)} stroke="#6b7385" strokeWidth={0.8} strokeDasharray="4 3" />
-              <text x={x(end.sr) + (bias >= 1 ? 2 : -2)} y={y(end.pod) + (bias >= 1 ? 9 : -3)} fontSize={8} textAnchor={bias >= 1 ? 'start' : 'end'} fill="#4a5263">
+              <text x={bias > 1 ? x(end.sr) + 2 : x(1) + 3} y={bias > 1 ? y(end.pod) + 9 : y(end.pod) + 3} fontSize={8} textAnchor="start" fill="#4a5263">
                 bias {bias}
               </text>
             </g>
