@@ -2,6 +2,7 @@ import { officeSettingsInputSchema } from '../../shared/contracts/office';
 import { access } from '../auth/require-role';
 import { parseInput, sendResult } from '../middleware/error-handler';
 import { getOfficeSettings, updateOfficeSettings } from '../services/office.service';
+import { adminRoles } from '../../shared/workflow/roles';
 import { route } from './route-definition';
 import { baseMapOf } from '../config';
 
@@ -16,7 +17,7 @@ export const officeRoutes = [
   route({
     method: 'put',
     path: '/api/office',
-    access: access.roles('admin'),
+    access: access.roles(...adminRoles),
     handler: async (ctx, req, res) => {
       const input = parseInput(officeSettingsInputSchema, req.body);
       if (!input.ok) return sendResult(res, input);

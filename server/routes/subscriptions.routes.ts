@@ -7,8 +7,9 @@ import { parseInput, sendResult } from '../middleware/error-handler';
 import { listOutbox, resendOutboxMessage } from '../services/outbox.service';
 import { addAreaOfInterest, confirmSubscriptionEmail, findPlaces, getMySubscription, listSubscribers, removeAreaOfInterest, saveMySubscription, unsubscribe } from '../services/subscriptions.service';
 import { route } from './route-definition';
-import { subscriberOverseerRoles, subscriberRoles } from '../../shared/workflow/roles';
+import { adminRoles, subscriberOverseerRoles, subscriberRoles } from '../../shared/workflow/roles';
 import { escapeHtml } from '../../shared/text/escape-html';
+import { publicCaution } from '../../shared/workflow/caution';
 
 const areaParamsSchema = z.object({ areaId: idParamSchema });
 const messageParamsSchema = z.object({ messageId: idParamSchema });
@@ -116,7 +117,7 @@ export const subscriptionsRoutes = [
         .send(
           page(
             'Receive outlook alerts at this address?',
-            `<p>Confirm to receive a subscriber's severe-thunderstorm outlook alerts at this address. The outlook is planning guidance, not a warning; follow warnings from the national weather service and instructions from local emergency officials.</p><form method="post" action="/api/email-confirmations?token=${encodeURIComponent(query.data.token)}"><button type="submit" style="padding:.6rem 1rem">Confirm this address</button></form>`,
+            `<p>Confirm to receive a subscriber's severe-thunderstorm outlook alerts at this address. ${escapeHtml(publicCaution)}</p><form method="post" action="/api/email-confirmations?token=${encodeURIComponent(query.data.token)}"><button type="submit" style="padding:.6rem 1rem">Confirm this address</button></form>`,
           ),
         );
     },
@@ -140,13 +141,13 @@ export const subscriptionsRoutes = [
   route({
     method: 'get',
     path: '/api/mail-outbox',
-    access: access.roles('admin'),
+    access: access.roles(...adminRoles),
     handler: async (ctx, _req, res) => sendResult(res, await listOutbox(ctx.db)),
   }),
   route({
     method: 'post',
     path: '/api/mail-outbox/:messageId/resend',
-    access: access.roles('admin'),
+    access: access.roles(...adminRoles),
     handler: async (ctx, req, res) => {
       const params = parseInput(messageParamsSchema, req.params, 'address');
       if (!params.ok) return sendResult(res, params);

@@ -3,6 +3,7 @@ import { createUserInputSchema, updateUserInputSchema } from '../../shared/contr
 import { access, actorOf } from '../auth/require-role';
 import { parseInput, sendResult } from '../middleware/error-handler';
 import { createUser, listUsers, updateUser } from '../services/users.service';
+import { adminRoles } from '../../shared/workflow/roles';
 import { route } from './route-definition';
 
 const userParamsSchema = z.object({ userId: z.string().min(1, { message: 'A user id is required.' }) });
@@ -11,13 +12,13 @@ export const usersRoutes = [
   route({
     method: 'get',
     path: '/api/users',
-    access: access.roles('admin'),
+    access: access.roles(...adminRoles),
     handler: async (ctx, _req, res) => sendResult(res, await listUsers(ctx.db)),
   }),
   route({
     method: 'post',
     path: '/api/users',
-    access: access.roles('admin'),
+    access: access.roles(...adminRoles),
     handler: async (ctx, req, res) => {
       const input = parseInput(createUserInputSchema, req.body);
       if (!input.ok) return sendResult(res, input);
@@ -27,7 +28,7 @@ export const usersRoutes = [
   route({
     method: 'patch',
     path: '/api/users/:userId',
-    access: access.roles('admin'),
+    access: access.roles(...adminRoles),
     handler: async (ctx, req, res) => {
       const params = parseInput(userParamsSchema, req.params, 'address');
       if (!params.ok) return sendResult(res, params);

@@ -9,9 +9,10 @@ import { ok } from '../../shared/result';
 import { access, actorOf } from '../auth/require-role';
 import { parseInput, sendError, sendResult } from '../middleware/error-handler';
 import { getIssuanceVerification, ingestReports, listReports, parseReportFile, parseReportJson, verificationSummary, verificationSummaryCsv } from '../services/verification.service';
+import { officeReaderRoles } from '../../shared/workflow/roles';
 import { route } from './route-definition';
 
-const staff = access.roles('forecaster', 'lead', 'admin');
+const readers = access.roles(...officeReaderRoles);
 const maxFiles = 20;
 const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: reportLimits.maxFileBytes, files: maxFiles, fields: 5 } });
 
@@ -29,7 +30,7 @@ export const verificationRoutes = [
   route({
     method: 'post',
     path: '/api/storm-reports',
-    access: staff,
+    access: readers,
     handler: async (ctx, req, res) => {
       const body = parseInput(stormReportsInputSchema, req.body);
       if (!body.ok) return sendResult(res, body);
@@ -41,7 +42,7 @@ export const verificationRoutes = [
   route({
     method: 'post',
     path: '/api/storm-reports/uploads',
-    access: staff,
+    access: readers,
     before: [receiveFiles],
     handler: async (ctx, req, res) => {
       const files = Array.isArray(req.files) ? req.files : [];
@@ -62,7 +63,7 @@ export const verificationRoutes = [
   route({
     method: 'get',
     path: '/api/storm-reports',
-    access: staff,
+    access: readers,
     handler: async (ctx, req, res) => {
       const query = parseInput(stormReportsQuerySchema, req.query, 'search');
       if (!query.ok) return sendResult(res, query);
@@ -82,7 +83,7 @@ export const verificationRoutes = [
   route({
     method: 'get',
     path: '/api/verification',
-    access: staff,
+    access: readers,
     handler: async (ctx, req, res) => {
       const query = parseInput(verificationSummaryQuerySchema, req.query, 'search');
       if (!query.ok) return sendResult(res, query);
@@ -92,7 +93,7 @@ export const verificationRoutes = [
   route({
     method: 'get',
     path: '/api/verification/export.csv',
-    access: staff,
+    access: readers,
     handler: async (ctx, req, res) => {
       const query = parseInput(verificationSummaryQuerySchema, req.query, 'search');
       if (!query.ok) return sendResult(res, query);
