@@ -1,4 +1,4 @@
-import { mkdtempSync, rmSync } from 'node:fs';
+import { existsSync, mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import type { AddressInfo } from 'node:net';
@@ -34,6 +34,9 @@ export interface BrowserJourney {
  * chromium through playwright-core with a fresh profile.
  */
 export async function startBrowserJourney(): Promise<BrowserJourney> {
+  if (!existsSync(path.resolve(import.meta.dirname, '../../dist/index.html'))) {
+    throw new Error('The client is not built: run `npm test` (it builds with vite first) or `npx vite build`.');
+  }
   // PUBLIC_URL must name the real port (better-auth checks the Origin), so pick a free port first.
   const port = await freePort();
   const baseUrl = `http://127.0.0.1:${port}`;

@@ -1,5 +1,3 @@
-import { existsSync } from 'node:fs';
-import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { demoPassword } from '../../server/services/seed.service';
@@ -16,9 +14,6 @@ import { cappedCsv, cappedProfile } from './capped-sounding';
 
 let journey: BrowserJourney;
 beforeAll(async () => {
-  if (!existsSync(path.resolve(import.meta.dirname, '../../dist/index.html'))) {
-    throw new Error('The client is not built: run `npm test` (it builds with vite first) or `npx vite build`.');
-  }
   journey = await startBrowserJourney();
 });
 afterAll(async () => {

@@ -1,5 +1,3 @@
-import { existsSync } from 'node:fs';
-import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Locator, Page } from 'playwright-core';
 import { demoPassword } from '../../server/services/seed.service';
@@ -18,9 +16,6 @@ let page: Page;
 let expiredDay2Number: string;
 
 beforeAll(async () => {
-  if (!existsSync(path.resolve(import.meta.dirname, '../../dist/index.html'))) {
-    throw new Error('The client is not built: run `npm test` (it builds with vite first) or `npx vite build`.');
-  }
   journey = await startBrowserJourney();
   page = await journey.browser.newPage();
   await page.setViewportSize(phone);

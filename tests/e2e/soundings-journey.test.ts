@@ -1,4 +1,3 @@
-import { existsSync } from 'node:fs';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
@@ -9,9 +8,6 @@ const fixture = path.resolve(import.meta.dirname, '../fixtures/soundings/oax_201
 
 let journey: BrowserJourney;
 beforeAll(async () => {
-  if (!existsSync(path.resolve(import.meta.dirname, '../../dist/index.html'))) {
-    throw new Error('The client is not built: run `npm test` (it builds with vite first) or `npx vite build`.');
-  }
   journey = await startBrowserJourney();
 });
 afterAll(async () => {

@@ -1,14 +1,9 @@
-import { existsSync } from 'node:fs';
-import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { demoPassword } from '../../server/services/seed.service';
 import { startBrowserJourney, type BrowserJourney } from './browser';
 
 let journey: BrowserJourney;
 beforeAll(async () => {
-  if (!existsSync(path.resolve(import.meta.dirname, '../../dist/index.html'))) {
-    throw new Error('The client is not built: run `npm test` (it builds with vite first) or `npx vite build`.');
-  }
   journey = await startBrowserJourney();
 });
 afterAll(async () => {
