@@ -27,7 +27,8 @@ export function generateDemoReports(day: Date): StormReport[] {
     })
     .sort((a, b) => b.cape - a.cape)
     .slice(0, 4);
-  const random = seededRandom(20270418);
+  // A different draw each day (same invented fields), the same on every machine.
+  const random = seededRandom(20270418 + day.getUTCDate());
   const base = Date.UTC(day.getUTCFullYear(), day.getUTCMonth(), day.getUTCDate(), 19);
   const reports: StormReport[] = [];
   const at = (offsetHours: number) => new Date(base + offsetHours * 3_600_000).toISOString();

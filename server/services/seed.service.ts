@@ -129,8 +129,9 @@ async function seedDemoOutlooks(db: Database, config: Config, demoDay: Date): Pr
   const at = (hourUtc: number) => new Date(Date.UTC(demoDay.getUTCFullYear(), demoDay.getUTCMonth(), demoDay.getUTCDate(), hourUtc)).toISOString();
   const [thunder, level1, level2] = demoOutlookAreas;
 
-  // 0. A Day 1 issuance two days back, whose period has ended: scored against invented reports.
-  await seedPastIssuance(db, config, forecaster, lead, new Date(demoDay.getTime() - 2 * 86_400_000));
+  // 0. Day 1 issuances three and two days back, whose periods have ended: scored against invented
+  // reports, so the Verification page has a trend to draw.
+  for (const daysBack of [3, 2]) await seedPastIssuance(db, config, forecaster, lead, new Date(demoDay.getTime() - daysBack * 86_400_000));
 
   // 1. The early Day 1 issuance.
   const early = must(await createOutlook(db, forecaster, { day: 1, issuanceTime: at(12), headline: 'Isolated severe storms possible this afternoon' }), 'early outlook');
