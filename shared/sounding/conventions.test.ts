@@ -8,6 +8,7 @@ import { meetsEffectiveInflowCriteria } from './parcel';
 import { parseSoundingCsv } from './parse-csv';
 import { buildProfile } from './profile';
 import { liftIndependently } from './testing/independent-parcel';
+import { cappedTemperatures } from './testing/capped-temperature';
 import { buildSounding, oddSoundingRecipe, type OddKind } from './testing/random-sounding';
 import type { ParsedSounding, SoundingLevel } from './types';
 
@@ -31,32 +32,15 @@ function parse(text: string, name = 'test.csv'): ParsedSounding {
  * ≈ 287 · 4 · ln(750/250) ≈ 1261 J/kg.
  */
 function cappedSounding(): { levels: SoundingLevel[]; lclPressure: number } {
-  const start = { pressureHpa: 1000, temperatureC: 30, dewpointC: 22 };
-  const flat: SoundingLevel[] = [1000, 100].map((pressureHpa) => ({ pressureHpa, heightM: 0, temperatureC: 0, dewpointC: null, uMs: null, vMs: null }));
-  const parcel = liftIndependently(flat, start);
-  const parcelVirtualC = (p: number): number => {
-    const point = parcel.path.find((q) => Math.abs(q.pressureHpa - p) < 0.5);
-    if (!point) throw new Error(`no path point at ${p}`);
-    return point.virtualK - 273.15;
-  };
-  const offset = (p: number): number => {
-    if (p > parcel.lclPressure) return 1;
-    if (p >= 860) return -1;
-    if (p > 850) return -1 + ((860 - p) / 10) * 6;
-    if (p >= 760) return 5;
-    if (p > 750) return 5 - ((760 - p) / 10) * 9;
-    if (p >= 250) return -4;
-    if (p > 240) return -4 + ((250 - p) / 10) * 14;
-    return 10;
-  };
+  const { temperatureCAt, lclPressure } = cappedTemperatures();
   const levels: SoundingLevel[] = [];
   for (let p = 1000; p >= 150; p -= 10) {
-    const temperatureC = p === 1000 ? 30 : parcelVirtualC(p) + offset(p);
+    const temperatureC = temperatureCAt(p);
     const previous = levels[levels.length - 1];
     const heightM = previous ? previous.heightM + layerThickness(previous.pressureHpa, p, previous.temperatureC + 273.15, temperatureC + 273.15) : 0;
     levels.push({ pressureHpa: p, heightM, temperatureC, dewpointC: p === 1000 ? 22 : temperatureC - 40, uMs: null, vMs: null });
   }
-  return { levels, lclPressure: parcel.lclPressure };
+  return { levels, lclPressure };
 }
 
 describe('cap-aware parcel convention (docs/analysis.md)', () => {

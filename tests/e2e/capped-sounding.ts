@@ -1,4 +1,5 @@
 import { liftIndependently } from '../../shared/sounding/testing/independent-parcel';
+import { cappedTemperatures } from '../../shared/sounding/testing/capped-temperature';
 import type { SoundingLevel } from '../../shared/sounding/types';
 
 /**
@@ -38,26 +39,10 @@ const RD = 287.04;
 const G = 9.80665;
 
 export function cappedProfile(elevationM = 120): CappedProfile {
-  const flat: SoundingLevel[] = [1000, 100].map((pressureHpa) => ({ pressureHpa, heightM: 0, temperatureC: 0, dewpointC: null, uMs: null, vMs: null }));
-  const parcel = liftIndependently(flat, { pressureHpa: 1000, temperatureC: 30, dewpointC: 22 });
-  const parcelVirtualC = (p: number): number => {
-    const point = parcel.path.find((q) => Math.abs(q.pressureHpa - p) < 0.5);
-    if (!point) throw new Error(`no path point at ${p} hPa`);
-    return point.virtualK - 273.15;
-  };
-  const offset = (p: number): number => {
-    if (p > parcel.lclPressure) return 1;
-    if (p >= 860) return -1;
-    if (p > 850) return -1 + ((860 - p) / 10) * 6;
-    if (p >= 760) return 5;
-    if (p > 750) return 5 - ((760 - p) / 10) * 9;
-    if (p >= 250) return -4;
-    if (p > 240) return -4 + ((250 - p) / 10) * 14;
-    return 10;
-  };
+  const { temperatureCAt } = cappedTemperatures();
   const levels: SoundingLevel[] = [];
   for (let p = 1000; p >= 150; p -= 10) {
-    const temperatureC = p === 1000 ? 30 : parcelVirtualC(p) + offset(p);
+    const temperatureC = temperatureCAt(p);
     const previous = levels[levels.length - 1];
     const meanK = previous ? (previous.temperatureC + temperatureC) / 2 + 273.15 : 0;
     const heightM = previous ? previous.heightM + ((RD * meanK) / G) * Math.log(previous.pressureHpa / p) : elevationM;
