@@ -3,6 +3,7 @@ import { and, asc, count, desc, eq, gte, ilike, isNotNull, isNull, lte, or, sql,
 import {
   analyzeSounding,
   ENGINE_VERSION,
+  keyFiguresFromAnalysis,
   validateSounding,
   type ParsedSounding,
   type SoundingAnalysis,
@@ -11,7 +12,6 @@ import {
 } from '../../shared/sounding';
 import type {
   SaveModifiedSoundingInput,
-  SoundingKeyFigures,
   SoundingList,
   SoundingListQuery,
   SoundingSummary,
@@ -31,25 +31,7 @@ import { findOffice } from './office.service';
 type SoundingRow = typeof soundings.$inferSelect;
 
 /** The figures the library, map and evidence panel show, read from a full analysis. */
-export function keyFigures(analysis: SoundingAnalysis | null): SoundingKeyFigures {
-  if (!analysis) {
-    return { mlCape: null, muCape: null, mlCin: null, mlLclHeightM: null, precipitableWaterMm: null, bulkShear0to6kmMs: null, srh0to1km: null, stp: null, scp: null, surfaceDewpointC: null, surfaceMixingRatioGkg: null, flagCount: 0 };
-  }
-  return {
-    mlCape: analysis.mixedLayer.cape,
-    muCape: analysis.mostUnstable.cape,
-    mlCin: analysis.mixedLayer.cin,
-    mlLclHeightM: analysis.mixedLayer.lclHeight,
-    precipitableWaterMm: analysis.precipitableWater,
-    bulkShear0to6kmMs: analysis.bulkShear0to6km,
-    srh0to1km: analysis.srh0to1km,
-    stp: analysis.composites.significantTornado,
-    scp: analysis.composites.supercellComposite,
-    surfaceDewpointC: analysis.environment.surfaceDewpointC,
-    surfaceMixingRatioGkg: analysis.environment.surfaceMixingRatio, // already g/kg
-    flagCount: Array.isArray(analysis.flags) ? analysis.flags.length : 0,
-  };
-}
+export const keyFigures = keyFiguresFromAnalysis;
 
 function storedAnalysis(row: SoundingRow): SoundingAnalysis | null {
   return row.analysis && row.engineVersion === ENGINE_VERSION ? row.analysis : null;

@@ -84,6 +84,36 @@ export const soundingKeyFiguresSchema = z.object({
   scp: z.number().nullable(),
   surfaceDewpointC: z.number().nullable(),
   surfaceMixingRatioGkg: z.number().nullable(),
+  // Ingredients behind the hazard rules (issue 14). Units are in the names; null when the
+  // sounding cannot give the figure (too shallow, no winds, no positive area…).
+  /** Storm-relative helicity 0–500 m AGL, right mover (left mover south of the equator), m²/s². */
+  srh0to500m: z.number().nullable(),
+  /** Critical angle between the 0–500 m shear vector and the storm-relative inflow at the surface, degrees. */
+  criticalAngleDeg: z.number().nullable(),
+  /** Height of the mixed-layer LFC above its LCL, m. */
+  mlLclLfcGapM: z.number().nullable(),
+  /** Temperature lapse rates, °C/km (positive when temperature falls with height). */
+  lapseRate0to3kmCKm: z.number().nullable(),
+  lapseRate3to6kmCKm: z.number().nullable(),
+  lapseRate850to500CKm: z.number().nullable(),
+  lapseRate700to500CKm: z.number().nullable(),
+  /** Most-unstable parcel CAPE between the −10 °C and −30 °C environmental levels, J/kg. */
+  muCapeHailZone: z.number().nullable(),
+  /** Height of the 0 °C environmental level above ground, m. */
+  freezingLevelM: z.number().nullable(),
+  /** Effective bulk shear, m/s. */
+  effectiveBulkShearMs: z.number().nullable(),
+  /** 0–8 km bulk shear, m/s. */
+  bulkShear0to8kmMs: z.number().nullable(),
+  /** Downdraft CAPE, J/kg (positive number). */
+  dcape: z.number().nullable(),
+  /** 0–6 km pressure-weighted mean wind speed, m/s. */
+  meanWind0to6kmMs: z.number().nullable(),
+  /** Corfidi upwind and downwind propagation vector speeds, m/s. */
+  corfidiUpwindMs: z.number().nullable(),
+  corfidiDownwindMs: z.number().nullable(),
+  /** Warm-cloud depth: from the LCL to the freezing level, m. */
+  warmCloudDepthM: z.number().nullable(),
   /** How many quality flags the analysis raised (0: none). */
   flagCount: z.number().default(0),
 });

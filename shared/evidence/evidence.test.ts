@@ -1,9 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import type { SoundingKeyFigures } from '../contracts/soundings';
 import type { AreaGeometry } from '../contracts/outlooks';
+import { emptyKeyFigures } from '../sounding/key-figures';
 import { areaEvidence, histogram, quantile, soundingsInPeriod, soundingsInside, type EvidenceSounding } from './evidence';
 
-const noFigures: SoundingKeyFigures = { mlCape: null, muCape: null, mlCin: null, mlLclHeightM: null, precipitableWaterMm: null, bulkShear0to6kmMs: null, srh0to1km: null, stp: null, scp: null, surfaceDewpointC: null, surfaceMixingRatioGkg: null, flagCount: 0 };
+const noFigures: SoundingKeyFigures = emptyKeyFigures();
 const at = (id: string, longitude: number, latitude: number, mlCape: number | null, validTime = '2027-04-18T18:00:00Z'): EvidenceSounding => ({
   id, stationId: id, latitude, longitude, validTime, source: 'model', modified: false, figures: { ...noFigures, mlCape },
 });

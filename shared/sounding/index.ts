@@ -33,3 +33,4 @@ export * from './units';
 export { validateSounding, describeLocation, MAX_FILE_BYTES, MAX_LEVELS, MIN_LEVELS } from './validate';
 export * from './version';
 export * from './wet-bulb';
+export * from './key-figures';

@@ -1,5 +1,6 @@
 import { defaultRiskLadder } from '../../shared/contracts/office';
 import type { RiskArea } from '../../shared/contracts/outlooks';
+import { emptyKeyFigures } from '../../shared/sounding/key-figures';
 import type { EvidenceSounding } from '../../shared/evidence/evidence';
 import { defaultGuidanceThresholds } from '../../shared/evidence/support-check';
 import { buildEvidenceReport } from '../../server/workers/evidence-report';
@@ -29,6 +30,7 @@ export const evidenceSixAreas: BenchFigure = {
       source: i % 3 === 0 ? 'observed' : 'model',
       modified: false,
       figures: {
+        ...emptyKeyFigures(),
         mlCape: random() * 4000, muCape: random() * 4500, mlCin: -random() * 200, mlLclHeightM: 500 + random() * 1500, precipitableWaterMm: 10 + random() * 40,
         bulkShear0to6kmMs: random() * 35, srh0to1km: random() * 300, stp: random() * 5, scp: random() * 15, surfaceDewpointC: 5 + random() * 18, surfaceMixingRatioGkg: 6 + random() * 12, flagCount: 0,
       },

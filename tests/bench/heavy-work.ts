@@ -4,6 +4,7 @@ import { eq } from 'drizzle-orm';
 import { pino } from 'pino';
 import { defaultRiskLadder } from '../../shared/contracts/office';
 import type { AreaGeometry, RiskArea } from '../../shared/contracts/outlooks';
+import { emptyKeyFigures } from '../../shared/sounding/key-figures';
 import type { EvidenceSounding } from '../../shared/evidence/evidence';
 import { defaultGuidanceThresholds } from '../../shared/evidence/support-check';
 import { loadConfig } from '../../server/config';
@@ -49,7 +50,7 @@ export const evidenceTenThousandVertices: BenchFigure = {
       validTime: '2027-04-18T18:00:00.000Z',
       source: 'model',
       modified: false,
-      figures: { mlCape: random() * 4000, muCape: random() * 4500, mlCin: -random() * 200, mlLclHeightM: 1000, precipitableWaterMm: 30, bulkShear0to6kmMs: random() * 35, srh0to1km: random() * 300, stp: random() * 5, scp: random() * 15, surfaceDewpointC: 15, surfaceMixingRatioGkg: 12, flagCount: 0 },
+      figures: { ...emptyKeyFigures(), mlCape: random() * 4000, muCape: random() * 4500, mlCin: -random() * 200, mlLclHeightM: 1000, precipitableWaterMm: 30, bulkShear0to6kmMs: random() * 35, srh0to1km: random() * 300, stp: random() * 5, scp: random() * 15, surfaceDewpointC: 15, surfaceMixingRatioGkg: 12, flagCount: 0 },
     }));
     const centre: [number, number] = [(west + east) / 2, (south + north) / 2];
     const areas: RiskArea[] = [

@@ -9,3 +9,4 @@ export * from './security';
 export * from './distribution';
 export * from './webhooks';
 export * from './verification';
+export * from './model-runs';

@@ -24,5 +24,7 @@ export function formatEvidenceValue(key: EvidenceParameterKey, value: number, un
     case 'stp':
     case 'scp':
       return formatNumber(value, 1);
+    default:
+      return formatNumber(value, 1);
   }
 }

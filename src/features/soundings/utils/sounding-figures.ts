@@ -6,7 +6,10 @@ import { CELSIUS_ZERO_K, formatNumber, heightUnitLabel, metresPerSecondToKnots, 
  * The key figures a forecaster scans in the library, on the map and in popups: how each is
  * named and shown in the person's units. Values arrive in SI from the server.
  */
-export type FigureKey = Exclude<keyof SoundingKeyFigures, 'scp' | 'surfaceMixingRatioGkg' | 'flagCount'>;
+export type FigureKey = Extract<
+  keyof SoundingKeyFigures,
+  'mlCape' | 'muCape' | 'mlCin' | 'mlLclHeightM' | 'precipitableWaterMm' | 'bulkShear0to6kmMs' | 'srh0to1km' | 'stp' | 'surfaceDewpointC'
+>;
 
 export interface FigureDefinition {
   key: FigureKey;

@@ -1,0 +1,60 @@
+CREATE TABLE "grid_soundings" (
+	"run_id" uuid NOT NULL,
+	"point_index" integer NOT NULL,
+	"latitude" double precision NOT NULL,
+	"longitude" double precision NOT NULL,
+	"elevation_m" real,
+	"levels" "bytea" NOT NULL,
+	"flag_count" smallint DEFAULT 0 NOT NULL,
+	"ml_cape" real,
+	"mu_cape" real,
+	"ml_cin" real,
+	"ml_lcl_height_m" real,
+	"precipitable_water_mm" real,
+	"bulk_shear0to6km_ms" real,
+	"srh0to1km" real,
+	"stp" real,
+	"scp" real,
+	"surface_dewpoint_c" real,
+	"surface_mixing_ratio_gkg" real,
+	"srh0to500m" real,
+	"critical_angle_deg" real,
+	"ml_lcl_lfc_gap_m" real,
+	"lapse_rate0to3km_c_km" real,
+	"lapse_rate3to6km_c_km" real,
+	"lapse_rate850to500_c_km" real,
+	"lapse_rate700to500_c_km" real,
+	"mu_cape_hail_zone" real,
+	"freezing_level_m" real,
+	"effective_bulk_shear_ms" real,
+	"bulk_shear0to8km_ms" real,
+	"dcape" real,
+	"mean_wind0to6km_ms" real,
+	"corfidi_upwind_ms" real,
+	"corfidi_downwind_ms" real,
+	"warm_cloud_depth_m" real,
+	CONSTRAINT "grid_soundings_run_id_point_index_pk" PRIMARY KEY("run_id","point_index")
+);
+--> statement-breakpoint
+CREATE TABLE "model_runs" (
+	"id" uuid PRIMARY KEY DEFAULT gen_random_uuid() NOT NULL,
+	"office_id" uuid NOT NULL,
+	"model" text NOT NULL,
+	"cycle_time" timestamp with time zone NOT NULL,
+	"forecast_hour" integer NOT NULL,
+	"valid_time" timestamp with time zone NOT NULL,
+	"grid_kind" text NOT NULL,
+	"nx" integer NOT NULL,
+	"ny" integer NOT NULL,
+	"level_count" integer NOT NULL,
+	"sounding_count" integer DEFAULT 0 NOT NULL,
+	"stored_bytes" integer DEFAULT 0 NOT NULL,
+	"state" text DEFAULT 'decoding' NOT NULL,
+	"failure" text,
+	"created_at" timestamp with time zone DEFAULT now() NOT NULL
+);
+--> statement-breakpoint
+ALTER TABLE "grid_soundings" ADD CONSTRAINT "grid_soundings_run_id_model_runs_id_fk" FOREIGN KEY ("run_id") REFERENCES "public"."model_runs"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
+ALTER TABLE "model_runs" ADD CONSTRAINT "model_runs_office_id_offices_id_fk" FOREIGN KEY ("office_id") REFERENCES "public"."offices"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
+CREATE UNIQUE INDEX "model_runs_office_run_idx" ON "model_runs" USING btree ("office_id","model","cycle_time","forecast_hour");--> statement-breakpoint
+CREATE INDEX "model_runs_office_id_valid_time_index" ON "model_runs" USING btree ("office_id","valid_time");
