@@ -53,4 +53,22 @@ export const riskAreaSchema = riskAreaInputSchema.extend({ id: z.string(), sortO
 export type RiskArea = z.infer<typeof riskAreaSchema>;
 
 export const supportResults = ['supported', 'thin', 'exceeds', 'none'] as const;
-export const supportCheckSchema = z.object({ result: z.enum(supportResults), reasons: z.array(z.string()) });
+/**
+ * How one set of rules (the level's, or one hazard's) judged the soundings inside an area: which
+ * soundings back it (meet every rule at once), which fail a rule, and which lack a value a rule
+ * uses (they are not counted either way). Ids are sounding ids (grid soundings: `runId:pointIndex`).
+ */
+export const ruleJudgementSchema = z.object({
+  result: z.enum(supportResults),
+  reasons: z.array(z.string()),
+  backing: z.array(z.string()).default([]),
+  failing: z.array(z.string()).default([]),
+  lacking: z.array(z.string()).default([]),
+});
+export type RuleJudgement = z.infer<typeof ruleJudgementSchema>;
+
+/** The support check of an area: its level's judgement plus one per hazard flag on the area. */
+export const supportCheckSchema = ruleJudgementSchema.extend({
+  hazards: z.array(ruleJudgementSchema.extend({ hazard: z.enum(hazardKinds), significant: z.boolean() })).default([]),
+});
+export type SupportCheckResult = z.infer<typeof supportCheckSchema>;

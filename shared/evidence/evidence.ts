@@ -11,6 +11,8 @@ export interface EvidenceSounding {
   validTime: string;
   source: 'observed' | 'model' | 'unknown';
   modified: boolean;
+  /** The model run a grid sounding belongs to; null for observed and uploaded soundings. */
+  runId?: string | null;
   figures: SoundingKeyFigures;
 }
 

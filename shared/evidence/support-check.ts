@@ -1,4 +1,5 @@
 import type { GuidanceThresholds, RiskLadder, ThresholdParameterKey } from '../contracts/office';
+import type { SupportCheckResult } from '../contracts/risk-areas';
 import type { AreaEvidence } from './evidence';
 
 /** Parameters an office may set a guidance threshold for; each is a minimum median expected for a level. */
@@ -34,10 +35,9 @@ export const supportResultLabels: Record<SupportResult, string> = {
   none: 'no soundings inside',
 };
 
-export interface SupportCheck {
-  result: SupportResult;
-  reasons: string[];
-}
+export type SupportCheck = SupportCheckResult;
+
+const noIds = { backing: [], failing: [], lacking: [], hazards: [] };
 
 /** Fewer soundings than this inside an area make the support thin, whatever their values. */
 export const minimumSoundingsForSupport = 3;
@@ -69,19 +69,19 @@ export function checkSupport(evidence: AreaEvidence, levelKey: string, ladder: R
   const index = ladder.findIndex((l) => l.key === levelKey);
   const level = ladder[index];
   const levelName = level?.label ?? levelKey;
-  if (evidence.count === 0) return { result: 'none', reasons: ['No soundings valid in the outlook period lie inside this area.'] };
+  if (evidence.count === 0) return { ...noIds, result: 'none', reasons: ['No soundings valid in the outlook period lie inside this area.'] };
   const thresholds = guidance[levelKey] ?? {};
   const { met, missed } = compare(evidence, thresholds);
-  if (missed.length > 0) return { result: 'thin', reasons: missed.map((m) => `${m} expected for ${levelName}`) };
+  if (missed.length > 0) return { ...noIds, result: 'thin', reasons: missed.map((m) => `${m} expected for ${levelName}`) };
   if (evidence.count < minimumSoundingsForSupport) {
-    return { result: 'thin', reasons: [`only ${evidence.count} sounding${evidence.count === 1 ? '' : 's'} inside; ${minimumSoundingsForSupport} or more make the evidence firmer`] };
+    return { ...noIds, result: 'thin', reasons: [`only ${evidence.count} sounding${evidence.count === 1 ? '' : 's'} inside; ${minimumSoundingsForSupport} or more make the evidence firmer`] };
   }
   const next = ladder[index + 1];
   const nextThresholds = next ? guidance[next.key] : undefined;
   if (next && nextThresholds && Object.keys(nextThresholds).length > 0) {
     const above = compare(evidence, nextThresholds);
-    if (above.missed.length === 0) return { result: 'exceeds', reasons: above.met.map((m) => `${m} expected for ${next.label}`) };
+    if (above.missed.length === 0) return { ...noIds, result: 'exceeds', reasons: above.met.map((m) => `${m} expected for ${next.label}`) };
   }
-  if (met.length === 0) return { result: 'supported', reasons: [`${evidence.count} soundings inside; no guidance thresholds are set for ${levelName}`] };
-  return { result: 'supported', reasons: met.map((m) => `${m} expected for ${levelName}`) };
+  if (met.length === 0) return { ...noIds, result: 'supported', reasons: [`${evidence.count} soundings inside; no guidance thresholds are set for ${levelName}`] };
+  return { ...noIds, result: 'supported', reasons: met.map((m) => `${m} expected for ${levelName}`) };
 }
