@@ -1,5 +1,6 @@
 import { analyzeComposites, type CompositesAnalysis } from './composites';
 import { analyzeEnvironment, type EnvironmentAnalysis } from './environment';
+import { analyzeIngredients, type IngredientsAnalysis } from './ingredients';
 import { analyzeKinematics, type KinematicsAnalysis, type WindVector } from './kinematics';
 import {
   levelStart,
@@ -33,6 +34,8 @@ export interface SoundingAnalysis {
   environment: EnvironmentAnalysis;
   kinematics: KinematicsAnalysis;
   composites: CompositesAnalysis;
+  /** The ingredients behind the hazard rules (docs/analysis.md, "Hazard ingredients"). */
+  ingredients: IngredientsAnalysis;
   /** Quality flags: what in the data or the results deserves caution (never NaN, never silent). */
   flags: QualityFlag[];
   /** Version of the engine that made this analysis (cache key). */
@@ -98,6 +101,7 @@ function analyzeProfile(profile: Profile, options: AnalysisOptions): SoundingAna
   if (lifted.meetsEffectiveCriteria !== null) knownEffective.push({ index: mostUnstableIndex, meets: lifted.meetsEffectiveCriteria });
   const kinematics = analyzeKinematics(profile, mostUnstable, { latitude: options.latitude ?? null, mostUnstableIndex, knownEffective });
   const composites = analyzeComposites({ surfaceBased, mixedLayer, mostUnstable }, kinematics);
+  const ingredients = analyzeIngredients(profile, { mixedLayer, mostUnstable, mostUnstableStart: levelStart(profile, mostUnstableIndex), environment, kinematics });
   const flags = qualityFlags(profile, { surfaceBased, mixedLayer, mostUnstable }, kinematics);
   return {
     surfaceBased,
@@ -111,6 +115,7 @@ function analyzeProfile(profile: Profile, options: AnalysisOptions): SoundingAna
     environment,
     kinematics,
     composites,
+    ingredients,
     flags,
     engineVersion: ENGINE_VERSION,
   };

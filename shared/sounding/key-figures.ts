@@ -1,5 +1,6 @@
 import type { SoundingKeyFigures } from '../contracts/soundings';
 import type { SoundingAnalysis } from './analyze';
+import type { IngredientsAnalysis } from './ingredients';
 
 /**
  * The key figures of a sounding: what the library, the map, the evidence panel and the support
@@ -22,9 +23,16 @@ export function emptyKeyFigures(): SoundingKeyFigures {
   return figures as SoundingKeyFigures;
 }
 
-/** The key figures read from a full analysis (null analysis: every figure null). */
-export function keyFiguresFromAnalysis(analysis: SoundingAnalysis | null): SoundingKeyFigures {
+/**
+ * An analysis as stored: one made by an engine before the hazard ingredients (2.1.0) has no
+ * `ingredients` until it is analysed again, and must not break the readers meanwhile.
+ */
+export type StoredAnalysis = Omit<SoundingAnalysis, 'ingredients'> & { ingredients?: IngredientsAnalysis };
+
+/** The key figures read from a full analysis (null analysis: every figure null; no ingredients: those null). */
+export function keyFiguresFromAnalysis(analysis: StoredAnalysis | null): SoundingKeyFigures {
   if (!analysis) return emptyKeyFigures();
+  const ingredients = analysis.ingredients;
   return {
     ...emptyKeyFigures(),
     mlCape: analysis.mixedLayer.cape,
@@ -38,8 +46,22 @@ export function keyFiguresFromAnalysis(analysis: SoundingAnalysis | null): Sound
     scp: analysis.composites.supercellComposite,
     surfaceDewpointC: analysis.environment.surfaceDewpointC,
     surfaceMixingRatioGkg: analysis.environment.surfaceMixingRatio, // already g/kg
+    srh0to500m: ingredients?.srh0to500m ?? null,
+    criticalAngleDeg: ingredients?.criticalAngleDeg ?? null,
+    mlLclLfcGapM: ingredients?.mlLclLfcGap ?? null,
+    lapseRate0to3kmCKm: analysis.environment.lapseRate0to3km,
+    lapseRate3to6kmCKm: ingredients?.lapseRate3to6km ?? null,
+    lapseRate850to500CKm: ingredients?.lapseRate850to500hPa ?? null,
+    lapseRate700to500CKm: analysis.environment.lapseRate700to500hPa,
+    muCapeHailZone: ingredients?.muCapeHailZone ?? null,
+    freezingLevelM: analysis.environment.freezingLevelHeight,
     effectiveBulkShearMs: analysis.kinematics.effectiveBulkShear,
+    bulkShear0to8kmMs: ingredients?.bulkShear0to8km ?? null,
     dcape: analysis.environment.downdraftCape,
+    meanWind0to6kmMs: ingredients?.meanWind0to6kmSpeed ?? null,
+    corfidiUpwindMs: ingredients?.corfidiUpwindSpeed ?? null,
+    corfidiDownwindMs: ingredients?.corfidiDownwindSpeed ?? null,
+    warmCloudDepthM: ingredients?.warmCloudDepth ?? null,
     flagCount: Array.isArray(analysis.flags) ? analysis.flags.length : 0,
   };
 }
