@@ -36,6 +36,15 @@ describe('analyze CLI', () => {
     expect(validate(output)).toBe(false);
   });
 
+  it('when the output lacks its hazard ingredients or has a critical angle above 180°, then the schema refuses it', () => {
+    const { stdout } = runCli(['tests/fixtures/soundings/oax_20140616_19z.csv', '--json']);
+    const output = JSON.parse(stdout) as { ingredients?: { criticalAngleDeg: number | null; corfidiUpwind: { u: number; v: number } | null } };
+    expect(output.ingredients?.corfidiUpwind).toEqual({ u: expect.any(Number), v: expect.any(Number) });
+    const { ingredients, ...without } = output;
+    expect(validate(without)).toBe(false);
+    expect(validate({ ...output, ingredients: { ...ingredients, criticalAngleDeg: 181 } })).toBe(false);
+  });
+
   it('when a file has only the header row and levels (no metadata, empty heights), then exit 0, JSON on stdout and warnings on stderr', () => {
     const rows = ['1000,,28,20,170,10', '950,,24,18,190,20', '900,,21,15,210,30', '850,,18,12,230,35', '700,,8,-2,250,40', '500,,-10,-25,260,50', '300,,-38,-50,270,60', '200,,-55,-70,270,70'];
     const file = tempFile('bare.csv', ['pressure_hPa,height_m,temperature_C,dewpoint_C,wind_direction_deg,wind_speed_kt', ...rows].join('\n'));
