@@ -31,6 +31,23 @@ export const evidenceParameters: { key: EvidenceParameterKey; label: string; uni
   { key: 'srh0to1km', label: '0–1 km SRH', unit: 'm²/s²' },
   { key: 'stp', label: 'STP', unit: '' },
   { key: 'scp', label: 'SCP', unit: '' },
+  // Hazard ingredients (docs/analysis.md, "Hazard ingredients"): tornado, hail, damaging wind, flash flooding.
+  { key: 'srh0to500m', label: '0–500 m SRH', unit: 'm²/s²' },
+  { key: 'criticalAngleDeg', label: 'Critical angle', unit: '°' },
+  { key: 'mlLclLfcGapM', label: 'LCL–LFC gap', unit: 'm' },
+  { key: 'effectiveBulkShearMs', label: 'Effective shear', unit: 'm/s' },
+  { key: 'muCapeHailZone', label: 'Hail-zone CAPE', unit: 'J/kg' },
+  { key: 'freezingLevelM', label: 'Freezing level', unit: 'm' },
+  { key: 'lapseRate700to500CKm', label: '700–500 hPa lapse rate', unit: '°C/km' },
+  { key: 'lapseRate850to500CKm', label: '850–500 hPa lapse rate', unit: '°C/km' },
+  { key: 'lapseRate3to6kmCKm', label: '3–6 km lapse rate', unit: '°C/km' },
+  { key: 'bulkShear0to8kmMs', label: '0–8 km shear', unit: 'm/s' },
+  { key: 'dcape', label: 'DCAPE', unit: 'J/kg' },
+  { key: 'meanWind0to6kmMs', label: '0–6 km mean wind', unit: 'm/s' },
+  { key: 'lapseRate0to3kmCKm', label: '0–3 km lapse rate', unit: '°C/km' },
+  { key: 'corfidiUpwindMs', label: 'Corfidi upwind', unit: 'm/s' },
+  { key: 'corfidiDownwindMs', label: 'Corfidi downwind', unit: 'm/s' },
+  { key: 'warmCloudDepthM', label: 'Warm-cloud depth', unit: 'm' },
 ];
 
 export interface HistogramBin {

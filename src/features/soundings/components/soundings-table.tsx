@@ -1,14 +1,16 @@
 import { createColumnHelper, flexRender, getCoreRowModel, useReactTable, type SortingState } from '@tanstack/react-table';
 import { clsx } from 'clsx';
 import { ArrowDown, ArrowUp, ArrowUpDown, Trash2 } from 'lucide-react';
-import { useMemo } from 'react';
+import { useMemo, useState } from 'react';
 import { Link } from 'react-router';
 import { Button } from '../../../components/ui/button';
 import type { SoundingListQuery, SoundingSummary } from '../../../../shared/contracts/soundings';
 import { soundingSortKeys } from '../../../../shared/contracts/soundings';
 import type { UnitFormatters } from '../../../hooks/use-units';
-import { figureDefinitions, libraryFigureKeys } from '../utils/sounding-figures';
+import { LIBRARY_COLUMNS_STORAGE_KEY, parseLibraryColumns, toggleLibraryColumn } from '../utils/library-columns';
+import { figureDefinitions, libraryFigureKeys, type FigureKey } from '../utils/sounding-figures';
 import { formatValidTimeLocal, formatValidTimeUtc } from '../utils/valid-time';
+import { LibraryColumnChooser } from './library-column-chooser';
 import { ModifiedBadge } from './modified-badge';
 
 type SortKey = SoundingListQuery['sort'];
@@ -36,6 +38,13 @@ const column = createColumnHelper<SoundingSummary>();
  * new page (ascending, then descending), so the table never sorts only the rows it happens to hold.
  */
 export function SoundingsTable({ soundings, sort, order, onSortChange, units, timeZone, canDelete, onDelete, busy }: SoundingsTableProps) {
+  // Extra figure columns (hazard ingredients…), remembered in this browser.
+  const [extraKeys, setExtraKeys] = useState<FigureKey[]>(() => parseLibraryColumns(readStored()));
+  const toggleColumn = (key: FigureKey, on: boolean) => {
+    const next = toggleLibraryColumn(extraKeys, key, on);
+    setExtraKeys(next);
+    writeStored(JSON.stringify(next));
+  };
   const columns = useMemo(
     () => [
       column.accessor('stationId', {
@@ -77,7 +86,7 @@ export function SoundingsTable({ soundings, sort, order, onSortChange, units, ti
           </span>
         ),
       }),
-      ...libraryFigureKeys.map((key) =>
+      ...[...libraryFigureKeys, ...extraKeys].map((key) =>
         column.accessor((sounding) => sounding.figures[key], {
           id: key,
           header: () => {
@@ -104,7 +113,7 @@ export function SoundingsTable({ soundings, sort, order, onSortChange, units, ti
           ) : null,
       }),
     ],
-    [units, timeZone, canDelete, onDelete, busy],
+    [units, timeZone, canDelete, onDelete, busy, extraKeys],
   );
 
   const sorting: SortingState = [{ id: sort, desc: order === 'desc' }];
@@ -128,63 +137,85 @@ export function SoundingsTable({ soundings, sort, order, onSortChange, units, ti
   });
 
   return (
-    <div className="relative overflow-x-auto rounded-lg border border-line bg-panel">
-      <table className="w-full text-left text-sm">
-        <caption className="sr-only">Soundings, one server page; column headings sort</caption>
-        <thead className="border-b border-line bg-sunken text-[12px] font-semibold tracking-wide text-ink-muted">
-          {table.getHeaderGroups().map((headerGroup) => (
-            <tr key={headerGroup.id}>
-              {headerGroup.headers.map((header) => {
-                const sortable = isSortKey(header.column.id);
-                const active = sort === header.column.id;
-                const meta = header.column.columnDef.meta;
-                const numeric = meta?.numeric === true;
-                return (
-                  <th
-                    key={header.id}
-                    scope="col"
-                    title={meta?.title}
-                    aria-sort={active ? (order === 'asc' ? 'ascending' : 'descending') : undefined}
-                    className={clsx('px-2.5 py-2 whitespace-nowrap align-bottom', numeric && 'text-right')}
-                  >
-                    {sortable ? (
-                      <button
-                        type="button"
-                        onClick={header.column.getToggleSortingHandler()}
-                        className={clsx('inline-flex items-center gap-1 hover:text-ink', active && 'text-ink', numeric && 'flex-row-reverse')}
-                      >
-                        {flexRender(header.column.columnDef.header, header.getContext())}
-                        {active ? (
-                          order === 'asc' ? (
-                            <ArrowUp aria-hidden className="size-3" />
+    <div className="space-y-2">
+      <div className="flex justify-end">
+        <LibraryColumnChooser chosen={extraKeys} onToggle={toggleColumn} units={units} />
+      </div>
+      <div className="relative overflow-x-auto rounded-lg border border-line bg-panel">
+        <table className="w-full text-left text-sm">
+          <caption className="sr-only">Soundings, one server page; column headings sort</caption>
+          <thead className="border-b border-line bg-sunken text-[12px] font-semibold tracking-wide text-ink-muted">
+            {table.getHeaderGroups().map((headerGroup) => (
+              <tr key={headerGroup.id}>
+                {headerGroup.headers.map((header) => {
+                  const sortable = isSortKey(header.column.id);
+                  const active = sort === header.column.id;
+                  const meta = header.column.columnDef.meta;
+                  const numeric = meta?.numeric === true;
+                  return (
+                    <th
+                      key={header.id}
+                      scope="col"
+                      title={meta?.title}
+                      aria-sort={active ? (order === 'asc' ? 'ascending' : 'descending') : undefined}
+                      className={clsx('px-2.5 py-2 whitespace-nowrap align-bottom', numeric && 'text-right')}
+                    >
+                      {sortable ? (
+                        <button
+                          type="button"
+                          onClick={header.column.getToggleSortingHandler()}
+                          className={clsx('inline-flex items-center gap-1 hover:text-ink', active && 'text-ink', numeric && 'flex-row-reverse')}
+                        >
+                          {flexRender(header.column.columnDef.header, header.getContext())}
+                          {active ? (
+                            order === 'asc' ? (
+                              <ArrowUp aria-hidden className="size-3" />
+                            ) : (
+                              <ArrowDown aria-hidden className="size-3" />
+                            )
                           ) : (
-                            <ArrowDown aria-hidden className="size-3" />
-                          )
-                        ) : (
-                          <ArrowUpDown aria-hidden className="size-3 opacity-40" />
-                        )}
-                      </button>
-                    ) : (
-                      flexRender(header.column.columnDef.header, header.getContext())
-                    )}
-                  </th>
-                );
-              })}
-            </tr>
-          ))}
-        </thead>
-        <tbody className="divide-y divide-line">
-          {table.getRowModel().rows.map((row) => (
-            <tr key={row.id} className={clsx('align-top hover:bg-sunken/50', row.original.modificationName !== null && 'bg-warning-soft/30')}>
-              {row.getVisibleCells().map((cell) => (
-                <td key={cell.id} className={clsx('px-2.5 py-2', cell.column.columnDef.meta?.numeric === true && 'text-right whitespace-nowrap')}>
-                  {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                </td>
-              ))}
-            </tr>
-          ))}
-        </tbody>
-      </table>
+                            <ArrowUpDown aria-hidden className="size-3 opacity-40" />
+                          )}
+                        </button>
+                      ) : (
+                        flexRender(header.column.columnDef.header, header.getContext())
+                      )}
+                    </th>
+                  );
+                })}
+              </tr>
+            ))}
+          </thead>
+          <tbody className="divide-y divide-line">
+            {table.getRowModel().rows.map((row) => (
+              <tr key={row.id} className={clsx('align-top hover:bg-sunken/50', row.original.modificationName !== null && 'bg-warning-soft/30')}>
+                {row.getVisibleCells().map((cell) => (
+                  <td key={cell.id} className={clsx('px-2.5 py-2', cell.column.columnDef.meta?.numeric === true && 'text-right whitespace-nowrap')}>
+                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                  </td>
+                ))}
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
     </div>
   );
+}
+
+/** The saved extra columns; null where storage is unavailable (private mode, tests without it). */
+function readStored(): string | null {
+  try {
+    return globalThis.localStorage.getItem(LIBRARY_COLUMNS_STORAGE_KEY);
+  } catch {
+    return null;
+  }
+}
+
+function writeStored(value: string): void {
+  try {
+    globalThis.localStorage.setItem(LIBRARY_COLUMNS_STORAGE_KEY, value);
+  } catch {
+    // Not remembered in this browser; the columns still show until the page is left.
+  }
 }

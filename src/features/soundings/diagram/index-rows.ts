@@ -1,10 +1,11 @@
 import type { Units } from '../../../../shared/contracts/users';
+import type { IngredientsAnalysis } from '../../../../shared/sounding/ingredients';
 import { windDirectionAndSpeed, type ParcelResult, type SoundingAnalysis, type WindVector } from '../../../../shared/sounding';
 import { MISSING, energyText, formatNumber, heightText, pressureText, speedText, temperatureText, withUnit } from './format';
 
 /**
- * The rows of the index panel, grouped as instability, moisture, cloud base, kinematics and
- * composites, already formatted in the person's units. A missing value is "—" with a reason
+ * The rows of the index panel, grouped as instability, moisture, cloud base, kinematics,
+ * composites and the hazard ingredients (tornado, hail, damaging wind, flash flooding), already formatted in the person's units. A missing value is "—" with a reason
  * for its title. Pure: the component only renders these rows.
  */
 export interface IndexRow {
@@ -17,7 +18,7 @@ export interface IndexRow {
 }
 
 export interface IndexGroup {
-  title: 'Instability' | 'Moisture' | 'Cloud base' | 'Kinematics' | 'Composites';
+  title: 'Instability' | 'Moisture' | 'Cloud base' | 'Kinematics' | 'Composites' | 'Hazard ingredients';
   rows: IndexRow[];
 }
 
@@ -28,6 +29,10 @@ const NO_LCL = 'Does not exist within the data (the LCL is above the top of the 
 const NO_WIND = 'Cannot be computed: the winds do not reach this height.';
 const NO_INGREDIENT = 'Cannot be computed: an ingredient (winds, LCL or effective layer) is missing.';
 const NO_DATA = 'Cannot be computed from these data.';
+const NO_850 = 'Does not exist here: 850 hPa is below the ground, or the data stop below 500 hPa.';
+const NO_HAIL_ZONE = 'Cannot be computed: the data do not reach −30 °C.';
+const NO_CLOUD_LAYER = 'Cannot be computed: the winds do not reach 300 hPa.';
+const NO_ANGLE = 'Cannot be computed: no winds to 500 m, no storm motion, or no shear or inflow to give a direction.';
 
 function row(label: string, description: string, value: number | null | undefined, format: (v: number) => string, missingReason: string): IndexRow {
   if (value === null || value === undefined || !Number.isFinite(value)) return { label, description, value: MISSING, missingReason };
@@ -37,6 +42,8 @@ function row(label: string, description: string, value: number | null | undefine
 function motion(vector: WindVector | null): number | null {
   return vector ? windDirectionAndSpeed(vector.u, vector.v).speed : null;
 }
+
+const speedOf = (vector: WindVector | null | undefined): number | null => motion(vector ?? null);
 
 function motionText(vector: WindVector, units: Units): string {
   const { directionDeg, speed } = windDirectionAndSpeed(vector.u, vector.v);
@@ -64,6 +71,8 @@ export function indexGroups(analysis: SoundingAnalysis, units: Units, chosen: Pa
   const env = analysis.environment;
   const k = analysis.kinematics;
   const c = analysis.composites;
+  // Absent from analyses made before the engine computed the hazard ingredients.
+  const ing: Partial<IngredientsAnalysis> | undefined = analysis.ingredients;
   const h = (v: number) => heightText(v, units);
   const t = (v: number) => temperatureText(v, units);
   const s = (v: number) => speedText(v, units);
@@ -76,6 +85,8 @@ export function indexGroups(analysis: SoundingAnalysis, units: Units, chosen: Pa
     ...parcels.map((p) => row(`${p.prefix} EL`, `Equilibrium level of the ${p.name} parcel (above ground)`, p.parcel.elHeight, h, NO_EL)),
     row('MU parcel', 'Pressure the most-unstable parcel starts from', analysis.mostUnstable.parcelPressure, (v) => pressureText(v), NO_DATA),
     row('Lapse rate 0–3 km', 'Temperature lapse rate, surface to 3 km', env.lapseRate0to3km, lapse, NO_DATA),
+    row('Lapse rate 3–6 km', 'Temperature lapse rate, 3 to 6 km above ground', ing?.lapseRate3to6km, lapse, NO_DATA),
+    row('Lapse rate 850–500 hPa', 'Temperature lapse rate between 850 and 500 hPa', ing?.lapseRate850to500hPa, lapse, NO_850),
     row('Lapse rate 700–500 hPa', 'Temperature lapse rate between 700 and 500 hPa', env.lapseRate700to500hPa, lapse, NO_DATA),
     row('DCAPE', 'Downdraft CAPE', env.downdraftCape, energyText, NO_DATA),
     row('Freezing level', 'Height of the 0 °C level above ground', env.freezingLevelHeight, h, NO_DATA),
@@ -117,11 +128,31 @@ export function indexGroups(analysis: SoundingAnalysis, units: Units, chosen: Pa
     row('STP', 'Significant tornado parameter (effective layer)', c.significantTornado, dimensionless, NO_INGREDIENT),
     row('STP fixed layer', 'Significant tornado parameter (fixed layer)', c.significantTornadoFixedLayer, dimensionless, NO_INGREDIENT),
   ];
+  const hazards: IndexRow[] = [
+    row('SRH 0–500 m', 'Tornado: storm-relative helicity, surface to 500 m (cyclonic deviant mover; Coffer et al. 2019)', ing?.srh0to500m, helicity, NO_WIND),
+    row('Critical angle', 'Tornado: angle between the surface storm-relative inflow and the 0–500 m shear; 90° is purely streamwise (Esterheld and Giuliano 2008)', ing?.criticalAngleDeg, (v) => withUnit(v, 0, '°'), NO_ANGLE),
+    row('ML LCL–LFC gap', 'Tornado: height of the mixed-layer LFC above its LCL', ing?.mlLclLfcGap, h, NO_LFC),
+    row('Hail-zone CAPE', 'Hail: most-unstable CAPE between the −10 °C and −30 °C levels (Johnson and Sugden 2014)', ing?.muCapeHailZone, energyText, NO_HAIL_ZONE),
+    row('−10 °C level', 'Hail: height of the −10 °C level above ground', ing?.minus10CHeight, h, NO_DATA),
+    row('−30 °C level', 'Hail: height of the −30 °C level above ground', ing?.minus30CHeight, h, NO_HAIL_ZONE),
+    row('Shear 0–8 km', 'Hail and supercells: bulk wind difference, surface to 8 km', ing?.bulkShear0to8km, s, NO_WIND),
+    row('Mean wind 0–6 km', 'Damaging wind: pressure-weighted mean wind, surface to 6 km', ing?.meanWind0to6kmSpeed, s, NO_WIND),
+    {
+      ...row('Corfidi upwind', 'Flash flooding: upwind-propagation vector, 850–300 hPa mean wind minus the low-level jet (Corfidi 2003)', speedOf(ing?.corfidiUpwind), s, NO_CLOUD_LAYER),
+      ...(ing?.corfidiUpwind ? { value: motionText(ing.corfidiUpwind, units) } : {}),
+    },
+    {
+      ...row('Corfidi downwind', 'Flash flooding: downwind-propagation vector, 850–300 hPa mean wind plus the upwind vector (Corfidi 2003)', speedOf(ing?.corfidiDownwind), s, NO_CLOUD_LAYER),
+      ...(ing?.corfidiDownwind ? { value: motionText(ing.corfidiDownwind, units) } : {}),
+    },
+    row('Warm-cloud depth', 'Flash flooding: mixed-layer LCL to the freezing level (Doswell, Brooks and Maddox 1996)', ing?.warmCloudDepth, h, NO_LCL),
+  ];
   return [
     { title: 'Instability', rows: instability },
     { title: 'Moisture', rows: moisture },
     { title: 'Cloud base', rows: cloudBase },
     { title: 'Kinematics', rows: kinematics },
     { title: 'Composites', rows: composites },
+    { title: 'Hazard ingredients', rows: hazards },
   ];
 }

@@ -98,6 +98,20 @@ describe('SoundingWorkbench', () => {
     expect(live?.textContent).toMatch(/Temperature 27\.4\u202f°C/);
   });
 
+  it('shows the hazard ingredients in their own group, in the person\'s units (speeds in kt, heights in ft)', () => {
+    render(<SoundingWorkbench levels={levels} units={{ temperature: 'F', height: 'ft', speed: 'kt' }} readOnly />);
+    const hazards = screen.getByRole('table', { name: 'Hazard ingredients' });
+    const rows = within(hazards).getAllByRole('rowheader').map((header) => header.textContent);
+    expect(rows).toEqual(expect.arrayContaining(['SRH 0–500 m', 'Critical angle', 'ML LCL–LFC gap', 'Hail-zone CAPE', 'Shear 0–8 km', 'Mean wind 0–6 km', 'Corfidi upwind', 'Corfidi downwind', 'Warm-cloud depth']));
+    expect(indexValue('SRH 0–500 m')).toMatch(/^\d+\u202fm²\/s²$/);
+    expect(indexValue('Critical angle')).toMatch(/^\d+\u202f°$/);
+    expect(indexValue('Hail-zone CAPE')).toMatch(/J\/kg$/);
+    expect(indexValue('Warm-cloud depth')).toMatch(/ft$/);
+    // A vector: direction it blows from, then its speed.
+    expect(indexValue('Corfidi upwind')).toMatch(/^\d{3}° \d+\s?kt$/);
+    expect(indexValue('Lapse rate 850–500 hPa')).toMatch(/K\/km$/);
+  });
+
   it('marks missing index values with a dash and a title that explains why', () => {
     // An invented isothermal (0 °C) atmosphere without winds: a lifted parcel only cools below
     // its surroundings, so no parcel has an LFC, and nothing kinematic can be computed.
@@ -107,7 +121,7 @@ describe('SoundingWorkbench', () => {
       return { pressureHpa, heightM: 8000 * Math.log(1000 / pressureHpa), temperatureC: 0, dewpointC: -10, uMs: null, vMs: null };
     });
     render(<SoundingWorkbench levels={stable} units={metric} readOnly />);
-    const groups = ['Instability', 'Moisture', 'Cloud base', 'Kinematics', 'Composites'].map((name) => screen.getByRole('table', { name }));
+    const groups = ['Instability', 'Moisture', 'Cloud base', 'Kinematics', 'Composites', 'Hazard ingredients'].map((name) => screen.getByRole('table', { name }));
     const missing = groups.flatMap((table) => within(table).getAllByRole('cell')).filter((cell) => cell.textContent?.startsWith('—'));
     expect(missing.length).toBeGreaterThan(0);
     for (const cell of missing) expect(cell.getAttribute('title') ?? '').toMatch(/^(Does not exist|Cannot be computed)/);

@@ -26,6 +26,23 @@ export const colourScales: Record<MapFigureKey, ColourScale> = {
   srh0to1km: { lightAt: 0, darkAt: 400, stops: wind },
   stp: { lightAt: 0, darkAt: 6, stops: warm },
   surfaceDewpointC: { lightAt: 0, darkAt: 25, stops: moisture },
+  // Hazard ingredients: our own ends, where the values usually discussed lie (common practice ranges).
+  srh0to500m: { lightAt: 0, darkAt: 300, stops: wind },
+  criticalAngleDeg: { lightAt: 0, darkAt: 180, stops: cap },
+  mlLclLfcGapM: { lightAt: 0, darkAt: 3000, stops: cap },
+  lapseRate0to3kmCKm: { lightAt: 4, darkAt: 9.5, stops: warm },
+  lapseRate3to6kmCKm: { lightAt: 4, darkAt: 9, stops: warm },
+  lapseRate850to500CKm: { lightAt: 4, darkAt: 9, stops: warm },
+  lapseRate700to500CKm: { lightAt: 4, darkAt: 9, stops: warm },
+  muCapeHailZone: { lightAt: 0, darkAt: 1500, stops: warm },
+  freezingLevelM: { lightAt: 1000, darkAt: 5000, stops: cap },
+  effectiveBulkShearMs: { lightAt: 0, darkAt: 35, stops: wind },
+  bulkShear0to8kmMs: { lightAt: 0, darkAt: 45, stops: wind },
+  dcape: { lightAt: 0, darkAt: 1500, stops: warm },
+  meanWind0to6kmMs: { lightAt: 0, darkAt: 30, stops: wind },
+  corfidiUpwindMs: { lightAt: 0, darkAt: 30, stops: wind },
+  corfidiDownwindMs: { lightAt: 0, darkAt: 40, stops: wind },
+  warmCloudDepthM: { lightAt: 1000, darkAt: 4500, stops: moisture },
 };
 
 function channels(hex: string): [number, number, number] {
