@@ -68,6 +68,14 @@ describe('browser journey: a forecaster brings in a sounding and tries a what-if
     await expectAccessible(page, 'sounding workbench');
   });
 
+  it('When the forecaster reads the indices, then the hazard ingredients have their own group with values and units', async () => {
+    const hazards = page.getByRole('table', { name: 'Hazard ingredients' });
+    await hazards.waitFor();
+    // OAX 16 June 2014 had strong low-level helicity (srh0to1km > 150 m²/s² in analyze.test.ts): 0–500 m SRH is positive.
+    expect(await indexNumber(page, 'SRH 0–500 m')).toBeGreaterThan(0);
+    expect(await hazards.getByRole('rowheader', { name: 'Corfidi downwind', exact: true }).locator('xpath=..').getByRole('cell').textContent()).toMatch(/^\d{3}° \d+/);
+  });
+
   it('When the surface dewpoint is raised by 2 K in the what-if editor, then CAPE rises and the delta is shown', async () => {
     const before = await indexNumber(page, 'SBCAPE');
     const dewpoint = page.getByLabel('Surface dewpoint (°C)');
@@ -97,6 +105,9 @@ describe('browser journey: a forecaster brings in a sounding and tries a what-if
     await expect.poll(() => table.getByText('Modified · Moister surface +2 K').count()).toBe(1);
     // The original and its what-if: a heading row plus two soundings.
     expect(await table.getByRole('row').count()).toBe(3);
+    await page.getByText('More figures').click();
+    await page.getByRole('checkbox', { name: /0–500 m storm-relative helicity/ }).check();
+    await expect.poll(() => table.getByRole('columnheader', { name: /0–500 m SRH/ }).count()).toBe(1);
     await expectAccessible(page, 'sounding library');
   });
 });
