@@ -27,7 +27,7 @@ export interface GuidanceFigure {
 
 const STP_BASIS = 'Thompson et al. 2003, Wea. Forecasting 18; Thompson et al. 2012, Wea. Forecasting 27';
 const SRH_BASIS = 'Coffer et al. 2019, Wea. Forecasting 34 (0–500 m SRH discriminates tornadic supercells better than 0–1 km SRH)';
-const HAIL_BASIS = 'Johnson and Sugden 2014, E-Journal Severe Storms Meteor. 9 (cited from memory; check against the paper)';
+const HAIL_BASIS = 'Johnson and Sugden 2014, E-Journal Severe Storms Meteor. 9 (5), "Evaluation of sounding-derived thermodynamic and wind-related parameters associated with large hail events"';
 const FLOOD_BASIS = 'ingredients approach of Doswell, Brooks and Maddox 1996, Wea. Forecasting 11';
 const CORFIDI_BASIS = 'Corfidi 2003, Wea. Forecasting 18 (slow system motion: set a maximum)';
 const WIND_BASIS = 'damaging-wind ingredient (common practice; no single published threshold, tune to the office climate)';
