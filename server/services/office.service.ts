@@ -1,5 +1,6 @@
 import { eq } from 'drizzle-orm';
-import type { BaseMap, OfficeSettings, OfficeSettingsInput } from '../../shared/contracts/office';
+import type { BaseMap, OfficeSettings, OfficeSettingsInput, SupportGuidance } from '../../shared/contracts/office';
+import { supportGuidanceFromStored } from '../../shared/evidence/guidance';
 import { appError, type AppError } from '../../shared/errors';
 import { err, ok, type Result } from '../../shared/result';
 import type { DatabaseOrTransaction } from '../db/client';
@@ -14,12 +15,17 @@ function toSettings(row: OfficeRow, baseMap: BaseMap): OfficeSettings {
     region: row.region,
     timeZone: row.timeZone,
     riskLadder: row.riskLadder,
-    guidanceThresholds: row.guidanceThresholds,
+    guidance: officeGuidance(row),
     allowSelfApproval: row.allowSelfApproval,
     version: row.version,
     updatedAt: row.updatedAt.toISOString(),
     baseMap,
   };
+}
+
+/** The office's support-check guidance: the stored rules, or the older thresholds converted, or the invented defaults. */
+export function officeGuidance(row: Pick<OfficeRow, 'supportGuidance' | 'guidanceThresholds'>): SupportGuidance {
+  return supportGuidanceFromStored(row.supportGuidance, row.guidanceThresholds);
 }
 
 /** The office this installation serves (one office per installation for now: the first one). */
@@ -41,13 +47,13 @@ export async function getOfficeSettings(db: DatabaseOrTransaction, baseMap: Base
 export async function updateOfficeSettings(db: DatabaseOrTransaction, input: OfficeSettingsInput, baseMap: BaseMap): Promise<Result<OfficeSettings, AppError>> {
   const current = await findOffice(db);
   if (!current) return err(appError('NOT_FOUND', 'No office is set up yet.'));
-  const { version, guidanceThresholds, allowSelfApproval, ...fields } = input;
+  const { version, guidance, allowSelfApproval, ...fields } = input;
   const ladderKeys = new Set(fields.riskLadder.map((l) => l.key));
-  const strayLevels = Object.keys(guidanceThresholds ?? {}).filter((key) => !ladderKeys.has(key));
+  const strayLevels = Object.keys(guidance?.levels ?? {}).filter((key) => !ladderKeys.has(key));
   if (strayLevels.length) {
     return err(
       appError('VALIDATION_FAILED', `Guidance is set for levels that are not on the ladder: ${strayLevels.join(', ')}.`, {
-        issues: strayLevels.map((key) => ({ path: `guidanceThresholds.${key}`, message: 'This level is not on the risk ladder.' })),
+        issues: strayLevels.map((key) => ({ path: `guidance.levels.${key}`, message: 'This level is not on the risk ladder.' })),
       }),
     );
   }
@@ -55,7 +61,7 @@ export async function updateOfficeSettings(db: DatabaseOrTransaction, input: Off
     .update(offices)
     .set({
       ...fields,
-      ...(guidanceThresholds ? { guidanceThresholds } : {}),
+      ...(guidance ? { supportGuidance: guidance } : {}),
       ...(allowSelfApproval !== undefined ? { allowSelfApproval } : {}),
       version: version + 1,
       updatedAt: new Date(),

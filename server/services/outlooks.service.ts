@@ -6,16 +6,16 @@ import { areaGeometrySchema, boundedAreaGeometrySchema, hazardFlagSchema, revisi
 import { isEditableState } from '../../shared/workflow/transitions';
 import { outlookStatePhrases } from '../../shared/workflow/states';
 import type { EvidenceSounding } from '../../shared/evidence/evidence';
-import { defaultGuidanceThresholds } from '../../shared/evidence/support-check';
-import type { GuidanceThresholds } from '../../shared/contracts/office';
+import { issuanceSnapshotSchema } from '../../shared/contracts/issuances';
+import type { RiskLadder, SupportGuidance } from '../../shared/contracts/office';
 import { MAX_VERTICES_PER_AREA } from '../../shared/geometry/limits';
 import { validPeriod } from '../../shared/time/valid-period';
 import { appError, type AppError, type FieldIssue } from '../../shared/errors';
 import { err, ok, type Result } from '../../shared/result';
 import type { Actor } from '../auth/require-role';
 import type { Database, DatabaseOrTransaction } from '../db/client';
-import { auditEvents, outlookRevisions, outlooks, riskAreas, soundings, users } from '../db/schema';
-import { findOffice } from './office.service';
+import { auditEvents, issuances, outlookRevisions, outlooks, riskAreas, soundings, users } from '../db/schema';
+import { findOffice, officeGuidance } from './office.service';
 import { keyFigures } from './soundings.service';
 import { runGeometryTask } from '../workers/geometry-pool';
 
@@ -327,15 +327,29 @@ export async function evidenceSoundings(db: DatabaseOrTransaction, validFrom: Da
   }]));
 }
 
+/**
+ * The guidance (and ladder) an outlook was checked against when it was last published, from its
+ * issuance snapshot; undefined while it was never published, or published before issue 14.
+ */
+async function publishedGuidance(db: DatabaseOrTransaction, outlookId: string): Promise<{ guidance: SupportGuidance; riskLadder: RiskLadder } | undefined> {
+  const [row] = await db.select({ snapshot: issuances.snapshot }).from(issuances).where(eq(issuances.outlookId, outlookId)).orderBy(desc(issuances.publishedAt)).limit(1);
+  if (!row) return undefined;
+  const snapshot = issuanceSnapshotSchema.safeParse(row.snapshot);
+  if (!snapshot.success || !snapshot.data.guidance) return undefined;
+  return { guidance: snapshot.data.guidance, riskLadder: snapshot.data.riskLadder };
+}
+
 /** The evidence panel of every area of an outlook (see buildEvidenceReport), computed in the worker pool. */
 export async function getOutlookEvidence(db: Database, outlookId: string, source?: 'observed' | 'model'): Promise<Result<OutlookEvidence, AppError>> {
   const outlook = await loadOutlook(db, outlookId);
   if (!outlook) return err(notFound());
   const office = await requireOffice(db);
   const candidates = await evidenceSoundings(db, new Date(outlook.validFrom), new Date(outlook.validUntil));
-  const guidance = Object.keys(office.guidanceThresholds).length ? office.guidanceThresholds : defaultGuidanceThresholds;
+  const published = await publishedGuidance(db, outlookId);
+  const guidance = published?.guidance ?? officeGuidance(office);
+  const ladder = published?.riskLadder ?? office.riskLadder;
   // Geometry checks and point-in-area tests run in the worker pool, off the event loop.
-  const report = await runGeometryTask({ kind: 'evidence-report', input: { outlook, candidates, ladder: office.riskLadder, guidance: guidance as GuidanceThresholds, region: office.region, source } });
+  const report = await runGeometryTask({ kind: 'evidence-report', input: { outlook, candidates, ladder, guidance, region: office.region, source } });
   if (!report.ok) return report;
   const areas = report.value;
   return ok({ areas, soundingCount: candidates.filter((s) => !s.modified && (!source || s.source === source)).length });

@@ -1,6 +1,6 @@
 import { eq } from 'drizzle-orm';
 import { defaultRiskLadder } from '../../shared/contracts/office';
-import { defaultGuidanceThresholds } from '../../shared/evidence/support-check';
+import { defaultSupportGuidance } from '../../shared/evidence/guidance';
 import type { Role } from '../../shared/contracts/common';
 import type { Auth } from '../auth/auth';
 import type { Config } from '../config';
@@ -51,7 +51,7 @@ export const demoOffice = {
 export async function ensureOffice(db: Database): Promise<void> {
   await db
     .insert(offices)
-    .values({ ...demoOffice, riskLadder: defaultRiskLadder, guidanceThresholds: defaultGuidanceThresholds })
+    .values({ ...demoOffice, riskLadder: defaultRiskLadder, supportGuidance: defaultSupportGuidance })
     .onConflictDoNothing({ target: offices.slug });
 }
 

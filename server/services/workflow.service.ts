@@ -1,7 +1,7 @@
 import { and, desc, eq, sql } from 'drizzle-orm';
 import type { IssuanceSnapshotInput } from '../../shared/contracts/issuances';
+import type { SupportGuidance } from '../../shared/contracts/office';
 import type { TransitionInput, TransitionResult, WorkflowAction } from '../../shared/contracts/workflow';
-import { defaultGuidanceThresholds } from '../../shared/evidence/support-check';
 import { checkTransition, transitions } from '../../shared/workflow/transitions';
 import { appError, type AppError } from '../../shared/errors';
 import { isInForce } from '../../shared/issuances/in-force';
@@ -11,7 +11,7 @@ import type { Database, Transaction } from '../db/client';
 import { auditEvents, issuanceCounters, issuances, outlooks, users } from '../db/schema';
 import type { Config } from '../config';
 import { enqueueDistribution, notifyDistributionQueued } from './distribution.service';
-import { findOffice } from './office.service';
+import { findOffice, officeGuidance } from './office.service';
 import { evidenceSoundings, getOutlook, reviewEditorIds } from './outlooks.service';
 import { runGeometryTask } from '../workers/geometry-pool';
 import { queueWebhookEvents } from './webhooks.service';
@@ -76,7 +76,7 @@ export async function transitionOutlook(
     let issuanceNumber: string | undefined;
     let issuanceId: string | undefined;
     if (action === 'publish') {
-      const issued = await writeIssuance(tx, config, office, outlookId, actor, hooks, evidence?.ok ? evidence.value.evidence : []);
+      const issued = await writeIssuance(tx, config, office, outlookId, actor, hooks, evidence?.ok ? evidence.value : { evidence: [], guidance: officeGuidance(office) });
       issuanceNumber = issued.number;
       issuanceId = issued.id;
       details.issuanceNumber = issued.number;
@@ -92,16 +92,17 @@ export async function transitionOutlook(
 type FrozenEvidence = IssuanceSnapshotInput['evidence'];
 
 /** The evidence frozen into an issuance: per area, sounding count, medians and support (worker pool). */
-async function publishedEvidence(db: Database, office: OfficeRow, outlookId: string): Promise<Result<{ version: number; evidence: FrozenEvidence }, AppError>> {
+async function publishedEvidence(db: Database, office: OfficeRow, outlookId: string): Promise<Result<{ version: number; evidence: FrozenEvidence; guidance: SupportGuidance }, AppError>> {
   const outlook = await getOutlook(db, outlookId);
   if (!outlook.ok) return outlook;
   const o = outlook.value;
-  const guidance = Object.keys(office.guidanceThresholds).length ? office.guidanceThresholds : defaultGuidanceThresholds;
+  const guidance = officeGuidance(office);
   const candidates = await evidenceSoundings(db, new Date(o.validFrom), new Date(o.validUntil));
   const report = await runGeometryTask({ kind: 'evidence-report', input: { outlook: o, candidates, ladder: office.riskLadder, guidance, region: office.region } });
   if (!report.ok) return report;
   return ok({
     version: o.version,
+    guidance,
     evidence: report.value.map((r) => ({
       areaId: r.areaId,
       levelKey: r.levelKey,
@@ -156,8 +157,11 @@ export async function nextIssuanceSequence(tx: Transaction, officeId: string, ye
 
 type OfficeRow = NonNullable<Awaited<ReturnType<typeof findOffice>>>;
 
-/** Writes the issuance: next number of the office's year, frozen snapshot with evidence and support. */
-async function writeIssuance(tx: Transaction, config: Config, office: OfficeRow, outlookId: string, actor: Actor, hooks: PublishHooks, evidence: FrozenEvidence) {
+/**
+ * Writes the issuance: next number of the office's year, frozen snapshot with evidence and
+ * support, and the guidance (`checked.guidance`) the support was checked against (issue 14).
+ */
+async function writeIssuance(tx: Transaction, config: Config, office: OfficeRow, outlookId: string, actor: Actor, hooks: PublishHooks, checked: { evidence: FrozenEvidence; guidance: SupportGuidance }) {
   const outlook = await getOutlook(tx, outlookId);
   if (!outlook.ok) throw new Error('outlook vanished while publishing');
   const o = outlook.value;
@@ -184,7 +188,8 @@ async function writeIssuance(tx: Transaction, config: Config, office: OfficeRow,
     discussion: o.discussion,
     hazardNotes: o.hazardNotes,
     areas: o.areas,
-    evidence,
+    evidence: checked.evidence,
+    guidance: checked.guidance,
     authorName: author?.name ?? null,
     approverName: approval?.name ?? null,
     publisherName: actor.name,

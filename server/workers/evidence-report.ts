@@ -2,7 +2,7 @@ import type { Region } from '../../shared/contracts/office';
 import type { Outlook } from '../../shared/contracts/outlooks';
 import { areaEvidence, soundingsInPeriod, type AreaEvidence, type EvidenceSounding } from '../../shared/evidence/evidence';
 import { checkSupport, type SupportCheck } from '../../shared/evidence/support-check';
-import type { GuidanceThresholds } from '../../shared/contracts/office';
+import type { SupportGuidance } from '../../shared/contracts/office';
 import { checkAreas, type AreaCheck } from '../../shared/geometry/area-checks';
 
 export interface AreaEvidenceReport {
@@ -17,7 +17,7 @@ export interface EvidenceReportInput {
   outlook: Pick<Outlook, 'areas' | 'validFrom' | 'validUntil'>;
   candidates: EvidenceSounding[];
   ladder: { key: string; label: string; colour: string; meaning: string }[];
-  guidance: GuidanceThresholds;
+  guidance: SupportGuidance;
   region: Region;
   source?: 'observed' | 'model' | undefined;
 }
@@ -41,6 +41,8 @@ export function buildEvidenceReport({ outlook, candidates, ladder, guidance, reg
   );
   return outlook.areas.map((area) => {
     const evidence = areaEvidence(area.id, area.geometry, pool);
-    return { areaId: area.id, levelKey: area.levelKey, evidence, support: checkSupport(evidence, area.levelKey, ladder, guidance), checks: checks[area.id] ?? [] };
+    const inside = new Set(evidence.soundingIds);
+    const support = checkSupport({ inside: pool.filter((s) => inside.has(s.id)), levelKey: area.levelKey, hazards: area.hazards, ladder, guidance });
+    return { areaId: area.id, levelKey: area.levelKey, evidence, support, checks: checks[area.id] ?? [] };
   });
 }

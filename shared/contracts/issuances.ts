@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { regionSchema, riskLevelSchema } from './office';
+import { regionSchema, riskLevelSchema, supportGuidanceSchema } from './office';
 
 /** The states of a published issuance: in force until superseded by an amendment or withdrawn. */
 export const issuanceStates = ['published', 'superseded', 'withdrawn'] as const;
@@ -33,6 +33,8 @@ export const issuanceSnapshotSchema = z.object({
   hazardNotes: z.record(z.string(), z.string()).default({}),
   areas: z.array(riskAreaSchema.partial({ sortOrder: true })),
   evidence: z.array(issuanceEvidenceSchema).default([]),
+  /** The support-check guidance the outlook was checked against when published (absent in issuances before issue 14). */
+  guidance: supportGuidanceSchema.optional(),
   authorName: z.string().nullable().default(null),
   approverName: z.string().nullable().default(null),
   publisherName: z.string().nullable().default(null),

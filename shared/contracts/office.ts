@@ -1,5 +1,7 @@
 import { z } from 'zod';
+import { keyFigureKeys } from '../sounding/key-figures';
 import { versionSchema } from './primitives';
+import { hazardKinds } from './risk-areas';
 
 const hexColour = z.string().regex(/^#[0-9a-fA-F]{6}$/, { message: 'Use a colour like #4a63c4.' });
 
@@ -56,24 +58,94 @@ export const timeZoneSchema = z
   .min(1, { message: 'A time zone is required.' })
   .refine(isTimeZone, { message: 'Use an IANA time zone such as America/Chicago.' });
 
-/** Parameters an office may set a guidance threshold for (minimum medians per level, SI units); labels and units in shared/evidence/support-check.ts. */
-export const thresholdParameterKeys = ['mlCape', 'muCape', 'bulkShear0to6kmMs', 'srh0to1km', 'stp', 'scp'] as const;
-export type ThresholdParameterKey = (typeof thresholdParameterKeys)[number];
+/** Most rules one level or one hazard form may hold. */
+export const MAX_RULES_PER_SET = 12;
+/** Most soundings a rule set may ask for before an area counts as supported. */
+export const MAX_MINIMUM_COUNT = 500;
 
-export const guidanceThresholdsSchema = z.record(
-  z.string(),
-  z.partialRecord(z.enum(thresholdParameterKeys), z.number({ message: 'Thresholds are numbers.' }).min(0, { message: 'Thresholds are 0 or more.' }).max(100_000)),
-);
-/** Per ladder key, the minimum median of each parameter expected at that level. */
-export type GuidanceThresholds = z.infer<typeof guidanceThresholdsSchema>;
+/**
+ * One rule of the office guidance: a key figure (SI units, as `soundingKeyFiguresSchema` names
+ * it) with a minimum ("at least") or a maximum ("at most"). A sounding meets the rule when its
+ * figure is on the allowed side of the value (equal counts as meeting it).
+ */
+export const guidanceRuleSchema = z.object({
+  figure: z.enum(keyFigureKeys, { message: 'Choose a key figure for this rule.' }),
+  bound: z.enum(['min', 'max'], { message: 'A rule is a minimum ("at least") or a maximum ("at most").' }),
+  value: z
+    .number({ message: 'The rule needs a number.' })
+    .refine(Number.isFinite, { message: 'The rule needs a finite number.' })
+    .pipe(z.number().min(-100_000, { message: 'Keep the value above −100,000.' }).max(100_000, { message: 'Keep the value under 100,000.' })),
+});
+export type GuidanceRule = z.infer<typeof guidanceRuleSchema>;
+
+/**
+ * The rules of one level (or one hazard form), checked jointly: a sounding backs them when it
+ * meets every rule at once. `minimumSharePercent` is the share of judged soundings that must
+ * back them (null: at least half); `minimumCount` is how many soundings must have every value
+ * the rules use before the area can count as supported.
+ */
+export const guidanceRuleSetSchema = z
+  .object({
+    rules: z.array(guidanceRuleSchema).max(MAX_RULES_PER_SET, { message: `At most ${MAX_RULES_PER_SET} rules per level or hazard.` }),
+    minimumSharePercent: z
+      .number({ message: 'The minimum share is a percentage.' })
+      .min(1, { message: 'The minimum share is between 1 and 100 %.' })
+      .max(100, { message: 'The minimum share is between 1 and 100 %.' })
+      .nullable()
+      .default(null),
+    minimumCount: z
+      .number({ message: 'The minimum count is a whole number of soundings.' })
+      .int({ message: 'The minimum count is a whole number of soundings.' })
+      .min(1, { message: 'The minimum count is at least 1 sounding.' })
+      .max(MAX_MINIMUM_COUNT, { message: `The minimum count is at most ${MAX_MINIMUM_COUNT} soundings.` })
+      .default(3),
+  })
+  .superRefine((set, context) => {
+    const seen = new Map<string, number>();
+    set.rules.forEach((rule, index) => {
+      const key = `${rule.figure}:${rule.bound}`;
+      if (seen.has(key)) context.addIssue({ code: 'custom', path: ['rules', index, 'figure'], message: `This ${rule.bound === 'min' ? 'minimum' : 'maximum'} is set twice for the same figure: keep one.` });
+      seen.set(key, index);
+    });
+    set.rules.forEach((rule, index) => {
+      if (rule.bound !== 'max') return;
+      const minimum = set.rules.find((other) => other.figure === rule.figure && other.bound === 'min');
+      if (minimum && minimum.value > rule.value) {
+        context.addIssue({ code: 'custom', path: ['rules', index, 'value'], message: 'This maximum is below the minimum set for the same figure, so no sounding could back the rules.' });
+      }
+    });
+  });
+export type GuidanceRuleSet = z.infer<typeof guidanceRuleSetSchema>;
+
+/** The rules of one hazard: its ordinary form and its "significant" form (either may be absent). */
+export const hazardGuidanceSchema = z.object({ ordinary: guidanceRuleSetSchema.optional(), significant: guidanceRuleSetSchema.optional() });
+export type HazardGuidance = z.infer<typeof hazardGuidanceSchema>;
+
+/**
+ * The office's support-check guidance: rules per ladder level key and per hazard. Figures,
+ * labels, published bases and the invented demo defaults are in shared/evidence/guidance.ts.
+ */
+export const supportGuidanceSchema = z.object({
+  levels: z.record(z.string(), guidanceRuleSetSchema).refine((levels) => Object.keys(levels).length <= 12, { message: 'Guidance is set for at most 12 levels.' }),
+  hazards: z.partialRecord(z.enum(hazardKinds), hazardGuidanceSchema).default({}),
+});
+export type SupportGuidance = z.infer<typeof supportGuidanceSchema>;
+export type SupportGuidanceInput = z.input<typeof supportGuidanceSchema>;
+
+/**
+ * Guidance stored before issue 14 (minimum medians per level). Read only: converted to
+ * minimum rules by `supportGuidanceFromStored` in shared/evidence/guidance.ts.
+ */
+export const legacyGuidanceThresholdsSchema = z.record(z.string(), z.record(z.string(), z.number()));
+export type LegacyGuidanceThresholds = z.infer<typeof legacyGuidanceThresholdsSchema>;
 
 export const officeSettingsInputSchema = z.object({
   name: z.string().trim().min(2, { message: 'The office name needs at least 2 characters.' }).max(120, { message: 'Keep the office name under 120 characters.' }),
   region: regionSchema,
   timeZone: timeZoneSchema,
   riskLadder: riskLadderSchema,
-  /** Support-check guidance per ladder key; left as it is when absent. */
-  guidanceThresholds: guidanceThresholdsSchema.optional(),
+  /** Support-check guidance (rules per level and per hazard); left as it is when absent. */
+  guidance: supportGuidanceSchema.optional(),
   /** Relaxes the four-eyes rule (one-person night shift); each use is audited. Left as it is when absent. */
   allowSelfApproval: z.boolean().optional(),
   /** Optimistic concurrency: the version the editor loaded. */
@@ -88,7 +160,7 @@ export type BaseMap = z.infer<typeof baseMapSchema>;
 export const officeSettingsSchema = officeSettingsInputSchema.extend({
   id: z.string(),
   updatedAt: z.string(),
-  guidanceThresholds: guidanceThresholdsSchema,
+  guidance: supportGuidanceSchema,
   allowSelfApproval: z.boolean(),
   /** Set by TILE_URL and TILE_ATTRIBUTION, not by admins. */
   baseMap: baseMapSchema,

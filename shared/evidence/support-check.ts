@@ -1,30 +1,7 @@
-import type { GuidanceThresholds, RiskLadder, ThresholdParameterKey } from '../contracts/office';
-import type { SupportCheckResult } from '../contracts/risk-areas';
-import type { AreaEvidence } from './evidence';
-
-/** Parameters an office may set a guidance threshold for; each is a minimum median expected for a level. */
-export const thresholdParameters = {
-  mlCape: { label: 'MLCAPE', unit: 'J/kg', digits: 0 },
-  muCape: { label: 'MUCAPE', unit: 'J/kg', digits: 0 },
-  bulkShear0to6kmMs: { label: '0–6 km shear', unit: 'm/s', digits: 0 },
-  srh0to1km: { label: '0–1 km SRH', unit: 'm²/s²', digits: 0 },
-  stp: { label: 'STP', unit: '', digits: 1 },
-  scp: { label: 'SCP', unit: '', digits: 1 },
-} as const satisfies Record<ThresholdParameterKey, { label: string; unit: string; digits: number }>;
-type ThresholdParameter = ThresholdParameterKey;
-
-/**
- * Invented default guidance for the demo office: a starting point that an admin tunes to the
- * office's climate. Not taken from any published scheme.
- */
-export const defaultGuidanceThresholds: GuidanceThresholds = {
-  thunder: { muCape: 100 },
-  level1: { mlCape: 250, bulkShear0to6kmMs: 10 },
-  level2: { mlCape: 1000, bulkShear0to6kmMs: 15 },
-  level3: { mlCape: 1500, bulkShear0to6kmMs: 20, srh0to1km: 100 },
-  level4: { mlCape: 2000, bulkShear0to6kmMs: 25, srh0to1km: 200, stp: 2 },
-  level5: { mlCape: 3000, bulkShear0to6kmMs: 30, srh0to1km: 300, stp: 4 },
-};
+import type { GuidanceRule, GuidanceRuleSet, RiskLadder, SupportGuidance } from '../contracts/office';
+import type { HazardKind, RiskArea, RuleJudgement, SupportCheckResult } from '../contracts/risk-areas';
+import type { EvidenceSounding } from './evidence';
+import { DEFAULT_MINIMUM_SHARE_PERCENT, describeMiss, describeRule, hazardFormLabel } from './guidance';
 
 export type SupportResult = 'supported' | 'thin' | 'exceeds' | 'none';
 
@@ -36,52 +13,164 @@ export const supportResultLabels: Record<SupportResult, string> = {
 };
 
 export type SupportCheck = SupportCheckResult;
+export type HazardFlag = Pick<RiskArea['hazards'][number], 'hazard' | 'significant'>;
 
-const noIds = { backing: [], failing: [], lacking: [], hazards: [] };
+/** When no rules are set for a level or hazard form, this many soundings inside make it supported. */
+const MINIMUM_COUNT_WITHOUT_RULES = 3;
 
-/** Fewer soundings than this inside an area make the support thin, whatever their values. */
-export const minimumSoundingsForSupport = 3;
-
-function formatValue(parameter: ThresholdParameter, value: number): string {
-  const { unit, digits } = thresholdParameters[parameter];
-  const text = value.toLocaleString('en-US', { minimumFractionDigits: digits, maximumFractionDigits: digits });
-  return unit ? `${text} ${unit}` : text;
-}
-
-function compare(evidence: AreaEvidence, thresholds: Partial<Record<ThresholdParameter, number>>) {
-  const met: string[] = [];
-  const missed: string[] = [];
-  for (const [key, threshold] of Object.entries(thresholds) as [ThresholdParameter, number][]) {
-    const median = evidence.stats[key]?.median;
-    const name = thresholdParameters[key].label;
-    if (median === undefined) missed.push(`no ${name} values inside`);
-    else if (median >= threshold) met.push(`median ${name} ${formatValue(key, median)} meets the ${formatValue(key, threshold)}`);
-    else missed.push(`median ${name} ${formatValue(key, median)}, below the ${formatValue(key, threshold)}`);
-  }
-  return { met, missed };
+/** How the soundings inside stood against one rule set. */
+interface Tally {
+  backing: string[];
+  failing: string[];
+  lacking: string[];
+  /** Per rule: how many failing soundings miss it. */
+  missCount: number[];
+  /** Per rule: how many lacking soundings have no value for it. */
+  lackCount: number[];
 }
 
 /**
- * Compares an area's evidence with the office guidance for its level. Advisory: the result and
- * its reasons in words; it never blocks saving or publishing.
+ * Judges each sounding against every rule at once. A sounding that misses any rule it has a
+ * value for fails; one that misses none but lacks a value some rule uses is counted apart as
+ * lacking; the others back the rules.
  */
-export function checkSupport(evidence: AreaEvidence, levelKey: string, ladder: RiskLadder, guidance: GuidanceThresholds): SupportCheck {
+function tally(inside: readonly EvidenceSounding[], rules: readonly GuidanceRule[]): Tally {
+  const ruleCount = rules.length;
+  const missCount = new Array<number>(ruleCount).fill(0);
+  const lackCount = new Array<number>(ruleCount).fill(0);
+  const backing: string[] = [];
+  const failing: string[] = [];
+  const lacking: string[] = [];
+  for (const sounding of inside) {
+    const figures = sounding.figures;
+    let failed = false;
+    let lacked = false;
+    for (let i = 0; i < ruleCount; i++) {
+      const rule = rules[i] as GuidanceRule; // i < ruleCount
+      const value = figures[rule.figure];
+      if (value === null || value === undefined || !Number.isFinite(value)) lacked = true;
+      else if (rule.bound === 'min' ? value < rule.value : value > rule.value) {
+        failed = true;
+        missCount[i] = (missCount[i] ?? 0) + 1;
+      }
+    }
+    if (failed) failing.push(sounding.id);
+    else if (lacked) {
+      lacking.push(sounding.id);
+      for (let i = 0; i < ruleCount; i++) {
+        const value = figures[(rules[i] as GuidanceRule).figure];
+        if (value === null || value === undefined || !Number.isFinite(value)) lackCount[i] = (lackCount[i] ?? 0) + 1;
+      }
+    } else backing.push(sounding.id);
+  }
+  return { backing, failing, lacking, missCount, lackCount };
+}
+
+type Verdict = { result: 'supported' | 'thin'; why: 'count' | 'share' | 'met'; judged: number; needPercent: number; needCount: number };
+
+/** Supported when enough soundings have the values used and a large enough share of them back the rules. */
+function verdict(t: Tally, set: GuidanceRuleSet): Verdict {
+  const judged = t.backing.length + t.failing.length;
+  const needPercent = set.minimumSharePercent ?? DEFAULT_MINIMUM_SHARE_PERCENT;
+  const needCount = set.minimumCount;
+  if (judged < needCount) return { result: 'thin', why: 'count', judged, needPercent, needCount };
+  if (t.backing.length * 100 < needPercent * judged) return { result: 'thin', why: 'share', judged, needPercent, needCount };
+  return { result: 'supported', why: 'met', judged, needPercent, needCount };
+}
+
+const plural = (count: number, one: string, many: string) => `${count} ${count === 1 ? one : many}`;
+
+/** "2 fall short (MLCIN stronger than −100 J/kg: 2; MLCAPE below 1,500 J/kg: 1)". */
+function countedRules(rules: readonly GuidanceRule[], counts: readonly number[], describe: (rule: GuidanceRule) => string): string {
+  return rules
+    .map((rule, index) => ({ text: describe(rule), count: counts[index] ?? 0 }))
+    .filter((entry) => entry.count > 0)
+    .sort((a, b) => b.count - a.count)
+    .map((entry) => `${entry.text}: ${entry.count}`)
+    .join('; ');
+}
+
+/** The first reason: how many back the rules, how many fall short and why, how many lack a value and which. */
+function countsSentence(t: Tally, rules: readonly GuidanceRule[], total: number, name: string): string {
+  const parts = [`${t.backing.length} of ${plural(total, 'sounding', 'soundings')} ${t.backing.length === 1 ? 'backs' : 'back'} ${name}`];
+  if (t.failing.length > 0) parts.push(`${t.failing.length} ${t.failing.length === 1 ? 'falls' : 'fall'} short (${countedRules(rules, t.missCount, describeMiss)})`);
+  if (t.lacking.length > 0) {
+    const lackedRules = rules.filter((_, index) => (t.lackCount[index] ?? 0) > 0);
+    const only = lackedRules.length === 1 ? lackedRules[0] : undefined;
+    parts.push(only ? `${t.lacking.length} lack ${describeRule(only)}` : `${t.lacking.length} lack a value the rules use (${countedRules(rules, t.lackCount, describeRule)})`);
+  }
+  return parts.join('; ');
+}
+
+function conclusion(v: Verdict, t: Tally, name: string): string {
+  const percent = v.judged === 0 ? 0 : Math.round((t.backing.length * 100) / v.judged);
+  switch (v.why) {
+    case 'count':
+      return `only ${plural(v.judged, 'sounding has', 'soundings have')} every value ${name}'s rules use; ${v.needCount} needed: thin support`;
+    case 'share':
+      return `${percent}% of the ${plural(v.judged, 'sounding', 'soundings')} with values back ${name}; ${v.needPercent}% needed: thin support`;
+    case 'met':
+      return `${percent}% of the ${plural(v.judged, 'sounding', 'soundings')} with values back ${name} (${v.needPercent}% needed)`;
+  }
+}
+
+interface Judged {
+  judgement: RuleJudgement;
+  verdict: Verdict | null;
+}
+
+/** One rule set's judgement of the soundings inside; `set` undefined: no rules are set for it. */
+function judge(inside: readonly EvidenceSounding[], set: GuidanceRuleSet | undefined, name: string): Judged {
+  if (inside.length === 0) {
+    return { judgement: { result: 'none', reasons: ['No soundings valid in the outlook period lie inside this area.'], backing: [], failing: [], lacking: [] }, verdict: null };
+  }
+  if (!set || set.rules.length === 0) {
+    const needCount = set?.minimumCount ?? MINIMUM_COUNT_WITHOUT_RULES;
+    const enough = inside.length >= needCount;
+    const reason = `No rules are set for ${name}: ${plural(inside.length, 'sounding', 'soundings')} inside${enough ? '' : `; ${needCount} needed: thin support`}`;
+    return { judgement: { result: enough ? 'supported' : 'thin', reasons: [reason], backing: inside.map((s) => s.id), failing: [], lacking: [] }, verdict: null };
+  }
+  const t = tally(inside, set.rules);
+  const v = verdict(t, set);
+  return {
+    judgement: { result: v.result, reasons: [countsSentence(t, set.rules, inside.length, name), conclusion(v, t, name)], backing: t.backing, failing: t.failing, lacking: t.lacking },
+    verdict: v,
+  };
+}
+
+/** Whether a stronger rule set (the next level, the significant form) is supported too, with its reason. */
+function exceeded(inside: readonly EvidenceSounding[], base: Judged, stronger: GuidanceRuleSet | undefined, strongerName: string, baseName: string): Judged {
+  if (base.judgement.result !== 'supported' || !stronger || stronger.rules.length === 0) return base;
+  const t = tally(inside, stronger.rules);
+  if (verdict(t, stronger).result !== 'supported') return base;
+  const reason = `${t.backing.length} of ${plural(inside.length, 'sounding', 'soundings')} also ${t.backing.length === 1 ? 'backs' : 'back'} ${strongerName}: the environment exceeds ${baseName}`;
+  return { ...base, judgement: { ...base.judgement, result: 'exceeds', reasons: [...base.judgement.reasons, reason] } };
+}
+
+/**
+ * The support check of one area: each sounding inside is judged against every rule of the
+ * area's level at once (it backs the level, falls short of a rule, or lacks a value a rule
+ * uses); the area is supported when enough soundings have the values used and a large enough
+ * share of them back the level, and the environment exceeds the level when the next level is
+ * supported too. Each hazard flag is judged the same way against its hazard's rules (its
+ * ordinary or significant form). Advisory: it never blocks saving or publishing. Pure and
+ * allocation-light: runs on the server and in the browser while a vertex moves.
+ */
+export function checkSupport(input: { inside: EvidenceSounding[]; levelKey: string; hazards: HazardFlag[]; ladder: RiskLadder; guidance: SupportGuidance }): SupportCheck {
+  const { inside, levelKey, hazards, ladder, guidance } = input;
   const index = ladder.findIndex((l) => l.key === levelKey);
-  const level = ladder[index];
-  const levelName = level?.label ?? levelKey;
-  if (evidence.count === 0) return { ...noIds, result: 'none', reasons: ['No soundings valid in the outlook period lie inside this area.'] };
-  const thresholds = guidance[levelKey] ?? {};
-  const { met, missed } = compare(evidence, thresholds);
-  if (missed.length > 0) return { ...noIds, result: 'thin', reasons: missed.map((m) => `${m} expected for ${levelName}`) };
-  if (evidence.count < minimumSoundingsForSupport) {
-    return { ...noIds, result: 'thin', reasons: [`only ${evidence.count} sounding${evidence.count === 1 ? '' : 's'} inside; ${minimumSoundingsForSupport} or more make the evidence firmer`] };
-  }
-  const next = ladder[index + 1];
-  const nextThresholds = next ? guidance[next.key] : undefined;
-  if (next && nextThresholds && Object.keys(nextThresholds).length > 0) {
-    const above = compare(evidence, nextThresholds);
-    if (above.missed.length === 0) return { ...noIds, result: 'exceeds', reasons: above.met.map((m) => `${m} expected for ${next.label}`) };
-  }
-  if (met.length === 0) return { ...noIds, result: 'supported', reasons: [`${evidence.count} soundings inside; no guidance thresholds are set for ${levelName}`] };
-  return { ...noIds, result: 'supported', reasons: met.map((m) => `${m} expected for ${levelName}`) };
+  const levelName = ladder[index]?.label ?? levelKey;
+  const next = index >= 0 ? ladder[index + 1] : undefined;
+  let level = judge(inside, guidance.levels[levelKey], levelName);
+  if (next) level = exceeded(inside, level, guidance.levels[next.key], next.label, levelName);
+  return {
+    ...level.judgement,
+    hazards: hazards.map(({ hazard, significant }) => {
+      const forms = guidance.hazards[hazard as HazardKind];
+      const name = hazardFormLabel(hazard, significant);
+      let judged = judge(inside, significant ? forms?.significant : forms?.ordinary, name);
+      if (!significant) judged = exceeded(inside, judged, forms?.significant, hazardFormLabel(hazard, true), name);
+      return { ...judged.judgement, hazard, significant };
+    }),
+  };
 }

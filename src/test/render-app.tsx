@@ -20,7 +20,7 @@ export const demoOffice: OfficeSettings = {
   region: { west: -96.5, south: 35.5, east: -87.5, north: 41.5 },
   timeZone: 'America/Chicago',
   riskLadder: defaultRiskLadder,
-  guidanceThresholds: {},
+  guidance: { levels: {}, hazards: {} },
   allowSelfApproval: false,
   version: 3,
   updatedAt: '2026-12-01T12:00:00.000Z',

@@ -40,7 +40,7 @@ afterAll(async () => {
 const fieldNames = [
   'version', 'headline', 'discussion', 'hazardNotes', 'validFrom', 'validUntil', 'areas', 'day', 'issuanceTime', 'q', 'date', 'page', 'pageSize',
   'state', 'reason', 'comment', 'body', 'riskAreaId', 'units', 'emails', 'alertThreshold', 'hazards', 'days', 'paused', 'kind', 'fipsCode', 'geometry',
-  'name', 'email', 'password', 'role', 'disabled', 'geojson', 'region', 'timeZone', 'riskLadder', 'guidanceThresholds', 'allowSelfApproval', 'source',
+  'name', 'email', 'password', 'role', 'disabled', 'geojson', 'region', 'timeZone', 'riskLadder', 'guidance', 'allowSelfApproval', 'source',
   'token', 'soundings', 'stationId', 'validTime', 'levels', 'surface', 'id', 'levelKey', 'label', 'coordinates', 'type', 'significant', 'hazard',
 ];
 

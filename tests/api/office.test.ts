@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type TestAgent from 'supertest/lib/agent';
 import type { Stormdraft } from '../../server/start';
+import { offices } from '../../server/db/schema';
 import { signedInAgent, startTestApp } from './helpers/test-app';
 
 let sd: Stormdraft;
@@ -69,25 +70,77 @@ describe('PUT /api/office', () => {
   });
 });
 
-describe('guidance thresholds and the four-eyes setting', () => {
-  it('When an admin sets thresholds and relaxes four-eyes, then both are stored and read back', async () => {
+describe('support-check guidance (issue 14) and the four-eyes setting', () => {
+  const base = async () => {
     const current = (await admin.get('/api/office')).body;
-    expect(current.guidanceThresholds.level3.mlCape).toBeGreaterThan(0);
-    const guidanceThresholds = { ...current.guidanceThresholds, level3: { mlCape: 1800, srh0to1km: 120 } };
-    const res = await admin.put('/api/office').send({ name: current.name, region: current.region, timeZone: current.timeZone, riskLadder: current.riskLadder, guidanceThresholds, allowSelfApproval: true, version: current.version });
-    expect(res.status).toBe(200);
-    expect(res.body.guidanceThresholds.level3).toEqual({ mlCape: 1800, srh0to1km: 120 });
-    expect(res.body.allowSelfApproval).toBe(true);
+    return { name: current.name, region: current.region, timeZone: current.timeZone, riskLadder: current.riskLadder, version: current.version };
+  };
+  const invalidPaths = async (guidance: unknown) => {
+    const res = await admin.put('/api/office').send({ ...(await base()), guidance });
+    expect(res.status).toBe(400);
+    return res.body.error.issues.map((i: { path: string }) => i.path);
+  };
+
+  it('When the demo office is read, then it carries the invented default rules per level and per hazard', async () => {
+    const { guidance } = (await admin.get('/api/office')).body;
+    expect(guidance.levels.level3.rules).toContainEqual({ figure: 'mlCin', bound: 'min', value: -100 });
+    expect(guidance.hazards.flood.ordinary.rules).toContainEqual({ figure: 'corfidiUpwindMs', bound: 'max', value: 8 });
   });
 
-  it('When a threshold is negative or names a level not on the ladder, then 400 names it', async () => {
+  it('When an admin sets rules with a maximum, a share and a count, and relaxes four-eyes, then all are stored and read back', async () => {
     const current = (await admin.get('/api/office')).body;
-    const base = { name: current.name, region: current.region, timeZone: current.timeZone, riskLadder: current.riskLadder, version: current.version };
-    const negative = await admin.put('/api/office').send({ ...base, guidanceThresholds: { level1: { mlCape: -5 } } });
-    expect(negative.status).toBe(400);
-    expect(negative.body.error.issues[0].path).toBe('guidanceThresholds.level1.mlCape');
-    const stray = await admin.put('/api/office').send({ ...base, guidanceThresholds: { level9: { mlCape: 5 } } });
+    const level3 = { rules: [{ figure: 'mlCape', bound: 'min', value: 1800 }, { figure: 'mlCin', bound: 'min', value: -75 }], minimumSharePercent: 60, minimumCount: 4 };
+    const tornado = { significant: { rules: [{ figure: 'mlLclHeightM', bound: 'max', value: 900 }], minimumSharePercent: null, minimumCount: 3 } };
+    const guidance = { levels: { ...current.guidance.levels, level3 }, hazards: { tornado } };
+    const res = await admin.put('/api/office').send({ ...(await base()), guidance, allowSelfApproval: true });
+    expect(res.status).toBe(200);
+    const read = (await admin.get('/api/office')).body;
+    expect(read.guidance.levels.level3).toEqual(level3);
+    expect(read.guidance.hazards).toEqual({ tornado });
+    expect(read.allowSelfApproval).toBe(true);
+  });
+
+  it('When a rule value is not a number, a figure is unknown or a bound is odd, then 400 names each field', async () => {
+    const paths = await invalidPaths({
+      levels: { level1: { rules: [{ figure: 'mlCape', bound: 'min', value: 'lots' }] } },
+      hazards: { hail: { ordinary: { rules: [{ figure: 'hailSize', bound: 'min', value: 2 }, { figure: 'dcape', bound: 'around', value: 2 }] } } },
+    });
+    expect(paths).toEqual(expect.arrayContaining(['guidance.levels.level1.rules.0.value', 'guidance.hazards.hail.ordinary.rules.0.figure', 'guidance.hazards.hail.ordinary.rules.1.bound']));
+  });
+
+  it('When a maximum is below the minimum of the same figure, or the share or count is out of range, then 400 names the field', async () => {
+    const paths = await invalidPaths({
+      levels: { level2: { rules: [{ figure: 'mlCape', bound: 'min', value: 500 }, { figure: 'mlCape', bound: 'max', value: 100 }], minimumSharePercent: 150, minimumCount: 0 } },
+    });
+    expect(paths).toEqual(expect.arrayContaining(['guidance.levels.level2.rules.1.value', 'guidance.levels.level2.minimumSharePercent', 'guidance.levels.level2.minimumCount']));
+  });
+
+  it('When guidance names a level not on the ladder or a hazard that does not exist, then 400 names it', async () => {
+    const stray = await admin.put('/api/office').send({ ...(await base()), guidance: { levels: { level9: { rules: [] } } } });
     expect(stray.status).toBe(400);
-    expect(stray.body.error.issues[0].path).toBe('guidanceThresholds.level9');
+    expect(stray.body.error.issues[0].path).toBe('guidance.levels.level9');
+    const hurricane = await admin.put('/api/office').send({ ...(await base()), guidance: { levels: {}, hazards: { hurricane: { ordinary: { rules: [] } } } } });
+    expect(hurricane.status).toBe(400);
+    expect(hurricane.body.error.issues[0]).toEqual({ path: 'guidance.hazards', message: expect.stringMatching(/hurricane/) });
+  });
+
+  it('When a forecaster or a lead sends guidance, then 403 and nothing changes', async () => {
+    const before = (await admin.get('/api/office')).body;
+    for (const role of ['forecaster', 'lead'] as const) {
+      const agent = await signedInAgent(sd.app, role);
+      const res = await agent.put('/api/office').send({ ...(await base()), guidance: { levels: {}, hazards: {} } });
+      expect(res.status).toBe(403);
+    }
+    expect((await admin.get('/api/office')).body.guidance).toEqual(before.guidance);
+  });
+
+  it('When an office row holds only the thresholds stored before issue 14, then they are read as minimum rules', async () => {
+    await sd.ctx.db.update(offices).set({ supportGuidance: null, guidanceThresholds: { level2: { mlCape: 1200, bulkShear0to6kmMs: 18 } } });
+    const { guidance } = (await admin.get('/api/office')).body;
+    expect(guidance.levels.level2.rules).toEqual([
+      { figure: 'mlCape', bound: 'min', value: 1200 },
+      { figure: 'bulkShear0to6kmMs', bound: 'min', value: 18 },
+    ]);
+    expect(Object.keys(guidance.hazards)).toEqual(['tornado', 'hail', 'wind', 'flood']);
   });
 });

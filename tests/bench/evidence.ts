@@ -2,7 +2,7 @@ import { defaultRiskLadder } from '../../shared/contracts/office';
 import type { RiskArea } from '../../shared/contracts/outlooks';
 import { emptyKeyFigures } from '../../shared/sounding/key-figures';
 import type { EvidenceSounding } from '../../shared/evidence/evidence';
-import { defaultGuidanceThresholds } from '../../shared/evidence/support-check';
+import { defaultSupportGuidance } from '../../shared/evidence/guidance';
 import { buildEvidenceReport } from '../../server/workers/evidence-report';
 import { demoOutlookAreas } from '../../server/seed/demo-outlook';
 import { demoOffice } from '../../server/services/seed.service';
@@ -39,7 +39,7 @@ export const evidenceSixAreas: BenchFigure = {
     if (!core) throw new Error('evidence bench: the demo outlook has no areas');
     const areas: RiskArea[] = [...demoOutlookAreas, { ...core, levelKey: 'level4' }].map((a, i) => ({ ...a, id: `a${i}`, sortOrder: i }));
     const outlook = { areas, validFrom: '2027-04-18T12:00:00.000Z', validUntil: '2027-04-19T11:00:00.000Z' };
-    const run = () => buildEvidenceReport({ outlook, candidates: soundings, ladder: defaultRiskLadder, guidance: defaultGuidanceThresholds, region: demoOffice.region });
+    const run = () => buildEvidenceReport({ outlook, candidates: soundings, ladder: defaultRiskLadder, guidance: defaultSupportGuidance, region: demoOffice.region });
     for (let i = 0; i < 3; i++) run();
     const times: number[] = [];
     for (let i = 0; i < 21; i++) {

@@ -6,7 +6,7 @@ import { defaultRiskLadder } from '../../shared/contracts/office';
 import type { AreaGeometry, RiskArea } from '../../shared/contracts/outlooks';
 import { emptyKeyFigures } from '../../shared/sounding/key-figures';
 import type { EvidenceSounding } from '../../shared/evidence/evidence';
-import { defaultGuidanceThresholds } from '../../shared/evidence/support-check';
+import { defaultSupportGuidance } from '../../shared/evidence/guidance';
 import { loadConfig } from '../../server/config';
 import { areasOfInterest, distributionJobs, issuances, offices, subscriptions, users } from '../../server/db/schema';
 import { demoOutlookAreas } from '../../server/seed/demo-outlook';
@@ -58,7 +58,7 @@ export const evidenceTenThousandVertices: BenchFigure = {
       { id: 'inner', levelKey: 'level1', hazards: [], geometry: wavyArea(1_000, centre, 1.2), label: '', sortOrder: 1 },
     ];
     const outlook = { areas, validFrom: '2027-04-18T12:00:00.000Z', validUntil: '2027-04-19T11:00:00.000Z' };
-    const run = () => buildEvidenceReport({ outlook, candidates: soundings, ladder: defaultRiskLadder, guidance: defaultGuidanceThresholds, region: demoOffice.region });
+    const run = () => buildEvidenceReport({ outlook, candidates: soundings, ladder: defaultRiskLadder, guidance: defaultSupportGuidance, region: demoOffice.region });
     run();
     const times: number[] = [];
     for (let i = 0; i < 5; i++) {

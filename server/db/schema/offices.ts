@@ -1,5 +1,5 @@
 import { boolean, integer, jsonb, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
-import type { GuidanceThresholds, Region, RiskLadder } from '../../../shared/contracts/office';
+import type { LegacyGuidanceThresholds, Region, RiskLadder, SupportGuidance } from '../../../shared/contracts/office';
 
 /**
  * One forecast office and its settings. The risk ladder is read from here by the whole app.
@@ -12,7 +12,13 @@ export const offices = pgTable('offices', {
   region: jsonb().$type<Region>().notNull(),
   timeZone: text().notNull(),
   riskLadder: jsonb().$type<RiskLadder>().notNull(),
-  guidanceThresholds: jsonb().$type<GuidanceThresholds>().notNull().default({}),
+  /**
+   * Minimum medians per level, as stored before issue 14. Read only: when `supportGuidance` is
+   * null they are converted to minimum rules on read (supportGuidanceFromStored).
+   */
+  guidanceThresholds: jsonb().$type<LegacyGuidanceThresholds>().notNull().default({}),
+  /** Support-check rules per level and per hazard (issue 14); null until first saved. */
+  supportGuidance: jsonb().$type<SupportGuidance>(),
   /** Four-eyes rule relaxed (one-person night shift); every use is written to the audit trail. */
   allowSelfApproval: boolean().notNull().default(false),
   version: integer().notNull().default(0),

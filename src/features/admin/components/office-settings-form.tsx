@@ -5,13 +5,15 @@ import { TextField } from '../../../components/ui/field';
 import { Notice } from '../../../components/ui/notice';
 import { Panel } from '../../../components/ui/panel';
 import { officeQueryOptions } from '../../../hooks/use-office';
+import { useUnits } from '../../../hooks/use-units';
 import { isApiError, type FieldErrors } from '../../../lib/api-client';
 import { officeSettingsInputSchema, type OfficeSettings, type OfficeSettingsInput } from '../../../../shared/contracts/office';
 import { formFailureFrom, parseForm } from '../../../utils/form';
 import { readClock } from '../../../utils/time';
 import { useUpdateOffice } from '../api/update-office';
 import { toEditableLadder, toRiskLadder, type EditableLevel } from '../utils/risk-ladder-edits';
-import { GuidanceEditor, guidanceToText, textToGuidance, type GuidanceText } from './guidance-editor';
+import { draftToGuidance, guidanceToDraft, type GuidanceDraft } from '../utils/guidance-draft';
+import { GuidanceEditor } from './guidance-editor';
 import { RiskLadderEditor } from './risk-ladder-editor';
 
 type RegionSide = 'west' | 'south' | 'east' | 'north';
@@ -46,7 +48,7 @@ function regionFromText(text: Record<RegionSide, string>): { values: Record<Regi
 
 /** Fields without a place of their own in the form are listed at the top. */
 function unplacedErrors(errors: FieldErrors): string[] {
-  const placed = /^(name|timeZone|region\.(west|south|east|north)|riskLadder(\.\d+\.(key|label|colour|meaning))?|guidanceThresholds\.[^.]+\.[^.]+)$/;
+  const placed = /^(name|timeZone|region\.(west|south|east|north)|riskLadder(\.\d+\.(key|label|colour|meaning))?|guidance\.(levels\.[^.]+|hazards\.[^.]+\.[^.]+)(\.rules(\.\d+\.(figure|bound|value))?|\.minimumSharePercent|\.minimumCount)?)$/;
   return Object.entries(errors)
     .filter(([path]) => !placed.test(path))
     .map(([path, message]) => (path === '' ? message : `${path}: ${message}`));
@@ -70,7 +72,10 @@ export function OfficeSettingsForm({ office, onReset }: OfficeSettingsFormProps)
     north: String(office.region.north),
   });
   const [rows, setRows] = useState<EditableLevel[]>(() => toEditableLadder(office.riskLadder));
-  const [guidance, setGuidance] = useState<GuidanceText>(() => guidanceToText(office.guidanceThresholds));
+  const { units } = useUnits();
+  // The draft is built once in the units shown when the form opened, so they cannot drift under typed values.
+  const [guidanceUnits] = useState(units);
+  const [guidance, setGuidance] = useState<GuidanceDraft>(() => guidanceToDraft(office.guidance, guidanceUnits));
   const [allowSelfApproval, setAllowSelfApproval] = useState(office.allowSelfApproval);
   // The version this editor started from. Background refetches must not move it, or a save
   // would silently overwrite someone else's change instead of answering 409.
@@ -87,9 +92,10 @@ export function OfficeSettingsForm({ office, onReset }: OfficeSettingsFormProps)
       timeZone,
       region: regionParsed.values,
       riskLadder: toRiskLadder(rows),
-      guidanceThresholds: textToGuidance(
+      guidance: draftToGuidance(
         guidance,
         rows.map((r) => r.key),
+        guidanceUnits,
       ),
       allowSelfApproval,
       version,
@@ -245,8 +251,8 @@ export function OfficeSettingsForm({ office, onReset }: OfficeSettingsFormProps)
         />
       </Panel>
 
-      <Panel title="Guidance thresholds" description="The median each level should reach inside an area. The support check compares every area's soundings with its level's row.">
-        <GuidanceEditor levels={rows} value={guidance} onChange={setGuidance} errors={errors} />
+      <Panel title="Support-check guidance" description="The rules each sounding inside an area must meet, all at once, to back the area's level and each hazard flagged on it.">
+        <GuidanceEditor levels={rows} value={guidance} onChange={setGuidance} errors={errors} units={guidanceUnits} />
       </Panel>
 
       <Panel title="Review" description="Who may approve a draft.">

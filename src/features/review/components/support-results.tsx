@@ -1,4 +1,5 @@
 import { clsx } from 'clsx';
+import { hazardFormLabel } from '../../../../shared/evidence/guidance';
 import { supportResultLabels, type SupportResult } from '../../../../shared/evidence/support-check';
 import type { OfficeSettings } from '../../../../shared/contracts/office';
 import type { Outlook } from '../../../../shared/contracts/outlooks';
@@ -35,6 +36,17 @@ export function SupportResults({ reports, areas, ladder }: { reports: readonly A
               <ul className="mt-1 list-disc pl-5 text-[13px] text-ink-muted">
                 {report.support.reasons.map((reason) => (
                   <li key={reason}>{reason}</li>
+                ))}
+              </ul>
+            ) : null}
+            {report.support.hazards.length ? (
+              <ul className="mt-1.5 space-y-1 border-l-2 border-line pl-3" aria-label={`Hazard checks${area?.label ? ` of ${area.label}` : ''}`}>
+                {report.support.hazards.map((judgement) => (
+                  <li key={`${judgement.hazard}-${judgement.significant}`}>
+                    <span className="font-medium first-letter:uppercase">{hazardFormLabel(judgement.hazard, judgement.significant)}</span>{' '}
+                    <span className={clsx('rounded px-1.5 py-0.5 text-xs font-semibold', resultStyle[judgement.result])}>{supportResultLabels[judgement.result]}</span>
+                    {judgement.reasons.length ? <span className="block text-[13px] text-ink-muted">{judgement.reasons.join('. ')}</span> : null}
+                  </li>
                 ))}
               </ul>
             ) : null}

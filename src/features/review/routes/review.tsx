@@ -152,7 +152,7 @@ export function ReviewPage() {
             <ChangeSummary diff={diff} ladder={ladder} baselineName={baseline.name} />
           </Panel>
 
-          <Panel title="Support check" description="Soundings inside each area against the office guidance for its level.">
+          <Panel title="Support check" description="Each sounding inside an area against every rule of its level and of each hazard flagged on it, as the server checked them (a published outlook: against the guidance stored with its issuance).">
             {evidence.isError ? <Notice tone="error">{evidence.error.message}</Notice> : null}
             {evidence.data ? <SupportResults reports={evidence.data.areas} areas={draft.areas} ladder={ladder} /> : <Loading label="Checking the evidence…" />}
           </Panel>
