@@ -40,6 +40,12 @@ export function pseudoAdiabaticLapseRate(pressureHpa: number, temperatureK: numb
 }
 
 /**
+ * RK4 steps taken by {@link moistAdiabatTemperature} since the process started: lets tests
+ * check that work outside the table stays bounded (read the difference across a call).
+ */
+export const rk4Work = { steps: 0 };
+
+/**
  * Temperature after following the pseudo-adiabat from one pressure to another: the reference
  * integration (fourth-order Runge–Kutta).
  *
@@ -61,6 +67,7 @@ export function moistAdiabatTemperature(
 ): number {
   const span = endPressureHpa - startPressureHpa;
   const steps = Math.max(1, Math.ceil(Math.abs(span) / maxStepHpa));
+  rk4Work.steps += steps;
   const step = span / steps;
   let pressure = startPressureHpa;
   let temperature = startTemperatureK;
@@ -89,6 +96,12 @@ export function saturatedVirtualTemperature(temperatureK: number, pressureHpa: n
   const ws = (EPSILON * es) / (pressureHpa - es);
   return (temperatureK * (ws + EPSILON)) / (EPSILON * (1 + ws));
 }
+
+/**
+ * Largest RK4 step where the table method leaves its table, hPa. SCIENCE-style bound of
+ * 5 hPa; moist-adiabat.test.ts checks that it stays within 0.001 K of the 1 hPa reference.
+ */
+export const OUTSIDE_TABLE_STEP_HPA = 5;
 
 const TABLE_BOTTOM_HPA = 1100;
 const TABLE_LOG_STEP = 0.01;
@@ -120,7 +133,8 @@ function rk4LogPressureStep(logPressure: number, temperatureK: number, step: num
  * 1100 hPa to 9.9 hPa by RK4 integration of {@link pseudoAdiabaticLapseRate}. Lookups
  * interpolate bilinearly in (θ_w, ln p). The test `moist-adiabat.test.ts` keeps table
  * temperatures within 0.02 K, and parcel.test.ts keeps CAPE within 1 % of the
- * reference integration. Outside the table the reference integration is used.
+ * reference integration. Outside the table the RK4 integration is used, with steps of at most
+ * {@link OUTSIDE_TABLE_STEP_HPA}.
  */
 export class PseudoAdiabatTable {
   /** Temperatures, K: curve i (θ_w) at pressure node j is entry i·472 + j. */
@@ -171,7 +185,7 @@ export class PseudoAdiabatTable {
    */
   temperature(thetaWK: number, logPressure: number): number {
     const inside = this.temperatureInTable(thetaWK, logPressure);
-    return Number.isNaN(inside) ? moistAdiabatTemperature(1000, thetaWK, Math.exp(logPressure)) : inside;
+    return Number.isNaN(inside) ? moistAdiabatTemperature(1000, thetaWK, Math.exp(logPressure), OUTSIDE_TABLE_STEP_HPA) : inside;
   }
 
   /**
@@ -210,19 +224,26 @@ export class PseudoAdiabatTable {
    * @returns wet-bulb potential temperature θ_w, K
    */
   thetaW(temperatureK: number, logPressure: number): number {
+    const inside = this.thetaWInTable(temperatureK, logPressure);
+    return Number.isNaN(inside) ? moistAdiabatTemperature(Math.exp(logPressure), temperatureK, 1000, OUTSIDE_TABLE_STEP_HPA) : inside;
+  }
+
+  /**
+   * Label θ_w of the pseudo-adiabat through a saturated point, from the table only.
+   * @param temperatureK - temperature of saturated air, K
+   * @param logPressure - natural logarithm of its pressure in hPa
+   * @returns wet-bulb potential temperature θ_w, K; NaN when the point lies outside the table
+   */
+  thetaWInTable(temperatureK: number, logPressure: number): number {
     const x = (LOG_TABLE_BOTTOM - logPressure) / TABLE_LOG_STEP;
-    if (!(x >= 0 && x <= TABLE_PRESSURE_NODES - 1)) {
-      return moistAdiabatTemperature(Math.exp(logPressure), temperatureK, 1000);
-    }
+    if (!(x >= 0 && x <= TABLE_PRESSURE_NODES - 1)) return NaN;
     const j = Math.min(Math.floor(x), TABLE_PRESSURE_NODES - 2);
     const fx = x - j;
-        let low = 0;
+    let low = 0;
     let high = TABLE_THETA_W_NODES - 1;
     const lowTemperature = this.atNode(low, j, fx);
     const highTemperature = this.atNode(high, j, fx);
-    if (temperatureK < lowTemperature || temperatureK > highTemperature) {
-      return moistAdiabatTemperature(Math.exp(logPressure), temperatureK, 1000);
-    }
+    if (!(temperatureK >= lowTemperature && temperatureK <= highTemperature)) return NaN;
     while (high - low > 1) {
       const middle = (low + high) >> 1;
       if (this.atNode(middle, j, fx) <= temperatureK) low = middle;
@@ -240,7 +261,8 @@ export class PseudoAdiabatTable {
  *
  * Inside the table it interpolates; outside it (θ_w beyond −70..+50 °C or pressure beyond
  * 1100..9.9 hPa) it continues the RK4 integration from the previous point of the walk, so
- * the work over a whole ascent is bounded by the pressure span (one step per hPa at most),
+ * the work over a whole ascent is bounded by the pressure span (one step per level, or per
+ * 5 hPa where levels lie further apart),
  * never a new integration from 1000 hPa at each level.
  */
 export class PseudoAdiabatPath {
@@ -260,13 +282,15 @@ export class PseudoAdiabatPath {
    * @param table - the shared table
    * @param startPressureHpa - a saturated point of the curve: pressure, hPa
    * @param startTemperatureK - and its temperature, K
+   * @param thetaWK - θ_w of the curve when already known, K (default: looked up)
    */
   constructor(
     readonly table: PseudoAdiabatTable,
     startPressureHpa: number,
     startTemperatureK: number,
+    thetaWK?: number,
   ) {
-    this.reset(startPressureHpa, startTemperatureK);
+    this.reset(startPressureHpa, startTemperatureK, thetaWK);
   }
 
   /**
@@ -333,6 +357,20 @@ export class PseudoAdiabatPath {
     return this.interpolate(this.table.virtualTemperatures, node, fraction);
   }
 
+  /**
+   * Virtual temperature of the saturated parcel at the next pressure of the walk, for a
+   * pressure whose table coordinates are not at hand.
+   * @param pressureHpa - pressure, hPa
+   * @param logPressure - its natural logarithm
+   * @returns virtual temperature, K
+   */
+  virtualTemperatureAt(pressureHpa: number, logPressure: number): number {
+    const x = (LOG_TABLE_BOTTOM - logPressure) / TABLE_LOG_STEP;
+    if (!(x >= 0 && x <= TABLE_PRESSURE_NODES - 1)) return this.virtualTemperatureAtNode(pressureHpa, logPressure, -1, 0);
+    const j = Math.min(Math.floor(x), TABLE_PRESSURE_NODES - 2);
+    return this.virtualTemperatureAtNode(pressureHpa, logPressure, j, x - j);
+  }
+
   /** Temperature at the last point of the walk, K. */
   lastPointTemperature(): number {
     if (this.lastNode >= 0) {
@@ -358,7 +396,7 @@ export class PseudoAdiabatPath {
    */
   temperatureAt(pressureHpa: number, logPressure: number): number {
     let temperature = this.table.temperatureInTable(this.thetaWK, logPressure);
-    if (Number.isNaN(temperature)) temperature = moistAdiabatTemperature(this.lastPressure, this.lastPointTemperature(), pressureHpa, 1);
+    if (Number.isNaN(temperature)) temperature = moistAdiabatTemperature(this.lastPressure, this.lastPointTemperature(), pressureHpa, OUTSIDE_TABLE_STEP_HPA);
     this.lastPressure = pressureHpa;
     this.lastTemperature = temperature;
     this.lastNode = -1;
