@@ -1,7 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { analyzeEnvironment, precipitableWater } from './environment';
 import { dewpointFromMixingRatio } from './mixing-ratio';
+import { rk4Work } from './moist-adiabat';
 import { buildProfile } from './profile';
+import { buildSounding } from './testing/random-sounding';
+import { wetBulbTemperature } from './wet-bulb';
 import type { SoundingLevel } from './types';
 
 /** Levels every 50 hPa from 1000 to 500 hPa with T and w given as functions of pressure. */
@@ -59,5 +62,35 @@ describe('analyzeEnvironment', () => {
     expect(environment.lapseRate0to3km).toBeLessThan(9.8);
     expect(environment.lapseRate700to500hPa).toBeGreaterThan(3);
     expect(environment.downdraftCape).toBeGreaterThanOrEqual(0);
+  });
+});
+
+describe('work outside the pseudo-adiabat table stays bounded (issue 10)', () => {
+  // An isothermal 30 °C column up to 100 hPa: the air aloft has θ_w far above the table's
+  // +50 °C, so its wet-bulb and downdraft curves are integrated instead of looked up.
+  const count = 800;
+  const levels = buildSounding({
+    surfacePressureHpa: 1000,
+    surfaceTemperatureC: 30,
+    surfaceDewpointDepressionK: 8,
+    lapseRatesKPerKm: Array.from({ length: count - 1 }, () => 0),
+    dewpointDepressionsK: Array.from({ length: count - 1 }, (_, i) => Math.min(30, 5 + (i * 40) / count)),
+    windSpeedsMs: Array.from({ length: count }, () => 10),
+  });
+
+  it('takes at most 3 RK4 steps per level, never a new integration from 1000 hPa per lookup', () => {
+    const before = rk4Work.steps;
+    const environment = analyzeEnvironment(buildProfile(levels));
+    const steps = rk4Work.steps - before;
+    expect(environment.downdraftCape).toBeGreaterThanOrEqual(0);
+    // Going by way of 1000 hPa would take hundreds of 5 hPa steps per level aloft.
+    expect(steps).toBeLessThanOrEqual(3 * count);
+  });
+
+  it('the wet-bulb temperature outside the table matches the reference (RK4, 1 hPa) within 0.001 K', () => {
+    // 30 °C with a 0 °C dewpoint at 150 hPa: its curve lies far outside the table.
+    const table = wetBulbTemperature(150, 303.15, 273.15);
+    const reference = wetBulbTemperature(150, 303.15, 273.15, 'reference');
+    expect(Math.abs(table - reference)).toBeLessThan(0.001);
   });
 });

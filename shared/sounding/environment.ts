@@ -1,13 +1,24 @@
 import * as constants from './constants';
 import { dewpointFromMixingRatio } from './mixing-ratio';
-import { pseudoAdiabatTable } from './moist-adiabat';
+import { moistAdiabatTemperature, OUTSIDE_TABLE_STEP_HPA, PseudoAdiabatPath, pseudoAdiabatTable } from './moist-adiabat';
 import { finiteOrNull, mixedLayerStart } from './parcel';
-import { heightAtPressure, layerIndexAtPressure, LEVEL_THERMODYNAMICS_DEPTH_HPA, levelThermodynamics, valueAtHeight, valueAtPressure, type Profile } from './profile';
-import { saturationVaporPressure } from './saturation';
+import {
+  heightAtPressure,
+  layerIndexAtPressure,
+  LEVEL_THERMODYNAMICS_DEPTH_HPA,
+  levelLclLogPressure,
+  levelTableCoordinates,
+  levelThermodynamics,
+  levelThetaW,
+  valueAtHeight,
+  valueAtPressure,
+  type LevelThermodynamics,
+  type Profile,
+} from './profile';
 import { wetBulbTemperature } from './wet-bulb';
 
 // Constants copied once at load (fast access in hot loops).
-const { EPSILON, GRAVITY, ZERO_CELSIUS_K } = constants;
+const { GRAVITY, ZERO_CELSIUS_K } = constants;
 
 /** Moisture and temperature structure of the environment. Units in the names and docs. */
 export interface EnvironmentAnalysis {
@@ -71,6 +82,19 @@ function scratch(length: number): Float64Array {
   return scratchBuffer;
 }
 
+/**
+ * Wet-bulb temperature of level k by Normand's rule, as {@link wetBulbTemperature} finds it,
+ * from the level's θ_w already known (outside the table: RK4 from its LCL down to it), K.
+ */
+function levelWetBulb(profile: Profile, known: LevelThermodynamics, k: number): number {
+  const thetaW = known.thetaW[k] as number;
+  const logPressure = profile.logPressure[k] as number;
+  const inTable = Number.isNaN(thetaW) ? NaN : pseudoAdiabatTable().temperatureInTable(thetaW, logPressure);
+  if (!Number.isNaN(inTable)) return inTable;
+  const lclT = known.lclTemperatureK[k] as number;
+  return moistAdiabatTemperature(Math.exp(levelLclLogPressure(profile, k, lclT)), lclT, profile.pressureHpa[k] as number, OUTSIDE_TABLE_STEP_HPA);
+}
+
 /** Lowest height above ground where `values` (K) falls to 0 °C going up; 0 if already ≤ 0 °C at the ground. */
 function zeroCrossingHeight(profile: Profile, values: Float64Array, lastIndex: number): number {
   const first = (values[0] as number) - ZERO_CELSIUS_K;
@@ -109,82 +133,97 @@ if (LEVEL_THERMODYNAMICS_DEPTH_HPA < DOWNDRAFT_SEARCH_DEPTH_HPA + DOWNDRAFT_LAYE
  */
 export function downdraftCape(profile: Profile): { dcape: number; pressure: number } | null {
   // Only the levels the search can reach: the lowest 400 hPa plus half a layer above
-  // (θₑ and θ_w of these levels are computed once per profile).
+  // (θₑ of these levels is computed once per profile).
   const known = levelThermodynamics(profile);
   const top = known.count - 1;
   if (top < 1) return null;
-  const table = pseudoAdiabatTable();
   const count = top + 1;
   const thetaE = known.thetaE;
-  const thetaW = known.thetaW;
-  // Cumulative pressure-weighted integrals (trapezoid) for O(1) layer means.
-  const cumulative = scratch(2 * count);
-  const cumulativeE = cumulative.subarray(0, count);
-  const cumulativeW = cumulative.subarray(count, 2 * count);
+  // Cumulative pressure-weighted integral of θₑ (trapezoid) for O(1) layer means.
+  const cumulativeE = scratch(count);
   cumulativeE[0] = 0;
-  cumulativeW[0] = 0;
   for (let k = 1; k < count; k++) {
     const dp = (profile.pressureHpa[k - 1] as number) - (profile.pressureHpa[k] as number);
     cumulativeE[k] = (cumulativeE[k - 1] as number) + 0.5 * ((thetaE[k - 1] as number) + (thetaE[k] as number)) * dp;
-    cumulativeW[k] = (cumulativeW[k - 1] as number) + 0.5 * ((thetaW[k - 1] as number) + (thetaW[k] as number)) * dp;
   }
   const surface = profile.pressureHpa[0] as number;
   const half = DOWNDRAFT_LAYER_DEPTH_HPA / 2;
-  const integralAt = (cumulative: Float64Array, values: Float64Array, pressure: number): number => {
+  const integralAt = (pressure: number): number => {
     const i = layerIndexAtPressure(profile, pressure);
     if (i < 0 || i >= top) return NaN;
     const p0 = profile.pressureHpa[i] as number;
     const p1 = profile.pressureHpa[i + 1] as number;
     const fraction = (p0 - pressure) / (p0 - p1);
-    const v0 = values[i] as number;
-    const vx = v0 + fraction * ((values[i + 1] as number) - v0);
-    return (cumulative[i] as number) + 0.5 * (v0 + vx) * (p0 - pressure);
+    const v0 = thetaE[i] as number;
+    const vx = v0 + fraction * ((thetaE[i + 1] as number) - v0);
+    return (cumulativeE[i] as number) + 0.5 * (v0 + vx) * (p0 - pressure);
   };
-  let best = -1;
   let lowest = Infinity;
-  let bestThetaW = NaN;
-  let bestPressure = NaN;
+  let bestBottom = NaN;
   for (let k = 0; k < count; k++) {
     const centre = profile.pressureHpa[k] as number;
     if (centre < surface - DOWNDRAFT_SEARCH_DEPTH_HPA) break;
     const bottom = Math.min(surface, centre + half);
-    const upper = bottom - DOWNDRAFT_LAYER_DEPTH_HPA;
-    const meanE = (integralAt(cumulativeE, thetaE, upper) - integralAt(cumulativeE, thetaE, bottom)) / DOWNDRAFT_LAYER_DEPTH_HPA;
+    const meanE = (integralAt(bottom - DOWNDRAFT_LAYER_DEPTH_HPA) - integralAt(bottom)) / DOWNDRAFT_LAYER_DEPTH_HPA;
     if (!Number.isFinite(meanE)) break;
     if (meanE < lowest) {
       lowest = meanE;
-      best = k;
-      bestThetaW = (integralAt(cumulativeW, thetaW, upper) - integralAt(cumulativeW, thetaW, bottom)) / DOWNDRAFT_LAYER_DEPTH_HPA;
-      bestPressure = bottom - half;
+      bestBottom = bottom;
     }
   }
-  if (best < 0) return null;
-  const sourcePressure = bestPressure;
+  if (Number.isNaN(bestBottom)) return null;
+  const bestThetaW = layerMeanThetaW(profile, known, bestBottom, bestBottom - DOWNDRAFT_LAYER_DEPTH_HPA);
+  const sourcePressure = bestBottom - half;
   const sourceHeight = heightAtPressure(profile, sourcePressure);
-  const buoyancy = (pressure: number, logPressure: number, envVirtual: number): number => {
-    const temperature = table.temperature(bestThetaW, logPressure);
-    const es = saturationVaporPressure(temperature);
-    const ws = (EPSILON * es) / (pressure - es);
-    const parcelVirtual = (temperature * (ws + EPSILON)) / (EPSILON * (1 + ws));
-    return (GRAVITY * (envVirtual - parcelVirtual)) / envVirtual;
-  };
+  // The parcel's curve, walked from the ground up to the source: table virtual temperatures
+  // inside the table, a continued RK4 integration outside it (never again from 1000 hPa).
+  const path = new PseudoAdiabatPath(pseudoAdiabatTable(), 1000, bestThetaW, bestThetaW);
+  const { node, fraction } = levelTableCoordinates(profile);
+  const buoyancy = (parcelVirtual: number, envVirtual: number): number => (GRAVITY * (envVirtual - parcelVirtual)) / envVirtual;
   let sum = 0;
-  let previous = buoyancy(profile.pressureHpa[0] as number, profile.logPressure[0] as number, profile.virtualTemperatureK[0] as number);
+  let previous = buoyancy(path.virtualTemperatureAtNode(profile.pressureHpa[0] as number, profile.logPressure[0] as number, node[0] as number, fraction[0] as number), profile.virtualTemperatureK[0] as number);
   for (let k = 1; k < profile.count; k++) {
     const pk = profile.pressureHpa[k] as number;
     const zk = profile.heightAglM[k] as number;
     const z0 = profile.heightAglM[k - 1] as number;
     if (pk <= sourcePressure) {
       const envAtSource = valueAtPressure(profile, profile.virtualTemperatureK, sourcePressure);
-      const current = buoyancy(sourcePressure, Math.log(sourcePressure), envAtSource);
+      const current = buoyancy(path.virtualTemperatureAt(sourcePressure, Math.log(sourcePressure)), envAtSource);
       sum += 0.5 * (previous + current) * (sourceHeight - z0);
       break;
     }
-    const current = buoyancy(pk, profile.logPressure[k] as number, profile.virtualTemperatureK[k] as number);
+    const current = buoyancy(path.virtualTemperatureAtNode(pk, profile.logPressure[k] as number, node[k] as number, fraction[k] as number), profile.virtualTemperatureK[k] as number);
     sum += 0.5 * (previous + current) * (zk - z0);
     previous = current;
   }
   return { dcape: Math.max(0, sum), pressure: sourcePressure };
+}
+
+/**
+ * Pressure-weighted mean θ_w of the layer from `bottom` up to `upper` (trapezoid rule, the
+ * edges interpolated linearly in p), K; θ_w outside the table is integrated only for the
+ * levels of this layer.
+ */
+function layerMeanThetaW(profile: Profile, known: LevelThermodynamics, bottom: number, upper: number): number {
+  const p = profile.pressureHpa;
+  const i = layerIndexAtPressure(profile, bottom);
+  const j = layerIndexAtPressure(profile, upper);
+  const at = (layer: number, pressure: number): number => {
+    const p0 = p[layer] as number;
+    const v0 = levelThetaW(profile, known, layer);
+    return v0 + ((p0 - pressure) / (p0 - (p[layer + 1] as number))) * (levelThetaW(profile, known, layer + 1) - v0);
+  };
+  let sum = 0;
+  let previousP = bottom;
+  let previousW = at(i, bottom);
+  for (let k = i + 1; k <= j; k++) {
+    const w = levelThetaW(profile, known, k);
+    sum += 0.5 * (previousW + w) * (previousP - (p[k] as number));
+    previousP = p[k] as number;
+    previousW = w;
+  }
+  sum += 0.5 * (previousW + at(j, upper)) * (previousP - upper);
+  return sum / (bottom - upper);
 }
 
 /**
@@ -202,9 +241,10 @@ export function analyzeEnvironment(profile: Profile): EnvironmentAnalysis {
   const z700 = heightAtPressure(profile, 700);
   const z500 = heightAtPressure(profile, 500);
   const wetBulb = scratch(profile.moistureTopIndex + 1);
+  const known = levelThermodynamics(profile);
   let wetBulbZero = NaN;
   for (let k = 0; k <= profile.moistureTopIndex; k++) {
-    wetBulb[k] = wetBulbTemperature(profile.pressureHpa[k] as number, profile.temperatureK[k] as number, profile.dewpointK[k] as number);
+    wetBulb[k] = k < known.count ? levelWetBulb(profile, known, k) : wetBulbTemperature(profile.pressureHpa[k] as number, profile.temperatureK[k] as number, profile.dewpointK[k] as number);
     if ((wetBulb[k] as number) <= ZERO_CELSIUS_K) {
       wetBulbZero = zeroCrossingHeight(profile, wetBulb, k);
       break;

@@ -30,5 +30,5 @@ export function lclTemperature(temperatureK: number, dewpointK: number): number 
  */
 export function lclPressure(pressureHpa: number, temperatureK: number, dewpointK: number): number {
   const temperatureAtLcl = lclTemperature(temperatureK, dewpointK);
-  return pressureHpa * Math.pow(temperatureAtLcl / temperatureK, 1 / KAPPA);
+  return pressureHpa * Math.exp(Math.log(temperatureAtLcl / temperatureK) / KAPPA);
 }

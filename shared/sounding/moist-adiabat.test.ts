@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { moistAdiabatTemperature, pseudoAdiabatTable, pseudoAdiabaticLapseRate, wetBulbPotentialTemperature } from './moist-adiabat';
+import { moistAdiabatTemperature, OUTSIDE_TABLE_STEP_HPA, PseudoAdiabatPath, pseudoAdiabatTable, pseudoAdiabaticLapseRate, saturatedVirtualTemperature, wetBulbPotentialTemperature } from './moist-adiabat';
 import { saturationEquivalentPotentialTemperature } from './thermo';
 import { wetBulbTemperature } from './wet-bulb';
 
@@ -54,6 +54,29 @@ describe('pseudo-adiabat', () => {
       for (let p = 1090; p > 10.5; p *= 0.8) {
         const reference = moistAdiabatTemperature(1000, thetaWC + 273.15, p, 0.5);
         worst = Math.max(worst, Math.abs(table.temperature(thetaWC + 273.15, Math.log(p)) - reference));
+      }
+    }
+    expect(worst).toBeLessThan(0.02);
+  });
+
+  it('outside the table, RK4 with 5 hPa steps stays within 0.001 K of 1 hPa steps (θ_w up to 70 °C)', () => {
+    fc.assert(
+      fc.property(fc.double({ min: -90, max: 70, noNaN: true }), fc.double({ min: 20, max: 1050, noNaN: true }), (thetaWC, p) => {
+        const fine = moistAdiabatTemperature(1000, thetaWC + 273.15, p, 1);
+        expect(Math.abs(moistAdiabatTemperature(1000, thetaWC + 273.15, p, OUTSIDE_TABLE_STEP_HPA) - fine)).toBeLessThan(0.001);
+      }),
+      { numRuns: 60 },
+    );
+  });
+
+  it('the table of saturated virtual temperatures matches Tᵥ of the table temperature within 0.02 K', () => {
+    const table = pseudoAdiabatTable();
+    let worst = 0;
+    for (let thetaWC = -60; thetaWC <= 45; thetaWC += 3.1) {
+      for (let p = 1090; p > 10.5; p *= 0.83) {
+        const path = new PseudoAdiabatPath(table, 1000, thetaWC + 273.15, thetaWC + 273.15);
+        const virtual = path.virtualTemperatureAt(p, Math.log(p));
+        worst = Math.max(worst, Math.abs(virtual - saturatedVirtualTemperature(table.temperature(thetaWC + 273.15, Math.log(p)), p)));
       }
     }
     expect(worst).toBeLessThan(0.02);

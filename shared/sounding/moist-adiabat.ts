@@ -40,6 +40,12 @@ export function pseudoAdiabaticLapseRate(pressureHpa: number, temperatureK: numb
 }
 
 /**
+ * RK4 steps taken by {@link moistAdiabatTemperature} since the process started: lets tests
+ * check that work outside the table stays bounded (read the difference across a call).
+ */
+export const rk4Work = { steps: 0 };
+
+/**
  * Temperature after following the pseudo-adiabat from one pressure to another: the reference
  * integration (fourth-order Runge–Kutta).
  *
@@ -61,6 +67,7 @@ export function moistAdiabatTemperature(
 ): number {
   const span = endPressureHpa - startPressureHpa;
   const steps = Math.max(1, Math.ceil(Math.abs(span) / maxStepHpa));
+  rk4Work.steps += steps;
   const step = span / steps;
   let pressure = startPressureHpa;
   let temperature = startTemperatureK;
@@ -74,6 +81,27 @@ export function moistAdiabatTemperature(
   }
   return temperature;
 }
+
+/**
+ * Virtual temperature of saturated air (no condensate).
+ * @param temperatureK - temperature, K
+ * @param pressureHpa - pressure, hPa
+ * @returns Tᵥ, K
+ * Notes: wₛ = ε eₛ/(p − eₛ) with eₛ of Bolton1980 eq. 10 (WallaceHobbs2006 eq. 3.63), then
+ * Tᵥ = T (wₛ + ε)/(ε (1 + wₛ)) (WallaceHobbs2006 eq. 3.60); written out (hot loops).
+ */
+export function saturatedVirtualTemperature(temperatureK: number, pressureHpa: number): number {
+  const temperatureC = temperatureK - ZERO_CELSIUS_K;
+  const es = 6.112 * Math.exp((17.67 * temperatureC) / (temperatureC + 243.5));
+  const ws = (EPSILON * es) / (pressureHpa - es);
+  return (temperatureK * (ws + EPSILON)) / (EPSILON * (1 + ws));
+}
+
+/**
+ * Largest RK4 step where the table method leaves its table, hPa. SCIENCE-style bound of
+ * 5 hPa; moist-adiabat.test.ts checks that it stays within 0.001 K of the 1 hPa reference.
+ */
+export const OUTSIDE_TABLE_STEP_HPA = 5;
 
 const TABLE_BOTTOM_HPA = 1100;
 const TABLE_LOG_STEP = 0.01;
@@ -105,14 +133,22 @@ function rk4LogPressureStep(logPressure: number, temperatureK: number, step: num
  * 1100 hPa to 9.9 hPa by RK4 integration of {@link pseudoAdiabaticLapseRate}. Lookups
  * interpolate bilinearly in (θ_w, ln p). The test `moist-adiabat.test.ts` keeps table
  * temperatures within 0.02 K, and parcel.test.ts keeps CAPE within 1 % of the
- * reference integration. Outside the table the reference integration is used.
+ * reference integration. Outside the table the RK4 integration is used, with steps of at most
+ * {@link OUTSIDE_TABLE_STEP_HPA}.
  */
 export class PseudoAdiabatTable {
   /** Temperatures, K: curve i (θ_w) at pressure node j is entry i·472 + j. */
   readonly temperatures: Float64Array;
+  /**
+   * Virtual temperatures of the saturated air at the same nodes, K (wₛ from eₛ of Bolton1980
+   * eq. 10, Tᵥ = T (wₛ + ε)/(ε (1 + wₛ)), WallaceHobbs2006 eq. 3.60): the parcel's buoyancy
+   * interpolates these instead of evaluating eₛ at every level of every ascent.
+   */
+  readonly virtualTemperatures: Float64Array;
 
   constructor() {
     this.temperatures = new Float64Array(TABLE_THETA_W_NODES * TABLE_PRESSURE_NODES);
+    this.virtualTemperatures = new Float64Array(TABLE_THETA_W_NODES * TABLE_PRESSURE_NODES);
     const node1000 = (LOG_TABLE_BOTTOM - LOG_1000) / TABLE_LOG_STEP; // 9.53: between nodes 9 and 10
     const firstAbove = Math.ceil(node1000);
     for (let i = 0; i < TABLE_THETA_W_NODES; i++) {
@@ -134,6 +170,10 @@ export class PseudoAdiabatTable {
         temperature = rk4LogPressureStep(LOG_TABLE_BOTTOM - (j + 1) * TABLE_LOG_STEP, temperature, TABLE_LOG_STEP);
         this.temperatures[row + j] = temperature;
       }
+      for (let j = 0; j < TABLE_PRESSURE_NODES; j++) {
+        const pressure = Math.exp(LOG_TABLE_BOTTOM - j * TABLE_LOG_STEP);
+        this.virtualTemperatures[row + j] = saturatedVirtualTemperature(this.temperatures[row + j] as number, pressure);
+      }
     }
   }
 
@@ -145,7 +185,7 @@ export class PseudoAdiabatTable {
    */
   temperature(thetaWK: number, logPressure: number): number {
     const inside = this.temperatureInTable(thetaWK, logPressure);
-    return Number.isNaN(inside) ? moistAdiabatTemperature(1000, thetaWK, Math.exp(logPressure)) : inside;
+    return Number.isNaN(inside) ? moistAdiabatTemperature(1000, thetaWK, Math.exp(logPressure), OUTSIDE_TABLE_STEP_HPA) : inside;
   }
 
   /**
@@ -184,19 +224,26 @@ export class PseudoAdiabatTable {
    * @returns wet-bulb potential temperature θ_w, K
    */
   thetaW(temperatureK: number, logPressure: number): number {
+    const inside = this.thetaWInTable(temperatureK, logPressure);
+    return Number.isNaN(inside) ? moistAdiabatTemperature(Math.exp(logPressure), temperatureK, 1000, OUTSIDE_TABLE_STEP_HPA) : inside;
+  }
+
+  /**
+   * Label θ_w of the pseudo-adiabat through a saturated point, from the table only.
+   * @param temperatureK - temperature of saturated air, K
+   * @param logPressure - natural logarithm of its pressure in hPa
+   * @returns wet-bulb potential temperature θ_w, K; NaN when the point lies outside the table
+   */
+  thetaWInTable(temperatureK: number, logPressure: number): number {
     const x = (LOG_TABLE_BOTTOM - logPressure) / TABLE_LOG_STEP;
-    if (!(x >= 0 && x <= TABLE_PRESSURE_NODES - 1)) {
-      return moistAdiabatTemperature(Math.exp(logPressure), temperatureK, 1000);
-    }
+    if (!(x >= 0 && x <= TABLE_PRESSURE_NODES - 1)) return NaN;
     const j = Math.min(Math.floor(x), TABLE_PRESSURE_NODES - 2);
     const fx = x - j;
-        let low = 0;
+    let low = 0;
     let high = TABLE_THETA_W_NODES - 1;
     const lowTemperature = this.atNode(low, j, fx);
     const highTemperature = this.atNode(high, j, fx);
-    if (temperatureK < lowTemperature || temperatureK > highTemperature) {
-      return moistAdiabatTemperature(Math.exp(logPressure), temperatureK, 1000);
-    }
+    if (!(temperatureK >= lowTemperature && temperatureK <= highTemperature)) return NaN;
     while (high - low > 1) {
       const middle = (low + high) >> 1;
       if (this.atNode(middle, j, fx) <= temperatureK) low = middle;
@@ -214,28 +261,53 @@ export class PseudoAdiabatTable {
  *
  * Inside the table it interpolates; outside it (θ_w beyond −70..+50 °C or pressure beyond
  * 1100..9.9 hPa) it continues the RK4 integration from the previous point of the walk, so
- * the work over a whole ascent is bounded by the pressure span (one step per hPa at most),
+ * the work over a whole ascent is bounded by the pressure span (one step per level, or per
+ * 5 hPa where levels lie further apart),
  * never a new integration from 1000 hPa at each level.
  */
 export class PseudoAdiabatPath {
-  private lastPressure: number;
-  private lastTemperature: number;
+  private lastPressure = NaN;
+  private lastTemperature = NaN;
+  /** Table coordinates of the last point when it came from the table (node −1: it did not). */
+  private lastNode = -1;
+  private lastFraction = 0;
+  /** Wet-bulb potential temperature of the curve, K. */
+  thetaWK = NaN;
+  /** Offset of the curve's lower table row (−1 when θ_w lies outside the table). */
+  private row = -1;
+  /** Fraction of the way from the lower row to the next one. */
+  private rowFraction = 0;
 
   /**
    * @param table - the shared table
    * @param startPressureHpa - a saturated point of the curve: pressure, hPa
    * @param startTemperatureK - and its temperature, K
+   * @param thetaWK - θ_w of the curve when already known, K (default: looked up)
    */
   constructor(
     readonly table: PseudoAdiabatTable,
     startPressureHpa: number,
     startTemperatureK: number,
+    thetaWK?: number,
   ) {
+    this.reset(startPressureHpa, startTemperatureK, thetaWK);
+  }
+
+  /**
+   * Start the walk again from another saturated point (lets one path object serve many
+   * parcels in a row).
+   * @param startPressureHpa - pressure, hPa
+   * @param startTemperatureK - temperature, K
+   * @param thetaWK - θ_w of the curve through that point when already known, K
+   */
+  reset(startPressureHpa: number, startTemperatureK: number, thetaWK = this.table.thetaW(startTemperatureK, Math.log(startPressureHpa))): void {
     this.lastPressure = startPressureHpa;
     this.lastTemperature = startTemperatureK;
-    this.thetaWK = table.thetaW(startTemperatureK, Math.log(startPressureHpa));
+    this.lastNode = -1;
+    this.lastFraction = 0;
+    this.thetaWK = thetaWK;
     // The row part of temperatureInTable's bilinear interpolation, fixed along the curve.
-    const y = (this.thetaWK - TABLE_THETA_W_MIN_K) / TABLE_THETA_W_STEP_K;
+    const y = (thetaWK - TABLE_THETA_W_MIN_K) / TABLE_THETA_W_STEP_K;
     if (y >= 0 && y <= TABLE_THETA_W_NODES - 1) {
       const i = Math.min(Math.floor(y), TABLE_THETA_W_NODES - 2);
       this.row = i * TABLE_PRESSURE_NODES;
@@ -245,13 +317,6 @@ export class PseudoAdiabatPath {
       this.rowFraction = 0;
     }
   }
-
-  /** Wet-bulb potential temperature of the curve, K. */
-  readonly thetaWK: number;
-  /** Offset of the curve's lower table row (−1 when θ_w lies outside the table). */
-  private readonly row: number;
-  /** Fraction of the way from the lower row to the next one. */
-  private readonly rowFraction: number;
 
   /**
    * Temperature of the curve at the next pressure of the walk, from the pressure's table
@@ -265,15 +330,62 @@ export class PseudoAdiabatPath {
    */
   temperatureAtNode(pressureHpa: number, logPressure: number, node: number, fraction: number): number {
     if (node < 0 || this.row < 0) return this.temperatureAt(pressureHpa, logPressure);
-    const t = this.table.temperatures;
-    const a = this.row + node;
-    const b = a + TABLE_PRESSURE_NODES;
-    const lower = (t[a] as number) + fraction * ((t[a + 1] as number) - (t[a] as number));
-    const upper = (t[b] as number) + fraction * ((t[b + 1] as number) - (t[b] as number));
-    const temperature = lower + this.rowFraction * (upper - lower);
+    const temperature = this.interpolate(this.table.temperatures, node, fraction);
     this.lastPressure = pressureHpa;
     this.lastTemperature = temperature;
+    this.lastNode = -1;
     return temperature;
+  }
+
+  /**
+   * Virtual temperature of the saturated parcel at the next pressure of the walk: inside the
+   * table interpolated from its virtual temperatures (see
+   * {@link PseudoAdiabatTable.virtualTemperatures}), outside it from the continued
+   * integration's temperature.
+   * @param pressureHpa - pressure, hPa
+   * @param logPressure - its natural logarithm
+   * @param node - its pressure node (−1: outside the table)
+   * @param fraction - its fraction between that node and the next
+   * @returns virtual temperature, K
+   */
+  virtualTemperatureAtNode(pressureHpa: number, logPressure: number, node: number, fraction: number): number {
+    if (node < 0 || this.row < 0) return saturatedVirtualTemperature(this.temperatureAt(pressureHpa, logPressure), pressureHpa);
+    // The temperature of this point is computed only if the walk needs it later.
+    this.lastPressure = pressureHpa;
+    this.lastNode = node;
+    this.lastFraction = fraction;
+    return this.interpolate(this.table.virtualTemperatures, node, fraction);
+  }
+
+  /**
+   * Virtual temperature of the saturated parcel at the next pressure of the walk, for a
+   * pressure whose table coordinates are not at hand.
+   * @param pressureHpa - pressure, hPa
+   * @param logPressure - its natural logarithm
+   * @returns virtual temperature, K
+   */
+  virtualTemperatureAt(pressureHpa: number, logPressure: number): number {
+    const x = (LOG_TABLE_BOTTOM - logPressure) / TABLE_LOG_STEP;
+    if (!(x >= 0 && x <= TABLE_PRESSURE_NODES - 1)) return this.virtualTemperatureAtNode(pressureHpa, logPressure, -1, 0);
+    const j = Math.min(Math.floor(x), TABLE_PRESSURE_NODES - 2);
+    return this.virtualTemperatureAtNode(pressureHpa, logPressure, j, x - j);
+  }
+
+  /** Temperature at the last point of the walk, K. */
+  lastPointTemperature(): number {
+    if (this.lastNode >= 0) {
+      this.lastTemperature = this.interpolate(this.table.temperatures, this.lastNode, this.lastFraction);
+      this.lastNode = -1;
+    }
+    return this.lastTemperature;
+  }
+
+  private interpolate(values: Float64Array, node: number, fraction: number): number {
+    const a = this.row + node;
+    const b = a + TABLE_PRESSURE_NODES;
+    const lower = (values[a] as number) + fraction * ((values[a + 1] as number) - (values[a] as number));
+    const upper = (values[b] as number) + fraction * ((values[b + 1] as number) - (values[b] as number));
+    return lower + this.rowFraction * (upper - lower);
   }
 
   /**
@@ -284,9 +396,10 @@ export class PseudoAdiabatPath {
    */
   temperatureAt(pressureHpa: number, logPressure: number): number {
     let temperature = this.table.temperatureInTable(this.thetaWK, logPressure);
-    if (Number.isNaN(temperature)) temperature = moistAdiabatTemperature(this.lastPressure, this.lastTemperature, pressureHpa, 1);
+    if (Number.isNaN(temperature)) temperature = moistAdiabatTemperature(this.lastPressure, this.lastPointTemperature(), pressureHpa, OUTSIDE_TABLE_STEP_HPA);
     this.lastPressure = pressureHpa;
     this.lastTemperature = temperature;
+    this.lastNode = -1;
     return temperature;
   }
 }

@@ -1,7 +1,7 @@
 import { EPSILON, GRAVITY, KAPPA, ZERO_CELSIUS_K } from './constants';
 import { lclTemperature } from './lcl';
 import { dewpointFromMixingRatio, mixingRatio } from './mixing-ratio';
-import { moistAdiabatTemperature, PseudoAdiabatPath, pseudoAdiabatTable, type MoistAscentMethod } from './moist-adiabat';
+import { moistAdiabatTemperature, PseudoAdiabatPath, pseudoAdiabatTable, saturatedVirtualTemperature, type MoistAscentMethod } from './moist-adiabat';
 import { buildProfile, exnerAt, layerIndexAtPressure, levelExner, levelTableCoordinates, levelThermodynamics, valueAtPressure, type Profile } from './profile';
 import { saturationVaporPressure } from './saturation';
 import { equivalentPotentialTemperatureFromMixingRatio } from './thermo';
@@ -105,10 +105,10 @@ export const EFFECTIVE_CIN_MIN = -250;
  * LCL inserted as a point and zero crossings found by linear interpolation. The LFC is the
  * base of the positive area (above the LCL) that holds the most energy; the EL the highest
  * crossing above it; CAPE the positive area between them; CIN all negative area from the
- * start to the LFC. When `effectiveCheck` is set, it decides the Thompson2007 criteria on the
- * first LFC and stops as soon as the answer is known.
+ * start to the LFC. Above the LCL the table's saturated virtual temperatures give the parcel's
+ * Tᵥ directly (see PseudoAdiabatTable.virtualTemperatures).
  */
-function ascend(profile: Profile, start: ParcelStart, options: ParcelOptions, effectiveCheck: boolean): ParcelResult {
+function ascend(profile: Profile, start: ParcelStart, options: ParcelOptions): ParcelResult {
   const table = (options.moistAscent ?? 'table') === 'table' ? pseudoAdiabatTable() : undefined;
   const trace: ParcelTracePoint[] | undefined = options.trace ? [] : undefined;
   const p = profile.pressureHpa;
@@ -142,7 +142,7 @@ function ascend(profile: Profile, start: ParcelStart, options: ParcelOptions, ef
   const startHeight = (z[layer] as number) + startFraction * ((z[layer + 1] as number) - (z[layer] as number));
   const startEnvVirtual = (tve[layer] as number) + startFraction * ((tve[layer + 1] as number) - (tve[layer] as number));
 
-  const areas = new BuoyancyAreas(effectiveCheck);
+  const areas = new BuoyancyAreas();
   const startBuoyancy = (G * (startTemperature * vaporFactor - startEnvVirtual)) / startEnvVirtual;
   const startsSaturated = logPressureLcl >= startLogPressure;
   areas.begin(startHeight, startLogPressure, startBuoyancy, startsSaturated);
@@ -150,7 +150,7 @@ function ascend(profile: Profile, start: ParcelStart, options: ParcelOptions, ef
   let prevEnvVirtual = startEnvVirtual;
   if (trace) trace.push(tracePoint(startPressure, startTemperature, startTemperature * vaporFactor));
 
-  for (let k = layer + 1; k < count && !areas.decided; k++) {
+  for (let k = layer + 1; k < count; k++) {
     const pk = p[k] as number;
     if (pk >= startPressure) continue;
     const lnpk = lnps[k] as number;
@@ -165,19 +165,19 @@ function ascend(profile: Profile, start: ParcelStart, options: ParcelOptions, ef
       areas.reachLcl(zl, logPressureLcl, (G * (parcelVirtual - envAtLcl)) / envAtLcl);
       lclHeight = zl;
       if (trace) trace.push(tracePoint(pressureLcl, temperatureLcl, parcelVirtual));
-      if (areas.decided) break;
     }
     let parcelTemperature: number;
     let parcelVirtual: number;
     if (areas.aboveLcl) {
       if (path) {
-        parcelTemperature = path.temperatureAtNode(pk, lnpk, node[k] as number, nodeFraction[k] as number);
+        parcelVirtual = path.virtualTemperatureAtNode(pk, lnpk, node[k] as number, nodeFraction[k] as number);
+        parcelTemperature = trace ? path.lastPointTemperature() : NaN;
       } else {
         referenceTemperature = moistAdiabatTemperature(referencePressure, referenceTemperature, pk, 1);
         referencePressure = pk;
         parcelTemperature = referenceTemperature;
+        parcelVirtual = saturatedVirtualTemperature(parcelTemperature, pk);
       }
-      parcelVirtual = saturatedVirtualTemperature(parcelTemperature, pk);
     } else {
       parcelTemperature = theta * exnerAt(exner, lnps, k);
       parcelVirtual = parcelTemperature * vaporFactor;
@@ -191,7 +191,7 @@ function ascend(profile: Profile, start: ParcelStart, options: ParcelOptions, ef
   let liftedIndex = NaN;
   let liftedIndexVirtual = NaN;
   const top = p[count - 1] as number;
-  if (!effectiveCheck && startPressure >= 500 && top <= 500) {
+  if (startPressure >= 500 && top <= 500) {
     const environment500 = valueAtPressure(profile, profile.temperatureK, 500);
     const environmentVirtual500 = valueAtPressure(profile, profile.virtualTemperatureK, 500);
     let parcel500: number;
@@ -233,16 +233,8 @@ function ascend(profile: Profile, start: ParcelStart, options: ParcelOptions, ef
     capeClippedAtTop: found && !summary.elFound,
     ...(trace ? { trace } : {}),
   };
-  lastEffectiveDecision = effectiveCheck ? areas.decided && areas.effectivePasses : areas.firstLfcDecision();
+  lastEffectiveDecision = areas.firstLfcDecision();
   return result;
-}
-
-/** Virtual temperature of saturated air (wₛ from eₛ of Bolton1980 eq. 10; written out: hot loop), K. */
-function saturatedVirtualTemperature(temperatureK: number, pressureHpa: number): number {
-  const temperatureC = temperatureK - ZERO_C;
-  const es = 6.112 * Math.exp((17.67 * temperatureC) / (temperatureC + 243.5));
-  const ws = (EPS * es) / (pressureHpa - es);
-  return (temperatureK * (ws + EPS)) / (EPS * (1 + ws));
 }
 
 /** One positive area of buoyancy above the LCL. */
@@ -289,9 +281,6 @@ class BuoyancyAreas {
   prevLog = 0;
   prevB = 0;
   aboveLcl = false;
-  decided = false;
-
-  constructor(private readonly effectiveCheck: boolean) {}
 
   /** The starting point; `atLcl` when the parcel starts saturated. */
   begin(z: number, logPressure: number, buoyancy: number, atLcl: boolean): void {
@@ -349,29 +338,12 @@ class BuoyancyAreas {
     this.prevZ = z;
     this.prevLog = logPressure;
     this.prevB = buoyancy;
-    if (this.effectiveCheck) {
-      // The effective-layer check decides on the first LFC, as Thompson2007 did, and stops as
-      // soon as the answer is known: too much CIN before any positive area, or 100 J/kg of
-      // CAPE above the first LFC with little enough CIN below it.
-      const first = this.positiveAreas[0];
-      if (!first && this.negative < EFFECTIVE_CIN_MIN) this.decided = true;
-      else if (first && first.negativeBefore < EFFECTIVE_CIN_MIN) {
-        // Too much CIN below the first LFC: it fails whatever CAPE follows.
-        this.decided = true;
-        this.effectivePasses = false;
-      } else if (first && this.positive - first.positiveBefore >= EFFECTIVE_CAPE_MIN) {
-        this.decided = true;
-        this.effectivePasses = first.negativeBefore >= EFFECTIVE_CIN_MIN;
-      }
-    }
   }
 
-  /** Effective-layer check only: the decision once `decided`. */
-  effectivePasses = false;
-
   /**
-   * After a full ascent: the decision the effective-layer check would have made (its areas
-   * only grow, so the end state decides as the early stop would have).
+   * After a full ascent: the decision the effective-layer check ({@link effectiveDecision})
+   * makes on the first LFC (its areas only grow, so the end state decides as its early stop
+   * does).
    */
   firstLfcDecision(): boolean {
     const first = this.positiveAreas[0];
@@ -466,7 +438,7 @@ function negativeArea(za: number, ba: number, zb: number, bb: number): number {
  * @returns the parcel result (see {@link ParcelResult})
  */
 export function liftParcelOnProfile(profile: Profile, start: ParcelStart, options: ParcelOptions = {}): ParcelResult {
-  return ascend(profile, start, options, false);
+  return ascend(profile, start, options);
 }
 
 /**
@@ -481,7 +453,7 @@ export function liftParcelWithEffectiveDecision(
   start: ParcelStart,
   options: ParcelOptions = {},
 ): { result: ParcelResult; meetsEffectiveCriteria: boolean | null } {
-  const result = ascend(profile, start, options, false);
+  const result = ascend(profile, start, options);
   return { result, meetsEffectiveCriteria: (options.moistAscent ?? 'table') === 'table' ? lastEffectiveDecision : null };
 }
 
@@ -493,18 +465,146 @@ export function liftParcelWithEffectiveDecision(
 export function meetsEffectiveInflowCriteria(profile: Profile, levelIndex: number): boolean {
   const dewpoint = profile.dewpointK[levelIndex] as number;
   if (Number.isNaN(dewpoint)) return false;
-  const pressure = profile.pressureHpa[levelIndex] as number;
-  ascend(
-    profile,
-    {
-      pressureHpa: pressure,
-      temperatureK: profile.temperatureK[levelIndex] as number,
-      mixingRatio: profile.mixingRatio[levelIndex] as number,
-    },
-    {},
-    true,
-  );
-  return lastEffectiveDecision;
+  return effectiveDecision(profile, levelIndex);
+}
+
+/** The path object every effective-layer check reuses (the engine is synchronous). */
+let effectivePath: PseudoAdiabatPath | undefined;
+
+/**
+ * The effective-inflow decision of a parcel lifted from a level: the same ascent as
+ * {@link ascend} (same formulas, same order of operations) with only the running areas kept
+ * in plain numbers, stopping as soon as the decision is known (Thompson2007 pg. 104: CAPE on
+ * the first LFC ≥ 100 J kg⁻¹, CIN before it ≥ −250 J kg⁻¹). shared-work.test.ts checks it
+ * against the full ascent's decision.
+ */
+function effectiveDecision(profile: Profile, levelIndex: number): boolean {
+  const table = pseudoAdiabatTable();
+  const p = profile.pressureHpa;
+  const lnps = profile.logPressure;
+  const z = profile.heightAglM;
+  const tve = profile.virtualTemperatureK;
+  const count = profile.count;
+  const { node, fraction: nodeFraction } = levelTableCoordinates(profile);
+  const exner = levelExner(profile);
+
+  const startPressure = p[levelIndex] as number;
+  const startLogPressure = Math.log(startPressure);
+  const startTemperature = profile.temperatureK[levelIndex] as number;
+  const w0 = Math.max(profile.mixingRatio[levelIndex] as number, MIN_MIXING_RATIO);
+  const theta = startTemperature * Math.exp(K * (LOG_1000 - startLogPressure));
+  const vaporFactor = (w0 + EPS) / (EPS * (1 + w0));
+  const startDewpoint = Math.min(dewpointFromMixingRatio(w0, startPressure), startTemperature);
+  const temperatureLcl = lclTemperature(startTemperature, startDewpoint);
+  const logPressureLcl = startLogPressure + Math.log(temperatureLcl / startTemperature) / K;
+  const pressureLcl = Math.exp(logPressureLcl);
+  if (effectivePath && effectivePath.table === table) effectivePath.reset(pressureLcl, temperatureLcl);
+  else effectivePath = new PseudoAdiabatPath(table, pressureLcl, temperatureLcl);
+  const path = effectivePath;
+
+  const layer = layerIndexAtPressure(profile, startPressure);
+  if (layer < 0) return false;
+  const lowerLog = lnps[layer] as number;
+  const upperLog = lnps[layer + 1] as number;
+  const startFraction = upperLog === lowerLog ? 0 : (startLogPressure - lowerLog) / (upperLog - lowerLog);
+  const startHeight = (z[layer] as number) + startFraction * ((z[layer + 1] as number) - (z[layer] as number));
+  const startEnvVirtual = (tve[layer] as number) + startFraction * ((tve[layer + 1] as number) - (tve[layer] as number));
+
+  // The running state of BuoyancyAreas, reduced to what the decision needs.
+  let negative = 0;
+  let positive = 0;
+  let hasFirst = false;
+  let firstNegative = 0;
+  let firstPositive = 0;
+  let prevZ = startHeight;
+  let prevLog = startLogPressure;
+  let prevB = (G * (startTemperature * vaporFactor - startEnvVirtual)) / startEnvVirtual;
+  let aboveLcl = logPressureLcl >= startLogPressure;
+  if (aboveLcl && prevB > 0) {
+    hasFirst = true;
+    firstNegative = negative;
+    firstPositive = positive;
+  }
+  let prevEnvVirtual = startEnvVirtual;
+  // Each point of the path: the LCL when the parcel passes it, then the level.
+  for (let k = layer + 1; k < count; k++) {
+    const pk = p[k] as number;
+    if (pk >= startPressure) continue;
+    const lnpk = lnps[k] as number;
+    const zk = z[k] as number;
+    const envVirtual = tve[k] as number;
+    for (let point = aboveLcl ? 1 : 0; point < 2; point++) {
+      let zPoint: number;
+      let logPoint: number;
+      let b: number;
+      let atLcl = false;
+      if (point === 0) {
+        if (lnpk >= logPressureLcl) {
+          zPoint = zk;
+          logPoint = lnpk;
+          b = (G * (theta * exnerAt(exner, lnps, k) * vaporFactor - envVirtual)) / envVirtual;
+          point = 1; // a level below the LCL: one point only
+        } else {
+          const fraction = (logPressureLcl - prevLog) / (lnpk - prevLog);
+          zPoint = prevZ + fraction * (zk - prevZ);
+          logPoint = logPressureLcl;
+          const envAtLcl = prevEnvVirtual + fraction * (envVirtual - prevEnvVirtual);
+          b = (G * (temperatureLcl * vaporFactor - envAtLcl)) / envAtLcl;
+          atLcl = true;
+        }
+      } else {
+        zPoint = zk;
+        logPoint = lnpk;
+        b = (G * (path.virtualTemperatureAtNode(pk, lnpk, node[k] as number, nodeFraction[k] as number) - envVirtual)) / envVirtual;
+      }
+      // The segment from the previous point (BuoyancyAreas.add).
+      const za = prevZ;
+      const ba = prevB;
+      if (!aboveLcl) {
+        negative += negativeArea(za, ba, zPoint, b);
+        positive += positiveArea(za, ba, zPoint, b);
+      } else if (ba > 0 && b > 0) {
+        positive += 0.5 * (ba + b) * (zPoint - za);
+      } else if (ba <= 0 && b <= 0) {
+        negative += 0.5 * (ba + b) * (zPoint - za);
+      } else {
+        const crossing = ba / (ba - b);
+        const zx = za + crossing * (zPoint - za);
+        if (b > 0) {
+          negative += 0.5 * ba * (zx - za);
+          if (!hasFirst) {
+            hasFirst = true;
+            firstNegative = negative;
+            firstPositive = positive;
+          }
+          positive += 0.5 * (0 + b) * (zPoint - zx);
+        } else {
+          positive += 0.5 * (ba + 0) * (zx - za);
+          negative += 0.5 * b * (zPoint - zx);
+        }
+      }
+      prevZ = zPoint;
+      prevLog = logPoint;
+      prevB = b;
+      if (!hasFirst) {
+        if (negative < EFFECTIVE_CIN_MIN) return false;
+      } else if (firstNegative < EFFECTIVE_CIN_MIN) {
+        return false;
+      } else if (positive - firstPositive >= EFFECTIVE_CAPE_MIN) {
+        return true;
+      }
+      if (atLcl) {
+        aboveLcl = true;
+        if (b > 0 && !hasFirst) {
+          hasFirst = true;
+          firstNegative = negative;
+          firstPositive = positive;
+        }
+      }
+    }
+    prevEnvVirtual = envVirtual;
+  }
+  return false;
 }
 
 /** The surface-based parcel's start: the lowest level's temperature and mixing ratio. */

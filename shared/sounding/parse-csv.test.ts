@@ -379,6 +379,22 @@ describe('parseSoundingCsv: one test per class of bad input', () => {
     expect(issues(broken).some((issue) => issue.line === rowLine(3))).toBe(true);
   });
 
+  it('LF, CRLF and lone-CR files, with or without quotes, give the same levels and line numbers', () => {
+    const rows = [...BASE_ROWS];
+    rows[3] = (rows[3] as string).replace(/^[^,]+/, 'abc');
+    const lf = buildCsv({ rows });
+    // A quoted header cell sends the file through papaparse; the others take the plain split.
+    const quoted = lf.replace('wind_speed_kt', '"wind_speed_kt"');
+    const variants = [lf, lf.replace(/\n/g, '\r\n'), lf.replace(/\n/g, '\r'), quoted, quoted.replace(/\n/g, '\r\n')];
+    const seen = variants.map((text) => issues(text).map((issue) => [issue.code, issue.line, issue.column]));
+    expect(seen[0]).toContainEqual(['NOT_A_NUMBER', rowLine(3), 'pressure_hPa']);
+    for (const other of seen.slice(1)) expect(other).toEqual(seen[0]);
+    const good = buildCsv({});
+    const levels = parsed(good).levels;
+    expect(parsed(good.replace(/\n/g, '\r\n')).levels).toEqual(levels);
+    expect(parsed(good.replace('wind_speed_kt', '"wind_speed_kt"')).levels).toEqual(levels);
+  });
+
   it.each([
     ['latitude', '95'],
     ['longitude', 'west'],

@@ -1,6 +1,6 @@
 import * as constants from './constants';
 import { lclTemperature } from './lcl';
-import { pseudoAdiabatTable, tablePressureCoordinates } from './moist-adiabat';
+import { moistAdiabatTemperature, OUTSIDE_TABLE_STEP_HPA, pseudoAdiabatTable, tablePressureCoordinates } from './moist-adiabat';
 import { equivalentPotentialTemperatureFromMixingRatio } from './thermo';
 import type { SoundingLevel } from './types';
 
@@ -105,7 +105,11 @@ export interface LevelThermodynamics {
   lclTemperatureK: Float64Array;
   /** Equivalent potential temperature, K (Bolton1980 eq. 39). */
   thetaE: Float64Array;
-  /** Wet-bulb potential temperature, K: the label of the pseudo-adiabat through the level's LCL. */
+  /**
+   * Wet-bulb potential temperature, K: the label of the pseudo-adiabat through the level's
+   * LCL; NaN where that point lies outside the pseudo-adiabat table (see {@link levelThetaW},
+   * which integrates those only when asked).
+   */
   thetaW: Float64Array;
 }
 
@@ -143,10 +147,29 @@ export function levelThermodynamics(profile: Profile): LevelThermodynamics {
     lclTemperatureK[k] = lclT;
     thetaE[k] = equivalentPotentialTemperatureFromMixingRatio(pk, temperature, profile.mixingRatio[k] as number, lclT);
     // θ_w is the label of the pseudo-adiabat through the level's LCL (Bolton1980 eq. 15).
-    thetaW[k] = table.thetaW(lclT, (profile.logPressure[k] as number) + Math.log(lclT / temperature) / KAPPA);
+    thetaW[k] = table.thetaWInTable(lclT, levelLclLogPressure(profile, k, lclT));
   }
   profile.thermodynamics = { count, lclTemperatureK, thetaE, thetaW };
   return profile.thermodynamics;
+}
+
+/** ln p of the LCL of level k's air, from its LCL temperature (Poisson's equation). */
+export function levelLclLogPressure(profile: Profile, k: number, lclTemperatureK: number): number {
+  return (profile.logPressure[k] as number) + Math.log(lclTemperatureK / (profile.temperatureK[k] as number)) / KAPPA;
+}
+
+/**
+ * θ_w of level k (k below {@link LevelThermodynamics.count}), K: from the table, or, when the
+ * level's LCL lies outside it, by RK4 from the LCL to 1000 hPa, once, kept for later calls.
+ */
+export function levelThetaW(profile: Profile, known: LevelThermodynamics, k: number): number {
+  let value = known.thetaW[k] as number;
+  if (Number.isNaN(value)) {
+    const lclT = known.lclTemperatureK[k] as number;
+    value = moistAdiabatTemperature(Math.exp(levelLclLogPressure(profile, k, lclT)), lclT, 1000, OUTSIDE_TABLE_STEP_HPA);
+    known.thetaW[k] = value;
+  }
+  return value;
 }
 
 /** Fixed part of the height tolerance, m. */

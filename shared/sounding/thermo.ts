@@ -83,12 +83,16 @@ export function equivalentPotentialTemperatureFromMixingRatio(
   lclTemperatureK: number,
 ): number {
   const vaporPressure = vaporPressureFromMixingRatio(mixingRatioKgKg, pressureHpa);
-  const thetaDL =
-    temperatureK *
-    Math.pow(REFERENCE_PRESSURE_HPA / (pressureHpa - vaporPressure), 0.2854) *
-    Math.pow(temperatureK / lclTemperatureK, 0.28 * mixingRatioKgKg);
-  return thetaDL * Math.exp((3036 / lclTemperatureK - 1.78) * mixingRatioKgKg * (1 + 0.448 * mixingRatioKgKg));
+  // θ_DL · exp(…) with both powers written as exponentials, so one exp serves all three
+  // factors (Math.pow costs several times an exp; the result differs by rounding only).
+  const exponent =
+    0.2854 * (LOG_REFERENCE_PRESSURE - Math.log(pressureHpa - vaporPressure)) +
+    0.28 * mixingRatioKgKg * Math.log(temperatureK / lclTemperatureK) +
+    (3036 / lclTemperatureK - 1.78) * mixingRatioKgKg * (1 + 0.448 * mixingRatioKgKg);
+  return temperatureK * Math.exp(exponent);
 }
+
+const LOG_REFERENCE_PRESSURE = Math.log(REFERENCE_PRESSURE_HPA);
 
 /** Vapour pressure at a given dewpoint, hPa (eₛ at T_d, Bolton1980 eq. 10). */
 function vaporPressureFromDewpoint(dewpointK: number): number {
