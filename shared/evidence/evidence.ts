@@ -113,7 +113,11 @@ export function soundingsInside<T extends Pick<EvidenceSounding, 'latitude' | 'l
 
 /** The evidence of one area: which soundings lie inside and the statistics of each parameter. */
 export function areaEvidence(areaId: string, geometry: AreaGeometry, soundings: readonly EvidenceSounding[]): AreaEvidence {
-  const inside = soundingsInside(geometry, soundings);
+  return evidenceOfSoundings(areaId, soundingsInside(geometry, soundings));
+}
+
+/** The statistics of each parameter over soundings already known to lie inside an area. */
+export function evidenceOfSoundings(areaId: string, inside: readonly EvidenceSounding[]): AreaEvidence {
   const stats: AreaEvidence['stats'] = {};
   for (const { key } of evidenceParameters) {
     const values = inside.map((s) => s.figures[key]).filter((v): v is number => v !== null && Number.isFinite(v));
