@@ -47,6 +47,7 @@ export function useLiveEvidence({ outlookId, savedPeriod, period, source, ladder
     const shape = live && live.areaId === area.id ? { ...area, geometry: toAreaGeometry(live.geometry) } : area;
     return areaReport(shape, pool, ladder, guidance);
   }, [pool, area, live, ladder, guidance]);
-  const positions = useMemo(() => new Map((soundings ?? []).map((s) => [s.id, [s.longitude, s.latitude] as const])), [soundings]);
+  /** Where each candidate is and its station, for the map shapes and the panel's sounding links. */
+  const positions = useMemo(() => new Map((soundings ?? []).map((s) => [s.id, { longitude: s.longitude, latitude: s.latitude, stationId: s.stationId }])), [soundings]);
   return { report, positions, ready: pool !== null, truncated: candidates.data?.truncated ?? false };
 }

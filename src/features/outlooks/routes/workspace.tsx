@@ -122,7 +122,7 @@ function Workspace({ initial, office, mayAuthor }: { initial: Outlook; office: O
   const judged: JudgedPoint[] = judgements
     ? [...judgements].flatMap(([id, kind]) => {
         const position = liveEvidence.positions.get(id);
-        return position ? [{ id, longitude: position[0], latitude: position[1], kind }] : [];
+        return position ? [{ id, longitude: position.longitude, latitude: position.latitude, kind }] : [];
       })
     : [];
   const stations = useMemo(() => new Map((soundings.data?.soundings ?? []).map((s) => [s.id, s.stationId])), [soundings.data]);
@@ -383,7 +383,7 @@ function Workspace({ initial, office, mayAuthor }: { initial: Outlook; office: O
                       <h2 className="text-sm font-semibold">Evidence</h2>
                       <SelectField label="Source" hideLabel className="w-44" value={source} options={sourceOptions} onChange={(event) => isEvidenceSource(event.target.value) && setSource(event.target.value)} />
                     </div>
-                    <EvidencePanel report={shownReport} stale={view.kind === 'stale'} preview={view.kind === 'preview'} units={units} stationOf={(id) => stations.get(id) ?? 'Sounding'} />
+                    <EvidencePanel report={shownReport} stale={view.kind === 'stale'} preview={view.kind === 'preview'} units={units} stationOf={(id) => stations.get(id) ?? liveEvidence.positions.get(id)?.stationId ?? 'Sounding'} />
                   </section>
                 </>
               ) : (
