@@ -3,7 +3,7 @@ import { idParamSchema } from '../../shared/contracts/common';
 import { areaImportInputSchema, createOutlookInputSchema, evidenceQuerySchema, outlookListQuerySchema, saveOutlookInputSchema } from '../../shared/contracts/outlooks';
 import { access, actorOf } from '../auth/require-role';
 import { parseInput, sendResult } from '../middleware/error-handler';
-import { createOutlook, exportAreasGeoJson, getOutlook, getOutlookEvidence, getRevision, importAreasGeoJson, listOutlooks, listRevisions, saveOutlook } from '../services/outlooks.service';
+import { createOutlook, exportAreasGeoJson, getOutlook, getEvidenceCandidates, getOutlookEvidence, getRevision, importAreasGeoJson, listOutlooks, listRevisions, saveOutlook } from '../services/outlooks.service';
 import { route } from './route-definition';
 import { authoringRoles, officeReaderRoles } from '../../shared/workflow/roles';
 
@@ -75,6 +75,16 @@ export const outlooksRoutes = [
       const query = parseInput(evidenceQuerySchema, req.query, 'filters');
       if (!query.ok) return sendResult(res, query);
       sendResult(res, await getOutlookEvidence(ctx.db, params.value.outlookId, query.value.source));
+    },
+  }),
+  route({
+    method: 'get',
+    path: '/api/outlooks/:outlookId/evidence-candidates',
+    access: officeReaders,
+    handler: async (ctx, req, res) => {
+      const params = parseInput(outlookParamsSchema, req.params, 'address');
+      if (!params.ok) return sendResult(res, params);
+      sendResult(res, await getEvidenceCandidates(ctx.db, params.value.outlookId));
     },
   }),
   route({

@@ -17,6 +17,9 @@ import type { Database, DatabaseOrTransaction } from '../db/client';
 import { auditEvents, issuances, outlookRevisions, outlooks, riskAreas, soundings, users } from '../db/schema';
 import { findOffice, officeGuidance } from './office.service';
 import { keyFigures } from './soundings.service';
+import type { EvidenceCandidates } from '../../shared/contracts/evidence-candidates';
+import { MAX_LIVE_EVIDENCE_CANDIDATES, toEvidenceCandidate } from '../../shared/evidence/evidence-candidates';
+import { keyFigureKeys } from '../../shared/sounding/key-figures';
 import { runGeometryTask } from '../workers/geometry-pool';
 
 type OutlookRow = typeof outlooks.$inferSelect;
@@ -353,6 +356,26 @@ export async function getOutlookEvidence(db: Database, outlookId: string, source
   if (!report.ok) return report;
   const areas = report.value;
   return ok({ areas, soundingCount: candidates.filter((s) => !s.modified && (!source || s.source === source)).length });
+}
+
+/**
+ * The soundings the evidence report reads for the outlook's saved period, compactly, for the
+ * workspace's live preview (see shared/evidence/evidence-candidates.ts). Modified soundings stay
+ * out, as in the report; above MAX_LIVE_EVIDENCE_CANDIDATES none are sent (`truncated`).
+ */
+export async function getEvidenceCandidates(db: Database, outlookId: string): Promise<Result<EvidenceCandidates, AppError>> {
+  const [row] = await db.select({ validFrom: outlooks.validFrom, validUntil: outlooks.validUntil }).from(outlooks).where(eq(outlooks.id, outlookId));
+  if (!row) return err(notFound());
+  const candidates = (await evidenceSoundings(db, row.validFrom, row.validUntil)).filter((s) => !s.modified);
+  const truncated = candidates.length > MAX_LIVE_EVIDENCE_CANDIDATES;
+  return ok({
+    validFrom: row.validFrom.toISOString(),
+    validUntil: row.validUntil.toISOString(),
+    figureKeys: [...keyFigureKeys],
+    truncated,
+    limit: MAX_LIVE_EVIDENCE_CANDIDATES,
+    soundings: truncated ? [] : candidates.map(toEvidenceCandidate),
+  });
 }
 
 /** The outlook's areas as an RFC 7946 FeatureCollection. */

@@ -56,6 +56,7 @@ const matrix: MatrixRow[] = [
   { method: 'get', route: '/api/outlooks/:outlookId', url: `/api/outlooks/${missingId}`, expect: readers(404) },
   { method: 'put', route: '/api/outlooks/:outlookId', url: `/api/outlooks/${missingId}`, body: {}, expect: authors(400) },
   { method: 'get', route: '/api/outlooks/:outlookId/evidence', url: `/api/outlooks/${missingId}/evidence`, expect: readers(404) },
+  { method: 'get', route: '/api/outlooks/:outlookId/evidence-candidates', url: `/api/outlooks/${missingId}/evidence-candidates`, expect: readers(404) },
   { method: 'get', route: '/api/outlooks/:outlookId/geojson', url: `/api/outlooks/${missingId}/geojson`, expect: readers(404) },
   { method: 'get', route: '/api/outlooks/:outlookId/revisions', url: `/api/outlooks/${missingId}/revisions`, expect: readers(404) },
   { method: 'get', route: '/api/outlook-revisions/:revisionId', url: `/api/outlook-revisions/${missingId}`, expect: readers(404) },

@@ -12,6 +12,8 @@ export const outlooksKeys = {
   details: () => [...outlooksKeys.all, 'detail'] as const,
   detail: (outlookId: string) => [...outlooksKeys.details(), outlookId] as const,
   evidence: (outlookId: string, source: EvidenceSource) => [...outlooksKeys.all, 'evidence', outlookId, source] as const,
+  /** The soundings (and stored figures) the evidence report reads for the outlook's saved period; the live preview's input. */
+  evidenceCandidates: (outlookId: string, validFrom: string, validUntil: string) => [...outlooksKeys.all, 'evidence-candidates', outlookId, { validFrom, validUntil }] as const,
   revisions: (outlookId: string) => [...outlooksKeys.all, 'revisions', outlookId] as const,
   revision: (revisionId: string) => [...outlooksKeys.all, 'revision', revisionId] as const,
   comments: (outlookId: string) => [...outlooksKeys.all, 'comments', outlookId] as const,

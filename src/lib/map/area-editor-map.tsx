@@ -10,6 +10,7 @@ import { AREA_FILL_OPACITY, AREA_OUTLINE } from './area-outline';
 import { BoundaryLines, FitBounds, useOfflineBoundaries } from './base-map';
 import type { MapRegion, PointProperties } from './point-map';
 import { escapeHtml } from '../../../shared/text/escape-html';
+import { judgementSvg, type JudgementKind } from './judgement-symbol';
 
 /** What the editor is doing: selecting, drawing a new area, editing vertices, moving or cutting a hole. */
 export type EditorMode = 'select' | 'draw' | 'edit' | 'move' | 'cut';
@@ -25,6 +26,14 @@ export interface EditorAreaProperties {
   title: string;
   /** Short hazard badges such as "Sig. tornado"; a non-empty list draws the bold inner outline. */
   badges: string[];
+}
+
+/** A sounding inside the selected area with how its support check judged it (drawn as a shape around its dot). */
+export interface JudgedPoint {
+  id: string;
+  longitude: number;
+  latitude: number;
+  kind: JudgementKind;
 }
 
 export interface MapLayersShown {
@@ -46,6 +55,13 @@ interface AreaEditorMapProps {
   onSelect?: (id: string | null) => void;
   onCreate?: (geometry: AreaShape) => void;
   onChange?: (id: string, geometry: AreaShape) => void;
+  /**
+   * While a vertex or the whole area is being dragged: the outline at each animation frame (at
+   * most one call per frame), then null when the drag ends (before `onChange`, if it changed).
+   */
+  onLiveChange?: (id: string, geometry: AreaShape | null) => void;
+  /** Soundings of the selected area with their judgement; drawn under the sounding dots. */
+  judged?: readonly JudgedPoint[];
   onModeChange?: (mode: EditorMode) => void;
   tileUrl?: string | undefined;
   tileAttribution?: string | undefined;
@@ -83,6 +99,7 @@ interface LatestProps {
   onSelect: AreaEditorMapProps['onSelect'];
   onCreate: AreaEditorMapProps['onCreate'];
   onChange: AreaEditorMapProps['onChange'];
+  onLiveChange: AreaEditorMapProps['onLiveChange'];
   onModeChange: AreaEditorMapProps['onModeChange'];
 }
 
@@ -164,10 +181,19 @@ function AreaLayers({ areas, selectedId, visible, mode, latest }: { areas: AreaE
     const onMapClick = () => {
       if (latest.current.mode === 'select') latest.current.onSelect?.(null);
     };
+    // geoman's vertex handles are keyboard buttons without a name: name them as they appear.
+    const onLayerAdd = (event: L.LayerEvent) => {
+      if (!(event.layer instanceof L.Marker)) return;
+      const element = event.layer.getElement();
+      if (!element?.classList.contains('marker-icon')) return;
+      element.setAttribute('aria-label', element.classList.contains('marker-icon-middle') ? 'Midpoint: drag to add a vertex' : 'Vertex: drag to move it');
+    };
     map.on('pm:create', onCreate);
     map.on('pm:cut', onCut);
     map.on('click', onMapClick);
+    map.on('layeradd', onLayerAdd);
     return () => {
+      map.off('layeradd', onLayerAdd);
       map.off('pm:create', onCreate);
       map.off('pm:cut', onCut);
       map.off('click', onMapClick);
@@ -211,6 +237,25 @@ function AreaLayers({ areas, selectedId, visible, mode, latest }: { areas: AreaE
           current.decorationKey = '';
           latest.current.onChange?.(id, geometry);
         };
+        // Live outline while dragging, throttled to animation frames.
+        let frame = 0;
+        const onMoving = () => {
+          if (frame !== 0) return;
+          frame = window.requestAnimationFrame(() => {
+            frame = 0;
+            const current = registry.current.get(id);
+            if (!current || current.polygon !== polygon) return;
+            const geometry = shapeOf(polygon);
+            if (geometry) latest.current.onLiveChange?.(id, geometry);
+          });
+        };
+        const onMoved = () => {
+          if (frame !== 0) window.cancelAnimationFrame(frame);
+          frame = 0;
+          latest.current.onLiveChange?.(id, null);
+        };
+        polygon.on('pm:markerdrag pm:drag', onMoving);
+        polygon.on('pm:markerdragend pm:dragend', onMoved);
         polygon.on('pm:edit', onEdited);
         polygon.on('pm:dragend', onEdited);
         const casing = L.polygon(polygon.getLatLngs(), { interactive: false, pmIgnore: true, fill: false, color: AREA_OUTLINE.casing.colour, weight: AREA_OUTLINE.casing.weight, opacity: 1 } as L.PolylineOptions);
@@ -300,6 +345,55 @@ function AreaLayers({ areas, selectedId, visible, mode, latest }: { areas: AreaE
   return null;
 }
 
+const judgementIcons = new Map<JudgementKind, L.DivIcon>();
+function judgementIcon(kind: JudgementKind): L.DivIcon {
+  let icon = judgementIcons.get(kind);
+  if (!icon) {
+    icon = L.divIcon({ className: `sd-judgement sd-judgement-${kind}`, html: judgementSvg(kind), iconSize: [22, 22], iconAnchor: [11, 11] });
+    judgementIcons.set(kind, icon);
+  }
+  return icon;
+}
+
+/**
+ * The judgement shapes around the selected area's soundings, kept imperatively: on each update
+ * (every animation frame of a drag) only markers that appear, vanish or change judgement are touched.
+ */
+function JudgementLayer({ points }: { points: readonly JudgedPoint[] }) {
+  const map = useMap();
+  const markers = useRef(new Map<string, { marker: L.Marker; kind: JudgementKind }>());
+  useEffect(() => {
+    const seen = new Set<string>();
+    for (const point of points) {
+      seen.add(point.id);
+      const entry = markers.current.get(point.id);
+      if (entry) {
+        if (entry.kind !== point.kind) {
+          entry.marker.setIcon(judgementIcon(point.kind));
+          entry.kind = point.kind;
+        }
+        continue;
+      }
+      const marker = L.marker([point.latitude, point.longitude], { icon: judgementIcon(point.kind), interactive: false, keyboard: false, pane: 'judgements', pmIgnore: true } as L.MarkerOptions).addTo(map);
+      markers.current.set(point.id, { marker, kind: point.kind });
+    }
+    for (const [id, entry] of markers.current) {
+      if (!seen.has(id)) {
+        entry.marker.remove();
+        markers.current.delete(id);
+      }
+    }
+  }, [map, points]);
+  useEffect(() => {
+    const entries = markers.current;
+    return () => {
+      for (const entry of entries.values()) entry.marker.remove();
+      entries.clear();
+    };
+  }, []);
+  return null;
+}
+
 /**
  * The authoring map: offline boundaries, soundings as coloured points and the outlook's risk
  * areas, with geoman drawing and editing. Callers pass plain GeoJSON and callbacks; geometry
@@ -308,9 +402,9 @@ function AreaLayers({ areas, selectedId, visible, mode, latest }: { areas: AreaE
 export function AreaEditorMap(props: AreaEditorMapProps) {
   const { label, region, areas, selectedId, points, renderPopup, layers, mode, tileUrl, tileAttribution, className } = props;
   const { boundaries, problem: boundaryProblem } = useOfflineBoundaries();
-  const latest = useRef<LatestProps>({ mode, onSelect: props.onSelect, onCreate: props.onCreate, onChange: props.onChange, onModeChange: props.onModeChange });
+  const latest = useRef<LatestProps>({ mode, onSelect: props.onSelect, onCreate: props.onCreate, onChange: props.onChange, onLiveChange: props.onLiveChange, onModeChange: props.onModeChange });
   useLayoutEffect(() => {
-    latest.current = { mode, onSelect: props.onSelect, onCreate: props.onCreate, onChange: props.onChange, onModeChange: props.onModeChange };
+    latest.current = { mode, onSelect: props.onSelect, onCreate: props.onCreate, onChange: props.onChange, onLiveChange: props.onLiveChange, onModeChange: props.onModeChange };
   });
   const pointsInteractive = mode === 'select';
 
@@ -335,6 +429,9 @@ export function AreaEditorMap(props: AreaEditorMapProps) {
           </Pane>
         ) : null}
         <AreaLayers areas={areas} selectedId={selectedId} visible={layers.areas} mode={mode} latest={latest} />
+        <Pane name="judgements" style={{ zIndex: 440, pointerEvents: 'none' }}>
+          <JudgementLayer points={layers.soundings ? (props.judged ?? []) : []} />
+        </Pane>
         {layers.soundings ? (
           <Pane name="soundings" style={{ zIndex: 450, pointerEvents: pointsInteractive ? undefined : 'none' }}>
             {points.features.map((point) => {

@@ -34,21 +34,29 @@ function MiniHistogram({ stats, label }: { stats: ParameterStatsReport; label: s
 }
 
 interface EvidencePanelProps {
-  report: AreaEvidenceReport | undefined;
+  report: Pick<AreaEvidenceReport, 'evidence' | 'support'> | undefined;
   stale: boolean;
+  /** Computed in the browser from the soundings' stored figures while the draft is ahead of the server's answer. */
+  preview?: boolean;
   units: UnitFormatters;
   stationOf: (soundingId: string) => string;
 }
 
 /** The evidence for one area: count, min/median/p90/max per parameter with histograms, support check, sounding links. */
-export function EvidencePanel({ report, stale, units, stationOf }: EvidencePanelProps) {
+export function EvidencePanel({ report, stale, preview = false, units, stationOf }: EvidencePanelProps) {
   if (!report) {
     return <p className="text-[13px] text-ink-muted">Evidence appears once this area is saved (a couple of seconds after your last change).</p>;
   }
   const { evidence, support } = report;
   return (
-    <div className="space-y-3" aria-busy={stale || undefined}>
-      {stale ? <p className="text-[12px] text-ink-faint">From the last save; updating after the next save.</p> : null}
+    <div className="space-y-3" aria-busy={stale || undefined} data-evidence={preview ? 'preview' : stale ? 'stale' : 'record'}>
+      {preview ? (
+        <p className="rounded border border-dashed border-accent/50 bg-accent-soft px-2 py-1 text-[12px] text-accent-strong" data-testid="evidence-preview">
+          Live preview from the soundings’ stored figures; the server’s check after the next save is the record.
+        </p>
+      ) : stale ? (
+        <p className="text-[12px] text-ink-faint">From the last save; updating after the next save.</p>
+      ) : null}
       <div className="flex items-center justify-between gap-2">
         <p className="text-sm">
           <span className="font-semibold" data-testid="evidence-count">
@@ -62,7 +70,9 @@ export function EvidencePanel({ report, stale, units, stationOf }: EvidencePanel
             </span>
           ) : null}
         </p>
-        <SupportBadge result={support.result} />
+        <span data-testid="support-result">
+          <SupportBadge result={support.result} />
+        </span>
       </div>
       <div>
         <h3 className="text-[13px] font-semibold">Support check</h3>

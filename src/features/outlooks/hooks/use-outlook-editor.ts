@@ -46,7 +46,8 @@ export function useOutlookEditor(initial: Outlook, editable: boolean) {
       setServer(outlook);
       setError(null);
       queryClient.setQueryData(outlooksKeys.detail(outlookId), outlook);
-      void queryClient.invalidateQueries({ queryKey: outlooksKeys.all, predicate: (query) => query.queryKey[1] !== 'detail' });
+      // The detail was just set; the evidence candidates depend on the soundings, not on the draft.
+      void queryClient.invalidateQueries({ queryKey: outlooksKeys.all, predicate: (query) => query.queryKey[1] !== 'detail' && query.queryKey[1] !== 'evidence-candidates' });
     },
     [queryClient, outlookId],
   );

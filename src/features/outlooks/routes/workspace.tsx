@@ -11,7 +11,11 @@ import { useMe } from '../../../hooks/use-me';
 import { useOffice } from '../../../hooks/use-office';
 import { useTabs } from '../../../hooks/use-tabs';
 import { useUnits } from '../../../hooks/use-units';
-import { AreaEditorMap, type AreaShape, type EditorMode, type MapLayersShown } from '../../../lib/map/area-editor-map';
+import { AreaEditorMap, type AreaShape, type EditorMode, type JudgedPoint, type MapLayersShown } from '../../../lib/map/area-editor-map';
+import { soundingJudgements } from '../../../../shared/evidence/area-report';
+import { JudgementLegend } from '../components/judgement-legend';
+import { useLiveEvidence, type LiveEdit } from '../hooks/use-live-evidence';
+import { evidenceView, judgementCounts } from '../utils/live-evidence';
 import type { PointProperties } from '../../../lib/map/point-map';
 import type { OfficeSettings } from '../../../../shared/contracts/office';
 import type { Outlook, RiskAreaInput } from '../../../../shared/contracts/outlooks';
@@ -95,6 +99,32 @@ function Workspace({ initial, office, mayAuthor }: { initial: Outlook; office: O
   const evidence = useOutlookEvidence(initial.id, source);
   const reports = useMemo(() => new Map<string, AreaEvidenceReport>((evidence.data?.areas ?? []).map((r) => [r.areaId, r])), [evidence.data]);
   const soundings = usePeriodSoundings(document.validFrom, document.validUntil);
+  // Live preview: the selected area's evidence and support check recomputed in the browser as a
+  // vertex moves, until the server's answer for the saved draft replaces it.
+  const [live, setLive] = useState<LiveEdit | null>(null);
+  const liveEvidence = useLiveEvidence({
+    outlookId: initial.id,
+    savedPeriod: { validFrom: editor.server.validFrom, validUntil: editor.server.validUntil },
+    period: { validFrom: document.validFrom, validUntil: document.validUntil },
+    source,
+    ladder,
+    storedGuidance: office.guidanceThresholds,
+    area: selected,
+    live,
+  });
+  const view = evidenceView({
+    record: selected ? reports.get(selected.id) : undefined,
+    live: liveEvidence.report,
+    pending: editor.dirty || evidence.isFetching || (live !== null && live.areaId === selected?.id),
+  });
+  const shownReport = view.kind === 'none' ? undefined : view.report;
+  const judgements = shownReport ? soundingJudgements(shownReport) : null;
+  const judged: JudgedPoint[] = judgements
+    ? [...judgements].flatMap(([id, kind]) => {
+        const position = liveEvidence.positions.get(id);
+        return position ? [{ id, longitude: position.longitude, latitude: position.latitude, kind }] : [];
+      })
+    : [];
   const stations = useMemo(() => new Map((soundings.data?.soundings ?? []).map((s) => [s.id, s.stationId])), [soundings.data]);
   const features = useMemo(() => areaFeatures(document.areas, ladder), [document.areas, ladder]);
   const points = useMemo<FeatureCollection<Point, PointProperties>>(
@@ -133,7 +163,14 @@ function Workspace({ initial, office, mayAuthor }: { initial: Outlook; office: O
     },
     [change, document, ladder],
   );
-  const onGeometry = useCallback((areaId: string, geometry: AreaShape) => change(updateArea(document, areaId, { geometry: toAreaGeometry(geometry) })), [change, document]);
+  const onGeometry = useCallback(
+    (areaId: string, geometry: AreaShape) => {
+      setLive(null);
+      change(updateArea(document, areaId, { geometry: toAreaGeometry(geometry) }));
+    },
+    [change, document],
+  );
+  const onLiveChange = useCallback((areaId: string, geometry: AreaShape | null) => setLive(geometry ? { areaId, geometry } : null), []);
   const onFix = (areaId: string, fix: AreaFix) => change(applyAreaFix(document, areaId, fix, ladderKeys, office.region));
   const onImported = (areas: RiskAreaInput[]) => change({ ...document, areas: [...document.areas, ...areas.map((a) => ({ id: crypto.randomUUID(), levelKey: a.levelKey, hazards: a.hazards, geometry: a.geometry, label: a.label }))] });
 
@@ -266,6 +303,8 @@ function Workspace({ initial, office, mayAuthor }: { initial: Outlook; office: O
               }}
               onCreate={onCreate}
               onChange={onGeometry}
+              onLiveChange={onLiveChange}
+              judged={judged}
               onModeChange={setMode}
               renderPopup={(properties) => (
                 <span className="text-[13px]">
@@ -309,6 +348,7 @@ function Workspace({ initial, office, mayAuthor }: { initial: Outlook; office: O
                 if (isPointParameter(event.target.value)) setParameter(event.target.value);
               }}
             />
+            {judgements ? <JudgementLegend counts={judgementCounts(judgements)} preview={view.kind === 'preview'} /> : null}
             <p className="pb-2 text-ink-muted">
               {soundings.data ? `${soundings.data.soundings.length} soundings valid in the period` : soundings.isError ? 'Soundings could not be loaded.' : 'Loading soundings…'}
             </p>
@@ -343,7 +383,7 @@ function Workspace({ initial, office, mayAuthor }: { initial: Outlook; office: O
                       <h2 className="text-sm font-semibold">Evidence</h2>
                       <SelectField label="Source" hideLabel className="w-44" value={source} options={sourceOptions} onChange={(event) => isEvidenceSource(event.target.value) && setSource(event.target.value)} />
                     </div>
-                    <EvidencePanel report={reports.get(selected.id)} stale={editor.dirty || evidence.isFetching} units={units} stationOf={(id) => stations.get(id) ?? 'Sounding'} />
+                    <EvidencePanel report={shownReport} stale={view.kind === 'stale'} preview={view.kind === 'preview'} units={units} stationOf={(id) => stations.get(id) ?? liveEvidence.positions.get(id)?.stationId ?? 'Sounding'} />
                   </section>
                 </>
               ) : (
