@@ -10,26 +10,35 @@ const outline = (...vertices: [number, number][]): RiskAreaInput['geometry'] => 
 /**
  * The invented demo draft, drawn as a forecaster would over the invented demo fields of
  * server/seed/demo-soundings.ts (nothing here is an observed or issued outlook). Each higher
- * level lies inside the one below. What each area is meant to show in the support check:
+ * level lies inside the one below. What each area is meant to show in the support check, over
+ * the draft's period (the 18 and 00 UTC soundings; figures are rough medians):
  *
- * - General thunder: everywhere with some instability (elevated north of the warm front too);
- *   leaves out the dry south-western corner and the cool north-western corner behind the low.
+ * - General thunder: everywhere with some instability, elevated north of the warm front too
+ *   (MUCAPE near 1,000 J/kg); leaves out the dry south-western corner behind the dryline:
+ *   *supported*.
  * - Valley wide (Level 1): the warm sector, the dryline, and the band of elevated instability
- *   north of the front; much of it is capped or elevated, so it should come out *supported*
- *   at Level 1 without reaching Level 2.
- * - Warm sector (Level 2): the moist, unstable tongue between the dryline and the front;
- *   MLCAPE 1,000–3,000 J/kg with 0–6 km shear near 16–18 m/s in the south and more near the
- *   front: *supported*.
- * - Southern lowlands (Level 1, flooding): deep moisture (precipitable water near 40 mm),
- *   slow-moving storms, MLCAPE mostly above 1,000 J/kg and 16–18 m/s of shear: most soundings
- *   meet Level 2, so the *environment exceeds the level* the forecaster chose.
- * - Dryline and low (Level 2): few soundings, with a high cloud base west of the dryline and a
- *   cap near the low: *thin support*; the wind hazard (large downdraft CAPE, steep low-level
- *   lapse rates) is better backed than hail (little CAPE).
- * - Warm-front corridor (Level 3): backed surface winds under the low-level jet along the warm
- *   side of the front: 0–1 km SRH 130–210 m²/s², low cloud base, strong shear and
- *   MLCAPE 1,500–3,500 J/kg: *supported*, tornado included; it falls short of Level 4 (0–1 km
- *   SRH mostly under 200 m²/s²).
+ *   north of the front, where a cool surface layer leaves little MLCAPE and the cap holds
+ *   longest in the east: *supported* at Level 1, about 40 % of its soundings back Level 2.
+ *   Hail (elevated MUCAPE, 700–500 hPa lapse rates near 7.3 °C/km) fits better than wind.
+ * - Warm sector (Level 2): the moist tongue between the dryline and the front; MLCAPE
+ *   1,500–3,000 J/kg, 0–6 km shear 16–18 m/s in the south and more near the front: *supported*
+ *   (only the soundings near the front back Level 3). Hail: MUCAPE near 3,000 J/kg, CAPE
+ *   near 1,000 J/kg between −10 and −30 °C, lapse rates near 7.5 °C/km; wind: downdraft
+ *   CAPE near 1,000 J/kg.
+ * - Southern lowlands (Level 1; flooding, wind): deep moisture (precipitable water near 37 mm,
+ *   warm-cloud depth near 3 km), a low-level jet nearly parallel to the cloud-layer wind (upwind
+ *   Corfidi vector near 6 m/s: slow, backbuilding storms), MLCAPE mostly above 1,000 J/kg with
+ *   16–18 m/s of shear: most soundings back Level 2, so the *environment exceeds the level*.
+ *   Flooding is well backed; wind less so (downdraft CAPE near 850 J/kg, weak mean wind).
+ * - Dryline and low (Level 2; wind, hail): six soundings, two of which back Level 2; the rest
+ *   lie west of the dryline (cloud base 2–3 km, little CAPE) or under the cap near the low:
+ *   *thin support*. Wind is backed better (downdraft CAPE above 1,100 J/kg, 0–3 km lapse rates
+ *   near 8.7 °C/km) than hail (MUCAPE near 1,300 J/kg, under half the warm sector's).
+ * - Warm-front corridor (Level 3; tornado, significant hail, wind): backed surface winds under
+ *   the low-level jet along the warm side of the front: 0–500 m SRH near 150 m²/s², 0–1 km SRH
+ *   130–250 m²/s², cloud base near 750 m, effective shear near 26 m/s, MLCAPE 1,500–3,000 J/kg:
+ *   *supported*, tornado included. It falls short of Level 4: most of its soundings have 0–1 km
+ *   SRH under 200 m²/s².
  */
 export const demoOutlookAreas: RiskAreaInput[] = [
   {
