@@ -1,8 +1,10 @@
 /**
- * Invented storm reports for the demo office's past demo day, so verification has something
- * honest to show: clusters around the demo soundings with the most mixed-layer CAPE at 18 UTC
- * (where the warm sector meets the jet), spread through the afternoon and evening, plus a few
- * reports far from the instability and outside every risk area. Nothing here is observed.
+ * Invented storm reports for the demo office's past demo days, so verification has something
+ * honest to show: clusters around the demo soundings with the highest supercell composite
+ * parameter at 18 UTC (along the warm front and in the moist tongue, mostly inside the Level 2
+ * and Level 3 areas), spread through the afternoon and evening, a few flooding reports in the
+ * southern lowlands, and a few reports far from the instability and outside every risk area.
+ * Nothing here is observed.
  */
 import { analyzeSounding } from '../../shared/sounding/analyze';
 import { validateSounding } from '../../shared/sounding/validate';
@@ -22,10 +24,10 @@ export function generateDemoReports(day: Date): StormReport[] {
   const ranked = soundings
     .map((s) => {
       const parsed = validateSounding(s);
-      const cape = parsed.ok ? analyzeSounding(parsed.value.levels).mixedLayer.cape : 0;
-      return { latitude: s.metadata.latitude, longitude: s.metadata.longitude, cape };
+      const scp = parsed.ok ? (analyzeSounding(parsed.value.levels, { latitude: s.metadata.latitude }).composites.supercellComposite ?? 0) : 0;
+      return { latitude: s.metadata.latitude, longitude: s.metadata.longitude, scp };
     })
-    .sort((a, b) => b.cape - a.cape)
+    .sort((a, b) => b.scp - a.scp)
     .slice(0, 4);
   // A different draw each day (same invented fields), the same on every machine.
   const random = seededRandom(20270418 + day.getUTCDate());
@@ -53,10 +55,19 @@ export function generateDemoReports(day: Date): StormReport[] {
       });
     }
   });
+  // Slow storms over the deep moisture of the southern lowlands: a few flooding reports.
+  const floods: [number, number][] = [
+    [36.1, -89.9],
+    [36.5, -89.2],
+    [36.3, -88.6],
+  ];
+  floods.forEach(([latitude, longitude], i) => {
+    reports.push({ time: at(4 + i * 0.8), latitude, longitude, hazard: 'flood', hailCm: null, gustKmh: null, gustMeasured: null, efRating: null, source: 'emergency_manager', remark: pick(remarks.flood) });
+  });
   // A few reports far from the instability, outside every demo risk area: honest misses.
   const outliers: [number, number, StormReport['hazard']][] = [
     [41.2, -96.2, 'wind'],
-    [40.9, -95.4, 'hail'],
+    [41.1, -95.9, 'hail'],
     [35.8, -96.1, 'wind'],
   ];
   outliers.forEach(([latitude, longitude, hazard], i) => {

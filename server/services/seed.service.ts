@@ -15,7 +15,7 @@ import { amendIssuance } from './issuances.service';
 import { createOutlook, getOutlook, saveOutlook } from './outlooks.service';
 import { transitionOutlook } from './workflow.service';
 import { processDistributionJobs } from './distribution.service';
-import { generateDemoSoundings } from '../seed/demo-soundings';
+import { demoRegion, generateDemoSoundings } from '../seed/demo-soundings';
 import { seedSoundings } from './soundings.service';
 import { ingestReports } from './verification.service';
 import { generateDemoReports } from '../seed/demo-reports';
@@ -43,7 +43,7 @@ const demoSubscriptions: { email: string; threshold: string; hazards: HazardKind
 export const demoOffice = {
   slug: 'meridian-valley',
   name: 'Meridian Valley Weather Office',
-  region: { west: -96.5, south: 35.5, east: -87.5, north: 41.5 },
+  region: { ...demoRegion },
   timeZone: 'America/Chicago',
 };
 

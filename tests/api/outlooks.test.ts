@@ -75,7 +75,7 @@ describe('PUT /api/outlooks/:outlookId', () => {
 });
 
 describe('evidence and support check', () => {
-  it('When the demo draft is read, then each area has evidence from the demo soundings and the north-western area is thin', async () => {
+  it('When the demo draft is read, then each area has evidence from the demo soundings and the dryline area is thin', async () => {
     const list = await forecaster.get('/api/outlooks').query({ state: 'draft' });
     const demo = list.body.outlooks.find((o: { headline: string }) => o.headline.startsWith('Scattered severe storms'));
     expect(demo).toBeDefined();
@@ -86,7 +86,7 @@ describe('evidence and support check', () => {
     const byLabel = new Map<string, { support: { result: string }; evidence: { count: number } }>(
       res.body.areas.map((a: { areaId: string }) => [detail.body.areas.find((d: { id: string; label: string }) => d.id === a.areaId).label, a]),
     );
-    expect(byLabel.get('North-west (thin)')?.support.result).toBe('thin');
+    expect(byLabel.get('Dryline and low')?.support.result).toBe('thin');
     expect(byLabel.get('General thunder')?.evidence.count).toBeGreaterThan(50);
     const results = new Set(res.body.areas.map((a: { support: { result: string } }) => a.support.result));
     expect(results.size, 'the demo areas are supported to different degrees').toBeGreaterThan(2);

@@ -35,9 +35,9 @@ export const evidenceSixAreas: BenchFigure = {
         bulkShear0to6kmMs: random() * 35, srh0to1km: random() * 300, stp: random() * 5, scp: random() * 15, surfaceDewpointC: 5 + random() * 18, surfaceMixingRatioGkg: 6 + random() * 12, flagCount: 0,
       },
     }));
-    const core = demoOutlookAreas[demoOutlookAreas.length - 1];
-    if (!core) throw new Error('evidence bench: the demo outlook has no areas');
-    const areas: RiskArea[] = [...demoOutlookAreas, { ...core, levelKey: 'level4' }].map((a, i) => ({ ...a, id: `a${i}`, sortOrder: i }));
+    // The demo draft's six areas (thunder to Level 3).
+    const areas: RiskArea[] = demoOutlookAreas.slice(0, 6).map((a, i) => ({ ...a, id: `a${i}`, sortOrder: i }));
+    if (areas.length !== 6) throw new Error('evidence bench: the demo outlook needs 6 areas');
     const outlook = { areas, validFrom: '2027-04-18T12:00:00.000Z', validUntil: '2027-04-19T11:00:00.000Z' };
     const run = () => buildEvidenceReport({ outlook, candidates: soundings, ladder: defaultRiskLadder, guidance: defaultSupportGuidance, region: demoOffice.region });
     for (let i = 0; i < 3; i++) run();
