@@ -3,7 +3,7 @@
  * per model (older ones deleted in the background, a slice at a time so requests keep being
  * answered), and read a grid sounding back with its analysis.
  */
-import { and, asc, desc, eq, inArray, sql } from 'drizzle-orm';
+import { and, asc, desc, eq, getTableColumns, inArray, sql } from 'drizzle-orm';
 import type { Logger } from 'pino';
 import type { ModelRunRetention, ModelRunSummary } from '../../shared/contracts/model-runs';
 import { modelRunStateSchema } from '../../shared/contracts/model-runs';
@@ -164,7 +164,7 @@ function summaryOf(row: GridRow): GridSoundingSummary {
 export async function listGridSoundings(db: DatabaseOrTransaction, runId: string, page: { offset: number; limit: number }): Promise<Result<{ total: number; items: GridSoundingSummary[] }, AppError>> {
   const [run] = await db.select({ soundingCount: modelRuns.soundingCount }).from(modelRuns).where(eq(modelRuns.id, runId));
   if (!run) return err(appError('NOT_FOUND', 'That model run does not exist (it may have been deleted already).'));
-  const { levels: _levels, ...columns } = gridSoundings._.columns;
+  const { levels: _levels, ...columns } = getTableColumns(gridSoundings);
   const rows = await db.select(columns).from(gridSoundings).where(eq(gridSoundings.runId, runId)).orderBy(asc(gridSoundings.pointIndex)).offset(page.offset).limit(page.limit);
   return ok({ total: run.soundingCount, items: rows.map(summaryOf) });
 }

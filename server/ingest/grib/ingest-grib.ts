@@ -29,6 +29,15 @@ export interface GribIngestConfig {
   insertRows?: number;
 }
 
+/** What intake needs from the app (an AppContext fits). */
+export interface GribIngestContext {
+  db: Database;
+  logger: Logger;
+  /** The app's configuration (not read yet; accepted so an AppContext can be passed as it is). */
+  config?: object;
+  gribTuning?: GribIngestConfig;
+}
+
 export interface GribIngestInput {
   officeId: string;
   filePath: string;
@@ -87,7 +96,7 @@ interface RunGroup {
  * with the same model, cycle and forecast hour is replaced.
  * @returns the runs made and their size, or the reason nothing (more) was stored
  */
-export async function ingestGribFile(ctx: { db: Database; logger: Logger; config?: GribIngestConfig }, input: GribIngestInput): Promise<Result<GribIngestSummary, { reason: string }>> {
+export async function ingestGribFile(ctx: GribIngestContext, input: GribIngestInput): Promise<Result<GribIngestSummary, { reason: string }>> {
   try {
     return await ingest(ctx, input);
   } catch (error) {
@@ -96,7 +105,7 @@ export async function ingestGribFile(ctx: { db: Database; logger: Logger; config
   }
 }
 
-async function ingest(ctx: { db: Database; logger: Logger; config?: GribIngestConfig }, rawInput: GribIngestInput): Promise<Result<GribIngestSummary, { reason: string }>> {
+async function ingest(ctx: GribIngestContext, rawInput: GribIngestInput): Promise<Result<GribIngestSummary, { reason: string }>> {
   const parsed = inputSchema.safeParse(rawInput);
   if (!parsed.success) return err({ reason: parsed.error.issues.map((issue) => issue.message).join(' ') });
   const input = { ...rawInput, ...parsed.data };
@@ -220,15 +229,15 @@ async function ingest(ctx: { db: Database; logger: Logger; config?: GribIngestCo
 
 /** Analyse the usable soundings in the pool (a few batches in flight) and insert them as they come back. */
 async function analyseAndStore(
-  ctx: { db: Database; config?: GribIngestConfig },
+  ctx: GribIngestContext,
   runId: string,
   selection: GridSelection,
   packed: ReturnType<typeof buildGridSoundings>,
   signal: AbortSignal | undefined,
   progress: (count: number) => void,
 ): Promise<Result<void, { reason: string }>> {
-  const batchSize = ctx.config?.batchSize ?? 1000;
-  const insertRows = ctx.config?.insertRows ?? 500;
+  const batchSize = ctx.gribTuning?.batchSize ?? 1000;
+  const insertRows = ctx.gribTuning?.insertRows ?? 500;
   const points: number[] = [];
   for (let slot = 0; slot < packed.usable.length; slot++) if (packed.usable[slot]) points.push(slot);
   const batches: number[][] = [];
