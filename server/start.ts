@@ -16,6 +16,7 @@ import { startDistributionWorker } from './services/distribution.service';
 import { startWebhookWorker } from './services/webhooks.service';
 import { startVerificationWorker, verifyDueIssuances } from './services/verification.service';
 import { closeGeometryPool } from './workers/geometry-pool';
+import { eccodesStatus } from './ingest/eccodes';
 
 export interface StartOptions {
   clientMode: ClientMode;
@@ -60,6 +61,8 @@ export async function startStormdraft(config: Config, options: StartOptions): Pr
   await verifyDueIssuances(db);
   const stopVerification = config.outboxIntervalMs > 0 ? startVerificationWorker(db, 5 * 60_000, (error) => logger.error({ err: error }, 'verification worker')) : async () => {};
   const app = await createApp(ctx, options.clientMode);
+  // GRIB2/BUFR intake needs ecCodes; the app runs without it and says what is disabled.
+  void eccodesStatus().then((status) => (status.available ? logger.info(status.message) : logger.warn(status.message)));
   return {
     app,
     ctx,

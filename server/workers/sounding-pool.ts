@@ -45,6 +45,22 @@ export async function runSoundingTask(task: SoundingTask, budgetMs = SOUNDING_TA
   }
 }
 
+/**
+ * Run a task of another worker file in the same pool (piscina takes a file per task), so
+ * batch work such as GRIB intake shares the threads with uploads instead of adding more.
+ * @param filename - URL of the worker module (its default export is the task)
+ * @param signal - stops the task when aborted
+ */
+export function runInSoundingPool<Task, Answer>(filename: string, task: Task, signal?: AbortSignal): Promise<Answer> {
+  // eslint-disable-next-line @typescript-eslint/no-unsafe-type-assertion -- piscina types a pool by its default file's task; a task of another file has that file's own types.
+  return (soundingPool() as unknown as Piscina<Task, Answer>).run(task, { filename, signal });
+}
+
+/** Threads of the pool (callers keep at most this many batch tasks queued, so uploads are not starved). */
+export function soundingPoolThreads(): number {
+  return soundingPool().options.maxThreads;
+}
+
 /** Stop the pool's threads (tests and shutdown). */
 export async function closeSoundingPool(): Promise<void> {
   const current = pool;

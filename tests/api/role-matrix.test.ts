@@ -109,6 +109,12 @@ const matrix: MatrixRow[] = [
   { method: 'get', route: '/api/public/issuances/:issuanceNumber/verification', url: '/api/public/issuances/1999-0001/verification', expect: anyone(404) },
   { method: 'get', route: '/api/verification', url: '/api/verification', expect: readers(200) },
   { method: 'get', route: '/api/verification/export.csv', url: '/api/verification/export.csv', expect: readers(200) },
+  { method: 'get', route: '/api/model-runs', url: '/api/model-runs', expect: readers(200) },
+  { method: 'get', route: '/api/model-runs/retention', url: '/api/model-runs/retention', expect: readers(200) },
+  { method: 'put', route: '/api/model-runs/retention', url: '/api/model-runs/retention', body: {}, expect: staffOnly(400) },
+  { method: 'delete', route: '/api/model-runs/:runId', url: `/api/model-runs/${missingId}`, expect: { anonymous: 401, subscriber: 403, forecaster: 403, lead: 404, admin: 404 } },
+  { method: 'get', route: '/api/model-runs/:runId/soundings', url: `/api/model-runs/${missingId}/soundings`, expect: readers(404) },
+  { method: 'get', route: '/api/grid-soundings/:gridSoundingId', url: `/api/grid-soundings/${missingId}:0`, expect: readers(404) },
   { method: 'post', route: '/api/mail-outbox/:messageId/resend', url: `/api/mail-outbox/${missingId}/resend`, body: {}, expect: staffOnly(409) },
 ];
 

@@ -5,6 +5,7 @@ import { evidenceSixAreas } from './evidence';
 import { liveEvidenceSixAreas } from './live-evidence';
 import { evidenceTenThousandVertices, healthDuringPublish } from './heavy-work';
 import { verifyOneIssuance } from './verification';
+import { gribBytesPerSounding, gribIngestFortyThousand } from './grib';
 import { assertParses, fixtureTexts, oddSoundingTexts, syntheticSounding } from './soundings';
 
 /** One benchmark figure: how to measure it and the unit it is printed in. */
@@ -116,4 +117,4 @@ const slowestFile: BenchFigure = {
 /** JavaScript (gzip) the public bulletin loads before it can show anything; issue 13's budget is 150 KB. */
 const bulletinInitialJs: BenchFigure = { name: 'bulletin_initial_js_kb_gzip', unit: 'KB', measure: bulletinInitialJsKbGzip };
 
-export const BENCH_FIGURES: BenchFigure[] = [analysesPerSecond(100), analysesPerSecond(1000), analysesPerSecond(5000), slowestFile, twoThousandSoundings, evidenceSixAreas, liveEvidenceSixAreas, evidenceTenThousandVertices, matchTenThousandSubscribers, smtpMessagesPerSecond, healthDuringPublish, bulletinInitialJs, verifyOneIssuance];
+export const BENCH_FIGURES: BenchFigure[] = [analysesPerSecond(100), analysesPerSecond(1000), analysesPerSecond(5000), slowestFile, twoThousandSoundings, evidenceSixAreas, liveEvidenceSixAreas, evidenceTenThousandVertices, matchTenThousandSubscribers, smtpMessagesPerSecond, healthDuringPublish, bulletinInitialJs, verifyOneIssuance, gribIngestFortyThousand, gribBytesPerSounding];

@@ -84,3 +84,15 @@ export const gridSoundings = pgTable(
   },
   (t) => [primaryKey({ columns: [t.runId, t.pointIndex] })],
 );
+
+/**
+ * The office's model-run settings: how many runs per model to keep (older runs and their grid
+ * soundings are deleted in the background after each intake).
+ */
+export const modelRunSettings = pgTable('model_run_settings', {
+  officeId: uuid()
+    .primaryKey()
+    .references(() => offices.id, { onDelete: 'cascade' }),
+  runsKeptPerModel: integer().notNull().default(4),
+  updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+});

@@ -36,6 +36,12 @@ CREATE TABLE "grid_soundings" (
 	CONSTRAINT "grid_soundings_run_id_point_index_pk" PRIMARY KEY("run_id","point_index")
 );
 --> statement-breakpoint
+CREATE TABLE "model_run_settings" (
+	"office_id" uuid PRIMARY KEY NOT NULL,
+	"runs_kept_per_model" integer DEFAULT 4 NOT NULL,
+	"updated_at" timestamp with time zone DEFAULT now() NOT NULL
+);
+--> statement-breakpoint
 CREATE TABLE "model_runs" (
 	"id" uuid PRIMARY KEY DEFAULT gen_random_uuid() NOT NULL,
 	"office_id" uuid NOT NULL,
@@ -54,7 +60,9 @@ CREATE TABLE "model_runs" (
 	"created_at" timestamp with time zone DEFAULT now() NOT NULL
 );
 --> statement-breakpoint
+ALTER TABLE "offices" ADD COLUMN "support_guidance" jsonb;--> statement-breakpoint
 ALTER TABLE "grid_soundings" ADD CONSTRAINT "grid_soundings_run_id_model_runs_id_fk" FOREIGN KEY ("run_id") REFERENCES "public"."model_runs"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
+ALTER TABLE "model_run_settings" ADD CONSTRAINT "model_run_settings_office_id_offices_id_fk" FOREIGN KEY ("office_id") REFERENCES "public"."offices"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "model_runs" ADD CONSTRAINT "model_runs_office_id_offices_id_fk" FOREIGN KEY ("office_id") REFERENCES "public"."offices"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 CREATE UNIQUE INDEX "model_runs_office_run_idx" ON "model_runs" USING btree ("office_id","model","cycle_time","forecast_hour");--> statement-breakpoint
 CREATE INDEX "model_runs_office_id_valid_time_index" ON "model_runs" USING btree ("office_id","valid_time");

@@ -1,1 +1,0 @@
-ALTER TABLE "offices" ADD COLUMN "support_guidance" jsonb;
