@@ -16,6 +16,7 @@ import { startDistributionWorker } from './services/distribution.service';
 import { startWebhookWorker } from './services/webhooks.service';
 import { startVerificationWorker, verifyDueIssuances } from './services/verification.service';
 import { closeGeometryPool } from './workers/geometry-pool';
+import { startIntake } from './ingest/intake/intake-runtime';
 
 export interface StartOptions {
   clientMode: ClientMode;
@@ -60,12 +61,15 @@ export async function startStormdraft(config: Config, options: StartOptions): Pr
   await verifyDueIssuances(db);
   const stopVerification = config.outboxIntervalMs > 0 ? startVerificationWorker(db, 5 * 60_000, (error) => logger.error({ err: error }, 'verification worker')) : async () => {};
   const app = await createApp(ctx, options.clientMode);
+  // The intake folder and scheduled pulls (GRIB2, BUFR, CSV taken in on their own).
+  const intake = config.intakeDir ? await startIntake(ctx, config.intakeDir) : undefined;
   return {
     app,
     ctx,
     catcher,
     dump: database.dump,
     async close() {
+      await intake?.stop();
       await stopDistribution();
       await stopWorker();
       await closeGeometryPool();

@@ -108,6 +108,13 @@ const matrix: MatrixRow[] = [
   { method: 'get', route: '/api/public/issuances/:issuanceNumber/verification', url: '/api/public/issuances/1999-0001/verification', expect: anyone(404) },
   { method: 'get', route: '/api/verification', url: '/api/verification', expect: readers(200) },
   { method: 'get', route: '/api/verification/export.csv', url: '/api/verification/export.csv', expect: readers(200) },
+  { method: 'get', route: '/api/intake/status', url: '/api/intake/status', expect: readers(200) },
+  { method: 'get', route: '/api/intake-files', url: '/api/intake-files', expect: readers(200) },
+  { method: 'get', route: '/api/intake-sources', url: '/api/intake-sources', expect: staffOnly(200) },
+  { method: 'post', route: '/api/intake-sources', url: '/api/intake-sources', body: {}, expect: staffOnly(400) },
+  { method: 'patch', route: '/api/intake-sources/:sourceId', url: `/api/intake-sources/${missingId}`, body: {}, expect: staffOnly(400) },
+  { method: 'delete', route: '/api/intake-sources/:sourceId', url: `/api/intake-sources/${missingId}`, expect: staffOnly(404) },
+  { method: 'post', route: '/api/intake-sources/:sourceId/pull', url: `/api/intake-sources/${missingId}/pull`, body: {}, expect: staffOnly(404) },
   { method: 'post', route: '/api/mail-outbox/:messageId/resend', url: `/api/mail-outbox/${missingId}/resend`, body: {}, expect: staffOnly(409) },
 ];
 
