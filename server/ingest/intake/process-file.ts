@@ -12,6 +12,7 @@ import { and, eq, inArray } from 'drizzle-orm';
 import { intakeFiles } from '../../db/schema';
 import { findOffice } from '../../services/office.service';
 import { ingesters, type IngestContext } from './ingesters';
+import { megabytes } from './megabytes';
 import { recogniseFormat, RECOGNISE_BYTES } from './recognise-format';
 
 /** Where a file came from. */
@@ -118,13 +119,14 @@ export async function processIntakeFile(ctx: IngestContext, filePath: string, or
     }
   };
   const recordFailure = async (contentHash: string, format: string, reason: string) => {
-    const [row] = await ctx.db.insert(intakeFiles).values({ ...base, contentHash, format, state: 'failed', failure: reason, startedAt: new Date(), finishedAt: new Date() }).returning({ id: intakeFiles.id });
+    // Moved first: once the record says failed, the file is already in failed/.
     await move('failed');
+    const [row] = await ctx.db.insert(intakeFiles).values({ ...base, contentHash, format, state: 'failed', failure: reason, startedAt: new Date(), finishedAt: new Date() }).returning({ id: intakeFiles.id });
     return { state: 'failed' as const, id: row?.id ?? '' };
   };
 
   if (size > options.maxBytes) {
-    return recordFailure(`oversize:${size}:${fileName}`, 'unknown', `${fileName} is ${Math.round(size / 1_000_000)} MB; the intake takes files up to ${Math.round(options.maxBytes / 1_000_000)} MB.`);
+    return recordFailure(`oversize:${size}:${fileName}`, 'unknown', `${fileName} is ${megabytes(size)}; the intake takes files up to ${megabytes(options.maxBytes)}.`);
   }
   if (size === 0) return recordFailure(`empty:${fileName}`, 'unknown', `${fileName} is empty.`);
   const contentHash = await sha256File(filePath);
@@ -139,11 +141,11 @@ export async function processIntakeFile(ctx: IngestContext, filePath: string, or
     return row?.id ?? null;
   };
   const duplicate = async (of: string) => {
+    await move('done');
     const [row] = await ctx.db
       .insert(intakeFiles)
       .values({ ...base, contentHash, format: recognised.format, state: 'duplicate', duplicateOfId: of, notes: ['The same content was taken in before; nothing new was stored.'], startedAt: new Date(), finishedAt: new Date() })
       .returning({ id: intakeFiles.id });
-    await move('done');
     return { state: 'duplicate' as const, id: row?.id ?? '' };
   };
   const earlier = await live();
@@ -169,16 +171,21 @@ export async function processIntakeFile(ctx: IngestContext, filePath: string, or
     outcome = { ok: false, error: { reason: `${fileName} could not be taken in because of an unexpected error on the server; the error is in the server log.` } };
   }
   await progress.settle();
-  if (!outcome.ok) {
-    await ctx.db.update(intakeFiles).set({ state: 'failed', failure: outcome.error.reason, finishedAt: new Date() }).where(eq(intakeFiles.id, id));
-    await move('failed');
+  if (!outcome.ok && options.signal?.aborted) {
+    // Stopped with the server: the file stays where it is and is taken in again at the next start.
+    await ctx.db.update(intakeFiles).set({ state: 'failed', failure: 'The server stopped while this file was being taken in; it is taken in again at the next start.', finishedAt: new Date() }).where(eq(intakeFiles.id, id));
     return { state: 'failed', id };
   }
+  if (!outcome.ok) {
+    await move('failed');
+    await ctx.db.update(intakeFiles).set({ state: 'failed', failure: outcome.error.reason, finishedAt: new Date() }).where(eq(intakeFiles.id, id));
+    return { state: 'failed', id };
+  }
+  await move('done');
   const value = outcome.value;
   await ctx.db
     .update(intakeFiles)
     .set({ state: 'done', soundingCount: value.soundingCount, duplicateSoundingCount: value.duplicateCount, runIds: value.runIds, notes: value.notes, finishedAt: new Date() })
     .where(eq(intakeFiles.id, id));
-  await move('done');
   return { state: 'done', id };
 }

@@ -8,6 +8,7 @@ import path from 'node:path';
 import { and, eq } from 'drizzle-orm';
 import { intakeFiles, intakeSources } from '../../db/schema';
 import type { IngestContext } from './ingesters';
+import { megabytes } from './megabytes';
 import { processIntakeFile, type ProcessOptions } from './process-file';
 
 type SourceRow = typeof intakeSources.$inferSelect;
@@ -114,7 +115,7 @@ async function download(url: string, authorization: string | null, target: strin
   const declared = Number(response.headers.get('content-length') ?? '0');
   if (declared > limits.maxBytes) {
     await response.body.cancel();
-    return { ok: false, reason: `the file is ${Math.round(declared / 1_000_000)} MB, over the ${Math.round(limits.maxBytes / 1_000_000)} MB limit` };
+    return { ok: false, reason: `the file is ${megabytes(declared)}, over the ${megabytes(limits.maxBytes)} limit` };
   }
   let received = 0;
   const reader = response.body.getReader();
@@ -135,7 +136,7 @@ async function download(url: string, authorization: string | null, target: strin
   } catch {
     await out.close().catch(() => undefined);
     await unlink(target).catch(() => undefined);
-    return { ok: false, reason: received > limits.maxBytes ? `the file is over the ${Math.round(limits.maxBytes / 1_000_000)} MB limit` : 'the download broke off' };
+    return { ok: false, reason: received > limits.maxBytes ? `the file is over the ${megabytes(limits.maxBytes)} limit` : 'the download broke off' };
   }
 }
 
