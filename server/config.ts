@@ -25,6 +25,7 @@ const envSchema = z.object({
     .regex(/^https?:\/\/[^\s]+\{z\}[^\s]*\{x\}[^\s]*\{y\}/, { message: 'TILE_URL must be an http(s) tile template with {z}, {x} and {y}, e.g. https://tiles.example.org/{z}/{x}/{y}.png' })
     .optional(),
   TILE_ATTRIBUTION: z.string().trim().max(300).optional(),
+  INTAKE_DIR: z.string().optional(),
 });
 
 /** Express's `trust proxy` setting: false (trust nobody), a hop count, or named ranges/addresses. */
@@ -76,6 +77,14 @@ export interface Config {
   /** Base-map tile template for every map, client and server (TILE_URL); none: offline outlines only. */
   tileUrl: string | undefined;
   tileAttribution: string | undefined;
+  /** The watched intake folder (INTAKE_DIR, default <DATA_DIR>/intake); none: no folder and no scheduled pulls. */
+  intakeDir?: string | undefined;
+  /** Largest file the intake takes, bytes (default 512 MiB). */
+  intakeMaxBytes?: number;
+  /** How long a dropped file must stay unchanged before it is taken, ms (default 1000). */
+  intakeSettleMs?: number;
+  /** How often the pull sources are checked, ms (default 60 000; 0 turns the timer off). */
+  intakePollMs?: number;
 }
 
 /** The base map the client draws, from the configuration (sent with the office settings). */
@@ -116,5 +125,6 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, argv: string[] 
     mailFrom: e.MAIL_FROM,
     tileUrl: e.TILE_URL || undefined,
     tileAttribution: e.TILE_ATTRIBUTION || undefined,
+    intakeDir: path.resolve(e.INTAKE_DIR || path.join(e.DATA_DIR, 'intake')),
   };
 }

@@ -17,6 +17,7 @@ import { startWebhookWorker } from './services/webhooks.service';
 import { startVerificationWorker, verifyDueIssuances } from './services/verification.service';
 import { closeGeometryPool } from './workers/geometry-pool';
 import { eccodesStatus } from './ingest/eccodes';
+import { startIntake } from './ingest/intake/intake-runtime';
 
 export interface StartOptions {
   clientMode: ClientMode;
@@ -63,12 +64,15 @@ export async function startStormdraft(config: Config, options: StartOptions): Pr
   const app = await createApp(ctx, options.clientMode);
   // GRIB2/BUFR intake needs ecCodes; the app runs without it and says what is disabled.
   void eccodesStatus().then((status) => (status.available ? logger.info(status.message) : logger.warn(status.message)));
+  // The intake folder and scheduled pulls (GRIB2, BUFR, CSV taken in on their own).
+  const intake = config.intakeDir ? await startIntake(ctx, config.intakeDir) : undefined;
   return {
     app,
     ctx,
     catcher,
     dump: database.dump,
     async close() {
+      await intake?.stop();
       await stopDistribution();
       await stopWorker();
       await closeGeometryPool();

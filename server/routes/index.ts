@@ -1,5 +1,6 @@
 import { capRoutes } from './cap.routes';
 import { healthRoutes } from './health.routes';
+import { intakeRoutes } from './intake.routes';
 import { issuancesRoutes } from './issuances.routes';
 import { mailMessagesRoutes } from './mail-messages.routes';
 import { meRoutes } from './me.routes';
@@ -16,4 +17,4 @@ import { webhooksRoutes } from './webhooks.routes';
 import { workflowRoutes } from './workflow.routes';
 
 /** Every API route of the app (better-auth's own routes under /api/auth are separate). */
-export const apiRoutes: RouteDefinition[] = [...healthRoutes, ...meRoutes, ...officeRoutes, ...usersRoutes, ...mailMessagesRoutes, ...soundingsRoutes, ...outlooksRoutes, ...workflowRoutes, ...issuancesRoutes, ...subscriptionsRoutes, ...capRoutes, ...ogcRoutes, ...webhooksRoutes, ...verificationRoutes, ...modelRunsRoutes];
+export const apiRoutes: RouteDefinition[] = [...healthRoutes, ...meRoutes, ...officeRoutes, ...usersRoutes, ...mailMessagesRoutes, ...soundingsRoutes, ...outlooksRoutes, ...workflowRoutes, ...issuancesRoutes, ...subscriptionsRoutes, ...capRoutes, ...ogcRoutes, ...webhooksRoutes, ...verificationRoutes, ...modelRunsRoutes, ...intakeRoutes];

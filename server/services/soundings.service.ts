@@ -121,7 +121,7 @@ const rejected = (fileName: string, issues: SoundingIssue[]): UploadResult => ({
  * then stored in its own transaction, or recognised as a duplicate of stored content. Any
  * failure becomes this file's rejected result; it never touches the other files.
  */
-async function receiveOne(db: Database, office: string, actor: Actor, name: string, task: SoundingTask, budgetMs: number): Promise<UploadResult> {
+async function receiveOne(db: Database, office: string, actor: Actor | null, name: string, task: SoundingTask, budgetMs: number): Promise<UploadResult> {
   const outcome = await runSoundingTask(task, budgetMs);
   if (!outcome.ok) {
     if ('timedOut' in outcome) {
@@ -185,6 +185,21 @@ export async function createSoundings(db: Database, actor: Actor, inputs: unknow
     results.push(await receiveOne(db, office, actor, `soundings[${index}]`, { kind: 'structured', input }, SOUNDING_TASK_BUDGET_MS));
   }
   return ok(summarise(results));
+}
+
+/**
+ * Intake (files from the intake folder or a scheduled pull, no person involved): each decoded
+ * sounding is validated and analysed in the worker pool and stored on its own, or recognised as a
+ * duplicate of stored content, exactly as an upload. `onEach` reports progress after each one.
+ */
+export async function receiveIntakeSoundings(db: Database, items: { name: string; task: SoundingTask }[], onEach?: (done: number, total: number) => void): Promise<UploadResponse> {
+  const office = await officeId(db);
+  const results: UploadResult[] = [];
+  for (const item of items) {
+    results.push(await receiveOne(db, office, null, item.name, item.task, SOUNDING_TASK_BUDGET_MS));
+    onEach?.(results.length, items.length);
+  }
+  return summarise(results);
 }
 
 const figureColumn = (path: string[]): SQL => sql.raw(`(analysis #>> '{${path.join(',')}}')::double precision`);

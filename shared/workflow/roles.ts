@@ -26,6 +26,12 @@ export const adminRoles = ['admin'] as const satisfies readonly Role[];
 /** Register webhook endpoints: subscribers for their own systems, admins for agencies. */
 export const webhookManagerRoles = ['subscriber', 'admin'] as const satisfies readonly Role[];
 
+/** See the intake (files taken in from the folder and scheduled pulls): forecasters and admins. */
+export const intakeViewerRoles = ['forecaster', 'lead', 'admin'] as const satisfies readonly Role[];
+
+/** Configure scheduled pull sources (addresses and credentials). */
+export const intakeManagerRoles = ['admin'] as const satisfies readonly Role[];
+
 /** Manage their own areas of interest and alert thresholds. */
 export const subscriberRoles = ['subscriber'] as const satisfies readonly Role[];
 

@@ -20,7 +20,7 @@ describe('app shell by role', () => {
     renderApp('/desk');
     await screen.findByRole('heading', { level: 1, name: 'Forecast desk' });
     expect(screen.getAllByRole('heading', { level: 1 }).map((heading) => heading.textContent)).toEqual(['Forecast desk']);
-    expect(await navLinks()).toEqual(['Review queue', 'Forecast desk', 'Soundings', 'Verification', 'Subscribers', 'Public bulletin', 'Account']);
+    expect(await navLinks()).toEqual(['Review queue', 'Forecast desk', 'Soundings', 'Intake', 'Verification', 'Subscribers', 'Public bulletin', 'Account']);
   });
 
   it('when an admin is signed in, the navigation lists users, settings, subscribers, outbox, webhooks and mail', async () => {
@@ -28,7 +28,7 @@ describe('app shell by role', () => {
     renderApp('/admin/users');
     await screen.findByRole('heading', { level: 1, name: 'Users' });
     expect(screen.getAllByRole('heading', { level: 1 }).map((heading) => heading.textContent)).toEqual(['Users']);
-    expect(await navLinks()).toEqual(['Users', 'Office settings', 'Subscribers', 'Outbox', 'Webhooks', 'Mail catcher', 'Soundings', 'Verification', 'Public bulletin', 'Account']);
+    expect(await navLinks()).toEqual(['Users', 'Office settings', 'Subscribers', 'Outbox', 'Webhooks', 'Mail catcher', 'Soundings', 'Intake', 'Verification', 'Public bulletin', 'Account']);
   });
 
   it('when a subscriber opens an admin page, a panel names their role and no admin data is requested', async () => {

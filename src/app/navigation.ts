@@ -1,6 +1,6 @@
 import type { Role } from '../../shared/contracts/common';
 
-export type NavigationIcon = 'desk' | 'soundings' | 'review' | 'alerts' | 'users' | 'settings' | 'mail' | 'bulletin' | 'account' | 'webhooks' | 'verification';
+export type NavigationIcon = 'desk' | 'soundings' | 'review' | 'alerts' | 'users' | 'settings' | 'mail' | 'bulletin' | 'account' | 'webhooks' | 'verification' | 'intake';
 
 export interface NavigationItem {
   label: string;
@@ -17,6 +17,7 @@ const settings: NavigationItem = { label: 'Office settings', to: '/admin/setting
 const mail: NavigationItem = { label: 'Mail catcher', to: '/admin/mail', icon: 'mail' };
 const subscribers: NavigationItem = { label: 'Subscribers', to: '/subscribers', icon: 'alerts' };
 const outbox: NavigationItem = { label: 'Outbox', to: '/admin/outbox', icon: 'mail' };
+const intake: NavigationItem = { label: 'Intake', to: '/intake', icon: 'intake' };
 const verification: NavigationItem = { label: 'Verification', to: '/verification', icon: 'verification' };
 const bulletin: NavigationItem = { label: 'Public bulletin', to: '/bulletin', icon: 'bulletin' };
 const account: NavigationItem = { label: 'Account', to: '/account', icon: 'account' };
@@ -26,12 +27,12 @@ const webhooks: NavigationItem = { label: 'Webhooks', to: '/webhooks', icon: 'we
 export function navigationFor(role: Role): NavigationItem[] {
   switch (role) {
     case 'forecaster':
-      return [desk, soundings, verification, bulletin, account];
+      return [desk, soundings, intake, verification, bulletin, account];
     case 'lead':
-      return [review, desk, soundings, verification, subscribers, bulletin, account];
+      return [review, desk, soundings, intake, verification, subscribers, bulletin, account];
     case 'subscriber':
       return [alerts, webhooks, bulletin, account];
     case 'admin':
-      return [users, settings, subscribers, outbox, webhooks, mail, soundings, verification, bulletin, account];
+      return [users, settings, subscribers, outbox, webhooks, mail, soundings, intake, verification, bulletin, account];
   }
 }

@@ -4,7 +4,7 @@ import { Loading } from '../components/ui/loading';
 import { meQueryOptions } from '../hooks/use-me';
 import { officeQueryOptions } from '../hooks/use-office';
 import type { Role } from '../../shared/contracts/common';
-import { adminRoles, authoringRoles, officeReaderRoles, hasRole, reviewingRoles, subscriberOverseerRoles, subscriberRoles, webhookManagerRoles } from '../../shared/workflow/roles';
+import { adminRoles, authoringRoles, intakeViewerRoles, officeReaderRoles, hasRole, reviewingRoles, subscriberOverseerRoles, subscriberRoles, webhookManagerRoles } from '../../shared/workflow/roles';
 import { homePathFor } from '../utils/roles';
 import { NotFoundPage } from './not-found';
 import { RouteErrorPage } from './route-error';
@@ -233,6 +233,18 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
                   lazy: async () => {
                     const page = await import('../features/webhooks/routes/webhooks');
                     return { Component: page.WebhooksPage, loader: loaderForRoles(queryClient, webhookManagerRoles, page.webhooksLoader(queryClient)) };
+                  },
+                },
+              ],
+            },
+            {
+              lazy: roleGate(intakeViewerRoles),
+              children: [
+                {
+                  path: 'intake',
+                  lazy: async () => {
+                    const page = await import('../features/intake/routes/intake');
+                    return { Component: page.IntakePage, loader: loaderForRoles(queryClient, intakeViewerRoles, page.intakeLoader(queryClient)) };
                   },
                 },
               ],

@@ -115,6 +115,13 @@ const matrix: MatrixRow[] = [
   { method: 'delete', route: '/api/model-runs/:runId', url: `/api/model-runs/${missingId}`, expect: { anonymous: 401, subscriber: 403, forecaster: 403, lead: 404, admin: 404 } },
   { method: 'get', route: '/api/model-runs/:runId/soundings', url: `/api/model-runs/${missingId}/soundings`, expect: readers(404) },
   { method: 'get', route: '/api/grid-soundings/:gridSoundingId', url: `/api/grid-soundings/${missingId}:0`, expect: readers(404) },
+  { method: 'get', route: '/api/intake/status', url: '/api/intake/status', expect: readers(200) },
+  { method: 'get', route: '/api/intake-files', url: '/api/intake-files', expect: readers(200) },
+  { method: 'get', route: '/api/intake-sources', url: '/api/intake-sources', expect: staffOnly(200) },
+  { method: 'post', route: '/api/intake-sources', url: '/api/intake-sources', body: {}, expect: staffOnly(400) },
+  { method: 'patch', route: '/api/intake-sources/:sourceId', url: `/api/intake-sources/${missingId}`, body: {}, expect: staffOnly(400) },
+  { method: 'delete', route: '/api/intake-sources/:sourceId', url: `/api/intake-sources/${missingId}`, expect: staffOnly(404) },
+  { method: 'post', route: '/api/intake-sources/:sourceId/pull', url: `/api/intake-sources/${missingId}/pull`, body: {}, expect: staffOnly(404) },
   { method: 'post', route: '/api/mail-outbox/:messageId/resend', url: `/api/mail-outbox/${missingId}/resend`, body: {}, expect: staffOnly(409) },
 ];
 

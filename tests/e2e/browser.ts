@@ -6,6 +6,7 @@ import type { Server } from 'node:http';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
 import axe from 'axe-core';
 import { createServer } from 'node:net';
+import type { Config } from '../../server/config';
 import { listen, type Stormdraft } from '../../server/start';
 import { startTestApp } from '../api/helpers/test-app';
 
@@ -33,14 +34,14 @@ export interface BrowserJourney {
  * Starts the real app serving the built client (dist/) on a free loopback port, and Debian's
  * chromium through playwright-core with a fresh profile.
  */
-export async function startBrowserJourney(): Promise<BrowserJourney> {
+export async function startBrowserJourney(overrides: Partial<Config> = {}): Promise<BrowserJourney> {
   if (!existsSync(path.resolve(import.meta.dirname, '../../dist/index.html'))) {
     throw new Error('The client is not built: run `npm test` (it builds with vite first) or `npx vite build`.');
   }
   // PUBLIC_URL must name the real port (better-auth checks the Origin), so pick a free port first.
   const port = await freePort();
   const baseUrl = `http://127.0.0.1:${port}`;
-  const sd = await startTestApp({ port, publicUrl: baseUrl }, 'dist');
+  const sd = await startTestApp({ ...overrides, port, publicUrl: baseUrl }, 'dist');
   const server: Server = await listen(sd.app, port);
   const profile = mkdtempSync(path.join(tmpdir(), 'stormdraft-chromium-'));
   const browser = await chromium.launchPersistentContext(profile, {

@@ -1,5 +1,5 @@
 import { clsx } from 'clsx';
-import { Bell, ChartScatter, ChartSpline, CircleUserRound, ClipboardCheck, Inbox, LogOut, Menu, Newspaper, PencilRuler, Settings2, Users, Webhook, X, type LucideIcon } from 'lucide-react';
+import { Bell, ChartScatter, ChartSpline, CircleUserRound, ClipboardCheck, FolderInput, Inbox, LogOut, Menu, Newspaper, PencilRuler, Settings2, Users, Webhook, X, type LucideIcon } from 'lucide-react';
 import { useState } from 'react';
 import { NavLink } from 'react-router';
 import type { Me } from '../../../shared/contracts/users';
@@ -18,6 +18,7 @@ const icons: Record<NavigationIcon, LucideIcon> = {
   account: CircleUserRound,
   webhooks: Webhook,
   verification: ChartScatter,
+  intake: FolderInput,
 };
 
 interface AppNavProps {
