@@ -10,6 +10,7 @@ import { MAX_FILE_BYTES } from '../../../shared/sounding';
 import type { Database } from '../../db/client';
 import { receiveIntakeSoundings } from '../../services/soundings.service';
 import { ingestBufrFile } from '../bufr/ingest-bufr';
+import { ingestGribFile } from '../grib/ingest-grib';
 import type { IntakeFormat } from './recognise-format';
 
 export interface IngestContext {
@@ -59,10 +60,12 @@ const ingestBufr: Ingester = async (ctx, input) => {
   return ok({ soundingCount: done.value.soundingCount, duplicateCount: done.value.duplicateCount, runIds: [], notes });
 };
 
-// ▼▼▼ INTEGRATOR: replace this stub with the real GRIB2 ingester from server/ingest/grib/ingest-grib.ts:
-// const ingestGrib: Ingester = async (ctx, input) => { const r = await ingestGribFile(ctx, input); return r.ok ? ok({ soundingCount: r.value.soundingCount, duplicateCount: 0, runIds: r.value.runIds, notes: [`${r.value.storedBytes} bytes stored`] }) : r; };
-const ingestGrib: Ingester = async () => err({ reason: 'GRIB2 decoding not available in this build' }); // GRIB-STUB
-// ▲▲▲
+/** GRIB2 model fields: one model run per forecast hour in the file, grid soundings stored packed. */
+const ingestGrib: Ingester = async (ctx, input) => {
+  const done = await ingestGribFile(ctx, input);
+  if (!done.ok) return done;
+  return ok({ soundingCount: done.value.soundingCount, duplicateCount: 0, runIds: done.value.runIds, notes: [`${done.value.storedBytes.toLocaleString('en-US')} bytes stored`] });
+};
 
 /** The ingester of each format the intake takes. */
 export const ingesters: Record<Exclude<IntakeFormat, 'unknown'>, Ingester> = {
