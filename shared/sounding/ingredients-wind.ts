@@ -80,22 +80,26 @@ export function windAtHeight(points: WindPoints, heightM: number): WindVector | 
  * The hodograph of a layer: its bottom, the reported winds strictly inside it, its top.
  * @returns heights (m) and winds, or null when the winds do not cover the layer
  */
-function layerHodograph(points: WindPoints, bottomM: number, topM: number): { height: number[]; wind: WindVector[] } | null {
+function layerHodograph(points: WindPoints, bottomM: number, topM: number): { height: number[]; wind: WindVector[]; inside: number[] } | null {
   const bottom = windAtHeight(points, bottomM);
   const top = windAtHeight(points, topM);
   if (!bottom || !top || !(topM > bottomM)) return null;
   const height = [bottomM];
   const wind = [bottom];
+  /** Index into `points` of each point strictly inside the layer (−1 for the two ends). */
+  const inside = [-1];
   for (let i = 0; i < points.height.length; i++) {
     const h = points.height[i] as number;
     if (h > bottomM && h < topM) {
       height.push(h);
       wind.push({ u: points.u[i] as number, v: points.v[i] as number });
+      inside.push(i);
     }
   }
   height.push(topM);
   wind.push(top);
-  return { height, wind };
+  inside.push(-1);
+  return { height, wind, inside };
 }
 
 /**
@@ -147,7 +151,11 @@ export function layerHelicity(points: WindPoints, bottomM: number, topM: number,
 export function pressureWeightedMeanWind(profile: Profile, points: WindPoints, bottomM: number, topM: number): WindVector | null {
   const layer = layerHodograph(points, bottomM, topM);
   if (!layer) return null;
-  const pressures = layer.height.map((h) => pressureAtHeight(profile, h));
+  // Reported points keep their own pressure; the two ends are interpolated (ln p linear in height).
+  const pressures = layer.height.map((h, j) => {
+    const index = layer.inside[j] as number;
+    return index >= 0 ? (points.pressure[index] as number) : pressureAtHeight(profile, h);
+  });
   let su = 0;
   let sv = 0;
   let sp = 0;

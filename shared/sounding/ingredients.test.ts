@@ -177,6 +177,25 @@ describe('CAPE between the −10 °C and −30 °C levels (JohnsonSugden2014, fr
   });
 });
 
+describe('LCL–LFC gap of the mixed-layer parcel', () => {
+  it('0 m when the parcel is buoyant as soon as it saturates (reasoned by hand)', () => {
+    // Dry-adiabatic (9.8 K/km, θ constant) below 3 km, drier upward: the mixed-layer parcel has
+    // the environment's θ, so at its LCL its temperature equals the environment's while it holds
+    // more vapour (the 100 hPa mean against the drier air there): Tᵥ,parcel > Tᵥ,env, buoyant at the
+    // LCL; above it the parcel cools at the moist rate, slower than 9.8 K/km, so it stays buoyant.
+    const levels = lapseSounding({ surfaceC: 30, lapse: (z) => (z < 3000 ? 9.8 : 7), depression: (z) => 8 + z / 500 });
+    const analysis = analyzeSounding(levels);
+    expect(analysis.mixedLayer.lfcHeight).not.toBeNull();
+    expect(analysis.ingredients.mlLclLfcGap).toBeCloseTo(0, 6);
+  });
+
+  it('null when the mixed-layer parcel never becomes buoyant (no LFC)', () => {
+    const stable = analyzeSounding(lapseSounding({ surfaceC: 20, lapse: () => 4, depression: () => 25 }));
+    expect(stable.mixedLayer.lfcHeight).toBeNull();
+    expect(stable.ingredients.mlLclLfcGap).toBeNull();
+  });
+});
+
 describe('warm-cloud depth (DoswellBrooksMaddox1996), worked by hand', () => {
   it('cloud base 1000 m under a freezing level at 4200 m: 3200 m of warm cloud', () => {
     expect(warmCloudDepth(1000, 4200)).toBe(3200);
