@@ -105,11 +105,15 @@ export function histogram(sorted: ArrayLike<number>, bins = 8): HistogramBin[] {
   return result;
 }
 
-export function summarise(values: number[]): ParameterStats | undefined {
+export function summarise(values: ArrayLike<number>): ParameterStats | undefined {
   if (values.length === 0) return undefined;
   // A typed array sorts numerically without a comparator call per pair (several times faster;
   // the live preview summarises on every animation frame of a drag).
-  const sorted = Float64Array.from(values).sort();
+  return summariseSorted(new Float64Array(values).sort());
+}
+
+/** The statistics of values already sorted ascending (at least one). */
+function summariseSorted(sorted: Float64Array): ParameterStats {
   return {
     count: sorted.length,
     min: sorted[0] ?? 0,
@@ -139,10 +143,15 @@ export function areaEvidence(areaId: string, geometry: AreaGeometry, soundings: 
 /** The statistics of each parameter over soundings already known to lie inside an area. */
 export function evidenceOfSoundings(areaId: string, inside: readonly EvidenceSounding[]): AreaEvidence {
   const stats: AreaEvidence['stats'] = {};
+  // One scratch buffer for every parameter: runs on every animation frame of a drag.
+  const buffer = new Float64Array(inside.length);
   for (const { key } of evidenceParameters) {
-    const values = inside.map((s) => s.figures[key]).filter((v): v is number => v !== null && Number.isFinite(v));
-    const summary = summarise(values);
-    if (summary) stats[key] = summary;
+    let count = 0;
+    for (const sounding of inside) {
+      const value = sounding.figures[key];
+      if (value !== null && Number.isFinite(value)) buffer[count++] = value;
+    }
+    if (count > 0) stats[key] = summariseSorted(buffer.slice(0, count).sort());
   }
   const flaggedCount = inside.filter((s) => s.figures.flagCount > 0).length;
   return { areaId, count: inside.length, flaggedCount, soundingIds: inside.map((s) => s.id), stats };
