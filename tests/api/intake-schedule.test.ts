@@ -33,6 +33,8 @@ beforeAll(async () => {
       for (let i = 0; i < 30; i++) res.write(Buffer.alloc(10_000, 66));
       return void res.end();
     }
+    // A redirect to a file that exists: never followed (it could lead anywhere).
+    if (req.url?.endsWith('/moved-f000.bufr')) return void res.writeHead(302, { location: '/x/obs-f000.bufr' }).end();
     res.writeHead(404).end();
   });
   await new Promise<void>((resolve) => fileServer.listen(0, '127.0.0.1', resolve));
@@ -78,6 +80,15 @@ describe('scheduled pulls on their own', () => {
     }
     expect((await files()).filter((f) => f.sourceName === 'big' || f.sourceName === 'chunked')).toEqual([]);
     expect(await readdir(path.join(folder, '.pulling'))).toEqual([]);
+  });
+});
+
+describe('pull safety', () => {
+  it('When the data server answers with a redirect, then it is not followed and nothing is taken in', async () => {
+    const created = await admin.post('/api/intake-sources').send({ name: 'moved', urlTemplate: `${fileServerUrl}/{yyyy}/moved-f{fff}.bufr`, cycleHours: [0, 6, 12, 18], forecastHours: [0], enabled: false });
+    const res = await admin.post(`/api/intake-sources/${created.body.id}/pull`).send({});
+    expect(res.body).toMatchObject({ fetched: 0, errors: ['f0: the server could not be reached (or it answered with a redirect, which is not followed)'] });
+    expect((await files()).filter((f) => f.sourceName === 'moved')).toEqual([]);
   });
 });
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { expandTemplate, latestCycle, pullUrlProblem } from './pull-sources';
+import { expandTemplate, latestCycle, privateAddressProblem, pullUrlProblem } from './pull-sources';
 
 describe('expandTemplate', () => {
   it('When the template names the cycle and forecast hour, then each placeholder is filled (UTC, zero-padded)', () => {
@@ -43,5 +43,26 @@ describe('pullUrlProblem', () => {
     expect(pullUrlProblem('https://me:pw@data.example.org/x', 'test')).toMatch(/authorization field/);
     expect(pullUrlProblem('https://data.example.org/{run}', 'test')).toMatch(/Unknown placeholder \{run\}/);
     expect(pullUrlProblem('ftp://data.example.org/x', 'test')).toBe('The address must use https://.');
+  });
+});
+
+describe('privateAddressProblem', () => {
+  const resolvesTo = (addresses: string[]) => async () => addresses;
+
+  it('When a public name resolves to a private address in production, then the pull is refused', async () => {
+    expect(await privateAddressProblem('https://data.example.org/x', 'production', resolvesTo(['10.0.0.7']))).toBe('the host data.example.org resolves to a local or private network address, which pulls may not reach');
+    expect(await privateAddressProblem('https://data.example.org/x', 'production', resolvesTo(['203.0.113.5', '::1']))).toMatch(/resolves to a local or private/);
+  });
+
+  it('When every address is public, or outside production, then nothing is refused', async () => {
+    expect(await privateAddressProblem('https://data.example.org/x', 'production', resolvesTo(['203.0.113.5']))).toBeNull();
+    expect(await privateAddressProblem('http://127.0.0.1:9/x', 'test', resolvesTo(['127.0.0.1']))).toBeNull();
+  });
+
+  it('When the name does not resolve, then the pull says so', async () => {
+    const fails = async (): Promise<string[]> => {
+      throw new Error('ENOTFOUND');
+    };
+    expect(await privateAddressProblem('https://nowhere.example.org/x', 'production', fails)).toBe('the host nowhere.example.org could not be found');
   });
 });

@@ -3,6 +3,7 @@
  * published by now and each forecast hour; each address not fetched before is downloaded (size
  * and time limited, no redirects) and taken in like a file dropped in the intake folder.
  */
+import { lookup } from 'node:dns/promises';
 import { mkdir, open, rename, unlink } from 'node:fs/promises';
 import path from 'node:path';
 import { and, eq } from 'drizzle-orm';
@@ -83,6 +84,27 @@ export function pullUrlProblem(template: string, env: 'development' | 'productio
   if (url.protocol !== 'https:') return 'The address must use https://.';
   if (env === 'production' && isInternalHost(url.hostname)) return 'The address must be a public host, not a local or private network one.';
   return null;
+}
+
+/** Resolves a host name to its addresses (injected in tests). */
+export type HostLookup = (host: string) => Promise<string[]>;
+
+const systemLookup: HostLookup = async (host) => (await lookup(host, { all: true })).map((entry) => entry.address);
+
+/**
+ * In production, a pull host must not resolve to a local or private address (a public name
+ * pointing inside the network). Returns a message, or null when every address is public.
+ */
+export async function privateAddressProblem(urlText: string, env: 'development' | 'production' | 'test', resolve: HostLookup = systemLookup): Promise<string | null> {
+  if (env !== 'production') return null;
+  const host = new URL(urlText).hostname;
+  let addresses: string[];
+  try {
+    addresses = await resolve(host.replace(/^\[|\]$/g, ''));
+  } catch {
+    return `the host ${host} could not be found`;
+  }
+  return addresses.some(isInternalHost) ? `the host ${host} resolves to a local or private network address, which pulls may not reach` : null;
 }
 
 export interface PullLimits {
@@ -169,6 +191,11 @@ export async function pullSource(
     }
     const name = path.basename(new URL(url).pathname) || `${source.name}-f${forecastHour}`;
     const target = path.join(options.workFolder, `${Date.now()}-${name.replace(/[^\w.-]/g, '_')}`);
+    const blocked = await privateAddressProblem(url, ctx.env);
+    if (blocked) {
+      summary.errors.push(`f${forecastHour}: ${blocked}`);
+      continue;
+    }
     const got = await download(url, source.authorization, target, options.limits);
     if (!got.ok) {
       if (got.status === 404) summary.notYetAvailable++;
