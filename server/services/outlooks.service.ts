@@ -348,7 +348,8 @@ export async function getOutlookEvidence(db: Database, outlookId: string, source
   if (!outlook) return err(notFound());
   const office = await requireOffice(db);
   const candidates = await evidenceSoundings(db, new Date(outlook.validFrom), new Date(outlook.validUntil));
-  const published = await publishedGuidance(db, outlookId);
+  // Only an outlook that can no longer change has an issuance of its own (an amendment is a new outlook).
+  const published = outlook.state === 'published' ? await publishedGuidance(db, outlookId) : undefined;
   const guidance = published?.guidance ?? officeGuidance(office);
   const ladder = published?.riskLadder ?? office.riskLadder;
   // Geometry checks and point-in-area tests run in the worker pool, off the event loop.

@@ -136,10 +136,21 @@ export function supportGuidanceFromStored(stored: unknown, legacy: unknown): Sup
 
 const MINUS_SIGN = '\u2212';
 
+/** One formatter per number of decimals: building an Intl.NumberFormat per call costs more than the whole check. */
+const numberFormats = new Map<number, Intl.NumberFormat>();
+function numberFormat(digits: number): Intl.NumberFormat {
+  let format = numberFormats.get(digits);
+  if (!format) {
+    format = new Intl.NumberFormat('en-US', { minimumFractionDigits: digits, maximumFractionDigits: digits });
+    numberFormats.set(digits, format);
+  }
+  return format;
+}
+
 /** A figure's value in its SI unit for reasons in words: grouped digits, a true minus sign. */
 export function formatFigure(figure: KeyFigureKey, value: number): string {
   const { digits, unit } = guidanceFigures[figure];
-  const text = Math.abs(value).toLocaleString('en-US', { minimumFractionDigits: digits, maximumFractionDigits: digits });
+  const text = numberFormat(digits).format(Math.abs(value));
   const signed = value < 0 && Number(text.replace(/,/g, '')) !== 0 ? `${MINUS_SIGN}${text}` : text;
   return unit === '' ? signed : unit === '°' ? `${signed}°` : `${signed} ${unit}`;
 }

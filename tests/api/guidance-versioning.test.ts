@@ -65,6 +65,27 @@ async function act(agent: TestAgent, id: string, action: string) {
 
 const supportOf = async (id: string) => (await forecaster.get(`/api/outlooks/${id}/evidence`)).body.areas[0].support as { result: string; reasons: string[] };
 
+describe('the demo office (issue 14 acceptance)', () => {
+  it('When the demo outlooks are checked, then every area with soundings inside names counts of backing soundings, and each hazard flag has its own judgement', async () => {
+    const list = await forecaster.get('/api/outlooks');
+    expect(list.status).toBe(200);
+    const ids: string[] = list.body.outlooks.map((o: { id: string }) => o.id);
+    expect(ids.length).toBeGreaterThan(0);
+    let areasWithSoundings = 0;
+    for (const id of ids) {
+      const [detail, evidence] = await Promise.all([forecaster.get(`/api/outlooks/${id}`), forecaster.get(`/api/outlooks/${id}/evidence`)]);
+      for (const report of evidence.body.areas as { areaId: string; evidence: { count: number }; support: { reasons: string[]; hazards: { hazard: string; significant: boolean }[] } }[]) {
+        const area = detail.body.areas.find((a: { id: string }) => a.id === report.areaId) as { hazards: { hazard: string; significant: boolean }[] };
+        expect(report.support.hazards.map((h) => [h.hazard, h.significant])).toEqual(area.hazards.map((h) => [h.hazard, h.significant]));
+        if (report.evidence.count === 0) continue;
+        areasWithSoundings += 1;
+        expect(report.support.reasons[0]).toMatch(new RegExp(`^\\d+ of ${report.evidence.count} soundings? backs? `));
+      }
+    }
+    expect(areasWithSoundings).toBeGreaterThan(2);
+  });
+});
+
 describe('guidance versioned with the issuance', () => {
   it('When an outlook is published and the office then tightens its rules, then the issuance keeps the guidance it was checked against and its support check uses it', async () => {
     await setGuidance(lenient);

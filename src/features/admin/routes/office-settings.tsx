@@ -15,7 +15,7 @@ export function OfficeSettingsPage() {
 
   return (
     <>
-      <PageHeader title="Office settings" description="Name, region, time zone and the risk ladder every outlook of this office uses." />
+      <PageHeader title="Office settings" description="Name, region, time zone, the risk ladder every outlook of this office uses, and the guidance the support check applies." />
       {lastReset === 'saved' ? (
         <Notice tone="success" className="mb-4">
           Settings saved. Every page now uses them.
