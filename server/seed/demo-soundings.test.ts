@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { defaultRiskLadder } from '../../shared/contracts/office';
-import { areaEvidence, soundingsInside, type EvidenceSounding } from '../../shared/evidence/evidence';
-import { checkSupport, defaultGuidanceThresholds } from '../../shared/evidence/support-check';
+import { soundingsInside, type EvidenceSounding } from '../../shared/evidence/evidence';
+import { defaultSupportGuidance } from '../../shared/evidence/guidance';
+import { checkSupport } from '../../shared/evidence/support-check';
 import { analyzeSounding } from '../../shared/sounding/analyze';
 import { keyFiguresFromAnalysis } from '../../shared/sounding/key-figures';
 import { validateSounding } from '../../shared/sounding/validate';
@@ -79,7 +80,7 @@ describe('demo soundings', () => {
   });
 
   it('When the support check judges the demo draft, then its results are not all the same', () => {
-    const results = demoOutlookAreas.map((a) => checkSupport(areaEvidence(a.label, a.geometry, draftPeriod), a.levelKey, defaultRiskLadder, defaultGuidanceThresholds).result);
+    const results = demoOutlookAreas.map((a) => checkSupport({ inside: soundingsInside(a.geometry, draftPeriod), levelKey: a.levelKey, hazards: a.hazards, ladder: defaultRiskLadder, guidance: defaultSupportGuidance }).result);
     expect(new Set(results).size).toBeGreaterThanOrEqual(3);
     expect(results).toContain('supported');
     expect(results).not.toContain('none');

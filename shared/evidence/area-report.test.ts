@@ -4,7 +4,7 @@ import type { AreaGeometry } from '../contracts/risk-areas';
 import { emptyKeyFigures } from '../sounding/key-figures';
 import { areaReport, evidencePool, soundingJudgements, soundingsInArea } from './area-report';
 import { soundingsInside, type EvidenceSounding } from './evidence';
-import { defaultGuidanceThresholds } from './support-check';
+import { defaultSupportGuidance } from './guidance';
 
 const period = { validFrom: '2027-04-18T12:00:00Z', validUntil: '2027-04-19T12:00:00Z' };
 const at = (id: string, longitude: number, latitude: number, extra: Partial<EvidenceSounding> = {}): EvidenceSounding => ({
@@ -69,14 +69,14 @@ describe('areaReport', () => {
   const area = { id: 'a1', levelKey: 'thunder', hazards: [], geometry: notched };
 
   it('When no sounding lies inside, then the count is 0 and the support check says no soundings inside', () => {
-    const report = areaReport(area, evidencePool([at('far', -80, 30)], period), defaultRiskLadder, defaultGuidanceThresholds);
+    const report = areaReport(area, evidencePool([at('far', -80, 30)], period), defaultRiskLadder, defaultSupportGuidance);
     expect(report.evidence.count).toBe(0);
     expect(report.support.result).toBe('none');
   });
 
   it('When soundings lie inside, then the evidence counts them and summarises their figures', () => {
     const inside = [at('x', -92, 37, { figures: { ...emptyKeyFigures(), mlCape: 1000 } }), at('y', -95, 37, { figures: { ...emptyKeyFigures(), mlCape: 3000 } })];
-    const report = areaReport(area, evidencePool([...inside, at('far', -80, 30)], period), defaultRiskLadder, defaultGuidanceThresholds);
+    const report = areaReport(area, evidencePool([...inside, at('far', -80, 30)], period), defaultRiskLadder, defaultSupportGuidance);
     expect(report.evidence.count).toBe(2);
     expect(report.evidence.soundingIds.sort()).toEqual(['x', 'y']);
     expect(report.evidence.stats.mlCape?.median).toBe(2000);

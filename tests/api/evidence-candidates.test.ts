@@ -1,11 +1,10 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type TestAgent from 'supertest/lib/agent';
 import { evidenceCandidatesSchema } from '../../shared/contracts/evidence-candidates';
-import { defaultRiskLadder, type GuidanceThresholds } from '../../shared/contracts/office';
+import { defaultRiskLadder, type SupportGuidance } from '../../shared/contracts/office';
 import { outlookEvidenceSchema, outlookSchema } from '../../shared/contracts/outlooks';
 import { areaReport, evidencePool } from '../../shared/evidence/area-report';
 import { evidenceSoundingsFromCandidates } from '../../shared/evidence/evidence-candidates';
-import { defaultGuidanceThresholds } from '../../shared/evidence/support-check';
 import type { Stormdraft } from '../../server/start';
 import { signedInAgent, startTestApp } from './helpers/test-app';
 
@@ -41,8 +40,7 @@ describe('GET /api/outlooks/:outlookId/evidence-candidates', () => {
     const outlook = outlookSchema.parse(outlookRes.body);
     expect(candidates.truncated).toBe(false);
     expect(candidates.soundings.length).toBe(server.soundingCount);
-    const stored = officeRes.body.guidanceThresholds as GuidanceThresholds;
-    const guidance = Object.keys(stored).length ? stored : defaultGuidanceThresholds;
+    const guidance = officeRes.body.guidance as SupportGuidance;
     const pool = evidencePool(evidenceSoundingsFromCandidates(candidates), { validFrom: outlook.validFrom, validUntil: outlook.validUntil });
     expect(outlook.areas.length).toBeGreaterThanOrEqual(4);
     for (const area of outlook.areas) {

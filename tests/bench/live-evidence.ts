@@ -3,7 +3,7 @@ import type { AreaGeometry } from '../../shared/contracts/risk-areas';
 import { areaReport, evidencePool, soundingJudgements, type ReportArea } from '../../shared/evidence/area-report';
 import { evidenceSoundingsFromCandidates, toEvidenceCandidate } from '../../shared/evidence/evidence-candidates';
 import type { EvidenceSounding } from '../../shared/evidence/evidence';
-import { defaultGuidanceThresholds } from '../../shared/evidence/support-check';
+import { defaultSupportGuidance } from '../../shared/evidence/guidance';
 import { emptyKeyFigures } from '../../shared/sounding/key-figures';
 import { demoOffice } from '../../server/services/seed.service';
 import type { BenchFigure } from './figures';
@@ -68,7 +68,7 @@ export const liveEvidenceSixAreas: BenchFigure = {
     const edit = (n: number) => {
       let inside = 0;
       for (const area of areasAt(n)) {
-        const report = areaReport(area, pool, defaultRiskLadder, defaultGuidanceThresholds);
+        const report = areaReport(area, pool, defaultRiskLadder, defaultSupportGuidance);
         inside += soundingJudgements(report).size;
       }
       return inside;

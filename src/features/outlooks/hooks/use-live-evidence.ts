@@ -1,10 +1,9 @@
 import { useMemo } from 'react';
-import type { GuidanceThresholds, RiskLadder } from '../../../../shared/contracts/office';
+import type { RiskLadder, SupportGuidance } from '../../../../shared/contracts/office';
 import { areaReport, evidencePool, type AreaReport, type ReportArea } from '../../../../shared/evidence/area-report';
 import { evidenceSoundingsFromCandidates } from '../../../../shared/evidence/evidence-candidates';
 import { useEvidenceCandidates } from '../../../api/outlooks/get-evidence-candidates';
 import type { EvidenceSource } from '../../../api/outlooks/outlooks-keys';
-import { guidanceInForce } from '../utils/live-evidence';
 import type { AreaShape } from '../../../lib/map/area-editor-map';
 import { toAreaGeometry } from '../utils/outlook-document';
 
@@ -22,7 +21,8 @@ interface LiveEvidenceInput {
   period: { validFrom: string; validUntil: string };
   source: EvidenceSource;
   ladder: RiskLadder;
-  storedGuidance: GuidanceThresholds;
+  /** The office guidance in force, as the server resolves it (GET /api/office). */
+  guidance: SupportGuidance;
   /** The area whose evidence is previewed (the selected one), as in the document. */
   area: ReportArea | null;
   /** The outline of the area while one of its vertices moves. */
@@ -34,14 +34,13 @@ interface LiveEvidenceInput {
  * code the server runs (shared/evidence/area-report.ts): recomputed on each animation frame of a
  * drag. Undefined while the candidates load, or when the period holds too many soundings to send.
  */
-export function useLiveEvidence({ outlookId, savedPeriod, period, source, ladder, storedGuidance, area, live }: LiveEvidenceInput) {
+export function useLiveEvidence({ outlookId, savedPeriod, period, source, ladder, guidance, area, live }: LiveEvidenceInput) {
   const candidates = useEvidenceCandidates(outlookId, savedPeriod.validFrom, savedPeriod.validUntil);
   const soundings = useMemo(() => (candidates.data && !candidates.data.truncated ? evidenceSoundingsFromCandidates(candidates.data) : null), [candidates.data]);
   const pool = useMemo(
     () => (soundings ? evidencePool(soundings, { validFrom: period.validFrom, validUntil: period.validUntil, source: source === 'all' ? undefined : source }) : null),
     [soundings, period.validFrom, period.validUntil, source],
   );
-  const guidance = useMemo(() => guidanceInForce(storedGuidance), [storedGuidance]);
   const report = useMemo((): AreaReport | undefined => {
     if (!pool || !area) return undefined;
     const shape = live && live.areaId === area.id ? { ...area, geometry: toAreaGeometry(live.geometry) } : area;

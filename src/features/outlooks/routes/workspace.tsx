@@ -108,7 +108,7 @@ function Workspace({ initial, office, mayAuthor }: { initial: Outlook; office: O
     period: { validFrom: document.validFrom, validUntil: document.validUntil },
     source,
     ladder,
-    storedGuidance: office.guidanceThresholds,
+    guidance: office.guidance,
     area: selected,
     live,
   });

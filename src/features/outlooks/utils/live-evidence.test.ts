@@ -1,7 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { AreaReport } from '../../../../shared/evidence/area-report';
-import { defaultGuidanceThresholds } from '../../../../shared/evidence/support-check';
-import { evidenceView, guidanceInForce, judgementCounts } from './live-evidence';
+import { evidenceView, judgementCounts } from './live-evidence';
 
 const live: AreaReport = {
   areaId: 'a',
@@ -24,14 +23,6 @@ describe('evidenceView', () => {
   it('When a new area has no record yet, then the preview is shown; with neither, nothing', () => {
     expect(evidenceView({ record: undefined, live, pending: true }).kind).toBe('preview');
     expect(evidenceView({ record: undefined, live: undefined, pending: true }).kind).toBe('none');
-  });
-});
-
-describe('guidanceInForce', () => {
-  it('When the office has no guidance, then the invented defaults apply, as on the server', () => {
-    expect(guidanceInForce({})).toBe(defaultGuidanceThresholds);
-    const own = { level1: { mlCape: 500 } };
-    expect(guidanceInForce(own)).toBe(own);
   });
 });
 

@@ -1,11 +1,4 @@
-import type { GuidanceThresholds } from '../../../../shared/contracts/office';
 import type { AreaReport, SoundingJudgement } from '../../../../shared/evidence/area-report';
-import { defaultGuidanceThresholds } from '../../../../shared/evidence/support-check';
-
-/** The guidance the server checks against: the office's, or the invented defaults when it has none (as the evidence report does). */
-export function guidanceInForce(stored: GuidanceThresholds): GuidanceThresholds {
-  return Object.keys(stored).length ? stored : defaultGuidanceThresholds;
-}
 
 /** Which answer the evidence panel shows for an area: the server's record or the live preview. */
 export type EvidenceView<T> = { kind: 'record'; report: T } | { kind: 'preview'; report: AreaReport } | { kind: 'stale'; report: T } | { kind: 'none' };
