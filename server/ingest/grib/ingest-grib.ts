@@ -237,7 +237,7 @@ async function analyseAndStore(
   progress: (count: number) => void,
 ): Promise<Result<void, { reason: string }>> {
   const batchSize = ctx.gribTuning?.batchSize ?? 1000;
-  const insertRows = ctx.gribTuning?.insertRows ?? 500;
+  const insertRows = ctx.gribTuning?.insertRows ?? 200;
   const points: number[] = [];
   for (let slot = 0; slot < packed.usable.length; slot++) if (packed.usable[slot]) points.push(slot);
   const batches: number[][] = [];
@@ -278,6 +278,9 @@ async function analyseAndStore(
           ...figures,
         };
       });
+      // PGlite runs on this thread: short statements with a turn of the event loop between
+      // them let requests that arrived meanwhile queue their queries first.
+      await new Promise((resolve) => setImmediate(resolve));
       await ctx.db.insert(gridSoundings).values(rows);
     }
     progress(slots.length);
