@@ -121,6 +121,7 @@ async function ingest(ctx: GribIngestContext, rawInput: GribIngestInput): Promis
   if (info.size === 0) return err({ reason: 'The file is empty.' });
   if (info.size > gribLimits.maxFileBytes) return err({ reason: `The file is ${info.size} bytes; at most ${gribLimits.maxFileBytes} bytes are taken.` });
 
+  const startedAt = performance.now();
   const listed = await listGribMessages(input.filePath, input.signal);
   if (!listed.ok) return listed;
   const messages = listed.value;
@@ -177,6 +178,7 @@ async function ingest(ctx: GribIngestContext, rawInput: GribIngestInput): Promis
     }
   }
 
+  const decodedMs = Math.round(performance.now() - startedAt);
   const model = input.model ?? first.centre;
   const runIds: string[] = [];
   let soundingCount = 0;
@@ -221,7 +223,7 @@ async function ingest(ctx: GribIngestContext, rawInput: GribIngestInput): Promis
     await db.update(modelRuns).set({ state: 'ready', soundingCount: runCount, storedBytes: runBytes }).where(eq(modelRuns.id, runId));
     soundingCount += runCount;
     storedBytes += runBytes;
-    logger.info({ runId, model, cycleTime: group.cycleTime, forecastHour: group.forecastHour, soundings: runCount, storedBytes: runBytes, belowGroundDropped: packed.belowGroundDropped }, 'model run stored');
+    logger.info({ runId, model, cycleTime: group.cycleTime, forecastHour: group.forecastHour, soundings: runCount, storedBytes: runBytes, belowGroundDropped: packed.belowGroundDropped, decodedMs, totalMs: Math.round(performance.now() - startedAt) }, 'model run stored');
   }
   scheduleRunRetention(db, logger, office.id);
   return ok({ runIds, soundingCount, storedBytes });
