@@ -208,6 +208,20 @@ describe('ingestGribFile', () => {
     expect((await stat(truncated)).size).toBeGreaterThan(0);
   }, 60_000);
 
+  it('When the intake is cancelled part-way, then the result says so and the run is marked failed', async () => {
+    const { path } = await fixture('cancel.grib2', { ...gribPresets.small, forecastHours: [18] });
+    const controller = new AbortController();
+    const result = await ingestGribFile(
+      { db: handle.db, logger, gribTuning: { batchSize: 2 } },
+      { officeId, filePath: path, model: 'TESTCANCEL', signal: controller.signal, onProgress: (done) => (done > 0 ? controller.abort() : undefined) },
+    );
+    expect(result).toEqual({ ok: false, error: { reason: 'The intake was cancelled.' } });
+    const runs = await handle.db.select().from(modelRuns).where(eq(modelRuns.model, 'TESTCANCEL'));
+    expect(runs.map((r) => [r.state, r.failure])).toEqual([['failed', 'The intake was cancelled.']]);
+    // The soundings stored before the cancel are removed: part of a run is not evidence.
+    expect(await handle.db.select().from(gridSoundings).where(eq(gridSoundings.runId, runs[0]?.id ?? ''))).toEqual([]);
+  }, 60_000);
+
   it('When the office keeps two runs per model, then older runs and their grid soundings are deleted', async () => {
     for (const hour of [21, 24, 27]) {
       const { path } = await fixture(`keep-${hour}.grib2`, { ...gribPresets.small, forecastHours: [hour] });

@@ -13,7 +13,7 @@ import { keyFigureKeys } from '../../../shared/sounding';
 import { err, ok, type Result } from '../../../shared/result';
 import type { Database } from '../../db/client';
 import { gridSoundings, modelRuns, offices } from '../../db/schema';
-import { scheduleRunRetention } from '../../services/model-runs.service';
+import { deleteRunSoundings, scheduleRunRetention } from '../../services/model-runs.service';
 import { runInSoundingPool, soundingPoolThreads } from '../../workers/sounding-pool';
 import { eccodesStatus } from '../eccodes';
 import { buildGridSoundings, geopotentialToHeight, levelBytes, type IsobaricFields, type RunFields, type SurfaceFields } from './build-soundings';
@@ -211,6 +211,8 @@ async function ingest(ctx: GribIngestContext, rawInput: GribIngestInput): Promis
       input.onProgress?.(done, total);
     });
     if (!stored.ok) {
+      // A part of a run is not evidence: its soundings go, the run stays as failed with the reason.
+      await deleteRunSoundings(db, runId);
       await db.update(modelRuns).set({ state: 'failed', failure: stored.error.reason }).where(eq(modelRuns.id, runId));
       return stored;
     }
