@@ -17,6 +17,7 @@ import { startWebhookWorker } from './services/webhooks.service';
 import { startVerificationWorker, verifyDueIssuances } from './services/verification.service';
 import { closeGeometryPool } from './workers/geometry-pool';
 import { eccodesStatus } from './ingest/eccodes';
+import { runRetentionIdle } from './services/model-runs.service';
 
 export interface StartOptions {
   clientMode: ClientMode;
@@ -76,6 +77,7 @@ export async function startStormdraft(config: Config, options: StartOptions): Pr
       await stopVerification();
       mailer.close();
       await catcher?.close();
+      await runRetentionIdle();
       await database.close();
     },
   };
