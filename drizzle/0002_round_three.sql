@@ -54,7 +54,7 @@ CREATE TABLE "model_runs" (
 	"ny" integer NOT NULL,
 	"level_count" integer NOT NULL,
 	"sounding_count" integer DEFAULT 0 NOT NULL,
-	"stored_bytes" integer DEFAULT 0 NOT NULL,
+	"stored_bytes" bigint DEFAULT 0 NOT NULL,
 	"state" text DEFAULT 'decoding' NOT NULL,
 	"failure" text,
 	"created_at" timestamp with time zone DEFAULT now() NOT NULL

@@ -18,6 +18,7 @@ import { startVerificationWorker, verifyDueIssuances } from './services/verifica
 import { closeGeometryPool } from './workers/geometry-pool';
 import { eccodesStatus } from './ingest/eccodes';
 import { startIntake } from './ingest/intake/intake-runtime';
+import { runRetentionIdle } from './services/model-runs.service';
 
 export interface StartOptions {
   clientMode: ClientMode;
@@ -80,6 +81,7 @@ export async function startStormdraft(config: Config, options: StartOptions): Pr
       await stopVerification();
       mailer.close();
       await catcher?.close();
+      await runRetentionIdle();
       await database.close();
     },
   };

@@ -58,14 +58,19 @@ export async function listModelRuns(db: DatabaseOrTransaction, query: { model?: 
   return ok(rows.map(toSummary));
 }
 
-/** Delete a run's grid soundings a slice at a time, then the run. */
-async function deleteRunInSlices(db: Database, runId: string): Promise<void> {
+/** Delete a run's grid soundings a slice at a time (the run row stays). */
+export async function deleteRunSoundings(db: Database, runId: string): Promise<void> {
   for (;;) {
     const slice = db.select({ pointIndex: gridSoundings.pointIndex }).from(gridSoundings).where(eq(gridSoundings.runId, runId)).limit(DELETE_SLICE);
     const deleted = await db.delete(gridSoundings).where(and(eq(gridSoundings.runId, runId), inArray(gridSoundings.pointIndex, slice))).returning({ pointIndex: gridSoundings.pointIndex });
     if (deleted.length < DELETE_SLICE) break;
     await new Promise((resolve) => setImmediate(resolve));
   }
+}
+
+/** Delete a run's grid soundings a slice at a time, then the run. */
+async function deleteRunInSlices(db: Database, runId: string): Promise<void> {
+  await deleteRunSoundings(db, runId);
   await db.delete(modelRuns).where(eq(modelRuns.id, runId));
 }
 

@@ -49,3 +49,30 @@ export const gridSoundingListQuerySchema = z.object({
   offset: z.coerce.number().int().min(0, { message: 'offset must be 0 or more.' }).max(10_000_000).default(0),
   limit: z.coerce.number().int().min(1, { message: 'limit must be at least 1.' }).max(500, { message: 'limit must be at most 500.' }).default(100),
 });
+
+const figure = z.number().nullable();
+
+/** A grid sounding in its run's list. */
+export const gridSoundingSummarySchema = z.object({
+  id: z.string(),
+  runId: z.string(),
+  pointIndex: z.number(),
+  latitude: z.number(),
+  longitude: z.number(),
+  elevationM: z.number().nullable(),
+  keyFigures: z.record(z.string(), figure),
+});
+export type GridSoundingSummaryView = z.infer<typeof gridSoundingSummarySchema>;
+
+export const gridSoundingPageSchema = z.object({ total: z.number(), items: z.array(gridSoundingSummarySchema) });
+
+/** A grid sounding opened on its own page (levels in engine units, heights above sea level). */
+export const gridSoundingDetailSchema = gridSoundingSummarySchema.extend({
+  model: z.string(),
+  cycleTime: z.string(),
+  forecastHour: z.number(),
+  validTime: z.string(),
+  levels: z.array(z.object({ pressureHpa: z.number(), heightM: z.number(), temperatureC: z.number(), dewpointC: figure, uMs: figure, vMs: figure })),
+  analysis: z.unknown(),
+});
+export type GridSoundingDetailView = z.infer<typeof gridSoundingDetailSchema>;

@@ -181,6 +181,13 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
                   lazy: async () => ({ Component: (await import('../features/soundings/routes/map')).SoundingMapPage }),
                 },
                 {
+                  path: 'soundings/grid/:gridSoundingId',
+                  lazy: async () => {
+                    const page = await import('../features/soundings/routes/grid-sounding');
+                    return { Component: page.GridSoundingPage, loader: (args: LoaderFunctionArgs) => loaderForRoles(queryClient, officeReaderRoles, () => page.gridSoundingLoader(queryClient)(args))() };
+                  },
+                },
+                {
                   path: 'soundings/:soundingId',
                   lazy: async () => {
                     const page = await import('../features/soundings/routes/sounding');

@@ -117,3 +117,27 @@ describe('DELETE /api/model-runs/:runId', () => {
     expect((await lead.delete(`/api/model-runs/${runId}`)).status).toBe(404);
   });
 });
+
+describe('intake while the app is in use', () => {
+  it('When a 3,600-point run is being taken in, then other requests are answered before it finishes', async () => {
+    const file = join(dir, 'busy.grib2');
+    await generateGribFixture({ ...gribPresets.bench, grid: { kind: 'regular_ll', nx: 60, ny: 60, north: 41, west: -96, stepDeg: 0.08 }, forecastHours: [3] }, file);
+    const [office] = await sd.ctx.db.select({ id: offices.id }).from(offices);
+    let finished = false;
+    let firstProgress: () => void = () => {};
+    const started = new Promise<void>((resolve) => (firstProgress = resolve));
+    const intake = ingestGribFile(sd.ctx, { officeId: office?.id ?? '', filePath: file, model: 'BUSY', onProgress: (done) => (done > 0 ? firstProgress() : undefined) }).then((result) => {
+      finished = true;
+      return result;
+    });
+    await started;
+    // Once the first batch is stored, a signed-in request (session lookup and a list query)
+    // comes back while the other 2,600 soundings are still being analysed and stored.
+    const res = await forecaster.get('/api/model-runs?model=APITEST');
+    const answeredWhileBusy = !finished;
+    const result = await intake;
+    expect(res.status).toBe(200);
+    expect(result.ok && result.value.soundingCount).toBe(3600);
+    expect(answeredWhileBusy).toBe(true);
+  }, 120_000);
+});

@@ -1,4 +1,4 @@
-import { customType, doublePrecision, index, integer, pgTable, primaryKey, real, smallint, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import { bigint, customType, doublePrecision, index, integer, pgTable, primaryKey, real, smallint, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 import { offices } from './offices';
 
 /** Raw bytes (PostgreSQL bytea); used for the packed levels of grid soundings. */
@@ -28,7 +28,7 @@ export const modelRuns = pgTable(
     levelCount: integer().notNull(),
     soundingCount: integer().notNull().default(0),
     /** Bytes stored for this run's grid soundings (levels and figures). */
-    storedBytes: integer().notNull().default(0),
+    storedBytes: bigint({ mode: 'number' }).notNull().default(0),
     state: text().notNull().default('decoding'),
     failure: text(),
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),

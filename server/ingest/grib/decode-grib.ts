@@ -60,10 +60,12 @@ function isoFrom(date: string, time: string): string | null {
   return Number.isNaN(Date.parse(iso)) ? null : new Date(iso).toISOString();
 }
 
-/** The first line of a tool's error output, trimmed, for a failure reason. */
-function toolMessage(stderr: string, fallback: string): string {
-  const line = stderr.split('\n').map((l) => l.replace(/^ECCODES ERROR\s*:\s*/i, '').trim()).find((l) => l.length > 0);
-  return line ? line.slice(0, 300) : fallback;
+/** The first error line a tool printed (ecCodes prints some errors on standard output), for a failure reason. */
+function toolMessage(stderr: string, fallback: string, stdout = ''): string {
+  const fromOutput = stdout.split('\n').find((l) => /ERROR/.test(l)) ?? '';
+  const line = [...stderr.split('\n'), fromOutput].map((l) => l.replace(/["\t]/g, '').replace(/^(ECCODES )?ERROR\s*:\s*/i, '').trim()).find((l) => l.length > 0);
+  const text = line ? line.slice(0, 300) : fallback;
+  return /unreadable|truncat|end of (file|resource)|wrong length|7777/i.test(text) ? `${text} (the file looks truncated or damaged)` : text;
 }
 
 /**
@@ -82,7 +84,7 @@ export function listGribMessages(filePath: string, signal?: AbortSignal): Promis
           const killed = 'killed' in error && error.killed === true;
           if (signal?.aborted) return resolve(err({ reason: 'The intake was cancelled.' }));
           if (killed) return resolve(err({ reason: `Listing the GRIB messages took longer than ${gribLimits.listTimeoutMs / 1000} s or printed too much.` }));
-          return resolve(err({ reason: `ecCodes could not read the file as GRIB: ${toolMessage(String(stderr), 'no readable message')}.` }));
+          return resolve(err({ reason: `ecCodes could not read the file as GRIB: ${toolMessage(String(stderr), 'no readable message', text)}.` }));
         }
         const lines = text.split('\n').filter((line) => line.trim().length > 0);
         if (lines.length === 0) return resolve(err({ reason: 'The file holds no GRIB message.' }));

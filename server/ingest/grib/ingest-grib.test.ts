@@ -195,13 +195,31 @@ describe('ingestGribFile', () => {
     const text = join(dir, 'text.grib2');
     await writeFile(text, 'pressure_hPa,height_m\n1000,0\n');
     const before = (await handle.db.select().from(modelRuns)).length;
+    const reasons: string[] = [];
     for (const filePath of [truncated, corrupt, text, join(dir, 'missing.grib2')]) {
       const result = await ingestGribFile({ db: handle.db, logger }, { officeId, filePath, model: 'TESTBAD' });
-      expect(result.ok, filePath).toBe(false);
-      if (!result.ok) expect(result.error.reason.length, filePath).toBeGreaterThan(10);
+      reasons.push(result.ok ? 'stored' : result.error.reason);
     }
+    expect(reasons[0]).toMatch(/truncated or damaged/);
+    expect(reasons[1]).toMatch(/^ecCodes could not read the file as GRIB: .{5,}/);
+    expect(reasons[2]).toMatch(/^ecCodes could not read the file as GRIB: .{5,}/);
+    expect(reasons[3]).toBe('The file could not be found or is not a regular file.');
     expect((await handle.db.select().from(modelRuns)).length).toBe(before);
     expect((await stat(truncated)).size).toBeGreaterThan(0);
+  }, 60_000);
+
+  it('When the intake is cancelled part-way, then the result says so and the run is marked failed', async () => {
+    const { path } = await fixture('cancel.grib2', { ...gribPresets.small, forecastHours: [18] });
+    const controller = new AbortController();
+    const result = await ingestGribFile(
+      { db: handle.db, logger, gribTuning: { batchSize: 2 } },
+      { officeId, filePath: path, model: 'TESTCANCEL', signal: controller.signal, onProgress: (done) => (done > 0 ? controller.abort() : undefined) },
+    );
+    expect(result).toEqual({ ok: false, error: { reason: 'The intake was cancelled.' } });
+    const runs = await handle.db.select().from(modelRuns).where(eq(modelRuns.model, 'TESTCANCEL'));
+    expect(runs.map((r) => [r.state, r.failure])).toEqual([['failed', 'The intake was cancelled.']]);
+    // The soundings stored before the cancel are removed: part of a run is not evidence.
+    expect(await handle.db.select().from(gridSoundings).where(eq(gridSoundings.runId, runs[0]?.id ?? ''))).toEqual([]);
   }, 60_000);
 
   it('When the office keeps two runs per model, then older runs and their grid soundings are deleted', async () => {

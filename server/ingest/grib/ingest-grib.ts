@@ -13,7 +13,7 @@ import { keyFigureKeys } from '../../../shared/sounding';
 import { err, ok, type Result } from '../../../shared/result';
 import type { Database } from '../../db/client';
 import { gridSoundings, modelRuns, offices } from '../../db/schema';
-import { scheduleRunRetention } from '../../services/model-runs.service';
+import { deleteRunSoundings, scheduleRunRetention } from '../../services/model-runs.service';
 import { runInSoundingPool, soundingPoolThreads } from '../../workers/sounding-pool';
 import { eccodesStatus } from '../eccodes';
 import { buildGridSoundings, geopotentialToHeight, levelBytes, type IsobaricFields, type RunFields, type SurfaceFields } from './build-soundings';
@@ -121,6 +121,7 @@ async function ingest(ctx: GribIngestContext, rawInput: GribIngestInput): Promis
   if (info.size === 0) return err({ reason: 'The file is empty.' });
   if (info.size > gribLimits.maxFileBytes) return err({ reason: `The file is ${info.size} bytes; at most ${gribLimits.maxFileBytes} bytes are taken.` });
 
+  const startedAt = performance.now();
   const listed = await listGribMessages(input.filePath, input.signal);
   if (!listed.ok) return listed;
   const messages = listed.value;
@@ -177,6 +178,7 @@ async function ingest(ctx: GribIngestContext, rawInput: GribIngestInput): Promis
     }
   }
 
+  const decodedMs = Math.round(performance.now() - startedAt);
   const model = input.model ?? first.centre;
   const runIds: string[] = [];
   let soundingCount = 0;
@@ -209,6 +211,8 @@ async function ingest(ctx: GribIngestContext, rawInput: GribIngestInput): Promis
       input.onProgress?.(done, total);
     });
     if (!stored.ok) {
+      // A part of a run is not evidence: its soundings go, the run stays as failed with the reason.
+      await deleteRunSoundings(db, runId);
       await db.update(modelRuns).set({ state: 'failed', failure: stored.error.reason }).where(eq(modelRuns.id, runId));
       return stored;
     }
@@ -221,7 +225,7 @@ async function ingest(ctx: GribIngestContext, rawInput: GribIngestInput): Promis
     await db.update(modelRuns).set({ state: 'ready', soundingCount: runCount, storedBytes: runBytes }).where(eq(modelRuns.id, runId));
     soundingCount += runCount;
     storedBytes += runBytes;
-    logger.info({ runId, model, cycleTime: group.cycleTime, forecastHour: group.forecastHour, soundings: runCount, storedBytes: runBytes, belowGroundDropped: packed.belowGroundDropped }, 'model run stored');
+    logger.info({ runId, model, cycleTime: group.cycleTime, forecastHour: group.forecastHour, soundings: runCount, storedBytes: runBytes, belowGroundDropped: packed.belowGroundDropped, decodedMs, totalMs: Math.round(performance.now() - startedAt) }, 'model run stored');
   }
   scheduleRunRetention(db, logger, office.id);
   return ok({ runIds, soundingCount, storedBytes });
@@ -237,7 +241,7 @@ async function analyseAndStore(
   progress: (count: number) => void,
 ): Promise<Result<void, { reason: string }>> {
   const batchSize = ctx.gribTuning?.batchSize ?? 1000;
-  const insertRows = ctx.gribTuning?.insertRows ?? 500;
+  const insertRows = ctx.gribTuning?.insertRows ?? 200;
   const points: number[] = [];
   for (let slot = 0; slot < packed.usable.length; slot++) if (packed.usable[slot]) points.push(slot);
   const batches: number[][] = [];
@@ -278,6 +282,9 @@ async function analyseAndStore(
           ...figures,
         };
       });
+      // PGlite runs on this thread: short statements with a turn of the event loop between
+      // them let requests that arrived meanwhile queue their queries first.
+      await new Promise((resolve) => setImmediate(resolve));
       await ctx.db.insert(gridSoundings).values(rows);
     }
     progress(slots.length);

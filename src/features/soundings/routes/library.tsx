@@ -16,6 +16,7 @@ import { useDeleteSounding } from '../api/delete-sounding';
 import { soundingsListQuery, useSoundings } from '../api/get-soundings';
 import { DeleteSoundingDialog } from '../components/delete-sounding-dialog';
 import { LibraryFilterBar } from '../components/library-filter-bar';
+import { ModelRunsPanel } from '../components/model-runs-panel';
 import { SoundingsTable } from '../components/soundings-table';
 import { filtersFromSearchParams, pageCount, searchParamsFromFilters, withFilterChange } from '../utils/library-filters';
 import { canDeleteSounding, canWriteSoundings } from '../utils/sounding-permissions';
@@ -91,6 +92,19 @@ export function SoundingLibraryPage() {
       />
       <div className="space-y-3">
         <LibraryFilterBar filters={filters} onChange={changeFilters} onClear={() => setFilters(() => withFilterChange(filtersFromSearchParams(new URLSearchParams()), {}))} />
+        <ModelRunsPanel
+          runId={searchParams.get('run') ?? undefined}
+          onRunChange={(runId) =>
+            setSearchParams((current) => {
+              const next = new URLSearchParams(current);
+              if (runId) next.set('run', runId);
+              else next.delete('run');
+              return next;
+            }, { replace: true })
+          }
+          role={viewer?.role}
+          units={units}
+        />
         {deletedNote ? (
           <Notice tone="success" actions={<Button size="sm" variant="ghost" onClick={() => setDeletedNote(null)}>Dismiss</Button>}>
             {deletedNote}
