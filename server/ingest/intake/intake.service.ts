@@ -19,7 +19,7 @@ import type { Config } from '../../config';
 import type { Database } from '../../db/client';
 import { intakeFiles, intakeSources } from '../../db/schema';
 import { findOffice } from '../../services/office.service';
-import { ECCODES_INSTALL_HINT, eccodesStatus } from './eccodes-status';
+import { ECCODES_INSTALL_HINT, eccodesStatus } from '../eccodes';
 import { intakeRuntimeOf } from './intake-runtime';
 import { pullUrlProblem } from './pull-sources';
 
@@ -92,7 +92,7 @@ export async function getIntakeStatus(db: Database, config: Config): Promise<Res
   const eccodes = await eccodesStatus();
   const runtime = intakeRuntimeOf(db);
   return ok({
-    eccodes: { ...eccodes, installHint: ECCODES_INSTALL_HINT },
+    eccodes: { available: eccodes.available, version: eccodes.version, installHint: ECCODES_INSTALL_HINT },
     folder: { watching: runtime !== undefined, path: runtime?.folder ?? config.intakeDir ?? null },
   });
 }
