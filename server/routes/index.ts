@@ -3,6 +3,7 @@ import { healthRoutes } from './health.routes';
 import { issuancesRoutes } from './issuances.routes';
 import { mailMessagesRoutes } from './mail-messages.routes';
 import { meRoutes } from './me.routes';
+import { modelFieldsRoutes } from './model-fields.routes';
 import { officeRoutes } from './office.routes';
 import { ogcRoutes } from './ogc.routes';
 import { outlooksRoutes } from './outlooks.routes';
@@ -15,4 +16,4 @@ import { webhooksRoutes } from './webhooks.routes';
 import { workflowRoutes } from './workflow.routes';
 
 /** Every API route of the app (better-auth's own routes under /api/auth are separate). */
-export const apiRoutes: RouteDefinition[] = [...healthRoutes, ...meRoutes, ...officeRoutes, ...usersRoutes, ...mailMessagesRoutes, ...soundingsRoutes, ...outlooksRoutes, ...workflowRoutes, ...issuancesRoutes, ...subscriptionsRoutes, ...capRoutes, ...ogcRoutes, ...webhooksRoutes, ...verificationRoutes];
+export const apiRoutes: RouteDefinition[] = [...healthRoutes, ...meRoutes, ...officeRoutes, ...usersRoutes, ...mailMessagesRoutes, ...soundingsRoutes, ...outlooksRoutes, ...workflowRoutes, ...issuancesRoutes, ...subscriptionsRoutes, ...capRoutes, ...ogcRoutes, ...webhooksRoutes, ...verificationRoutes, ...modelFieldsRoutes];

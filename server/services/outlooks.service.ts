@@ -18,6 +18,7 @@ import { auditEvents, outlookRevisions, outlooks, riskAreas, soundings, users } 
 import { findOffice } from './office.service';
 import { keyFigures } from './soundings.service';
 import { runGeometryTask } from '../workers/geometry-pool';
+import { evidenceSources, gridEvidenceOf } from './grid-evidence.service';
 
 type OutlookRow = typeof outlooks.$inferSelect;
 type AreaRow = typeof riskAreas.$inferSelect;
@@ -332,13 +333,17 @@ export async function getOutlookEvidence(db: Database, outlookId: string, source
   const outlook = await loadOutlook(db, outlookId);
   if (!outlook) return err(notFound());
   const office = await requireOffice(db);
-  const candidates = await evidenceSoundings(db, new Date(outlook.validFrom), new Date(outlook.validUntil));
+  const observed = await evidenceSoundings(db, new Date(outlook.validFrom), new Date(outlook.validUntil));
+  // Grid soundings of the runs feeding this outlook (grid-evidence.service.ts).
+  const grid = source === 'observed' ? { runs: [], candidates: [], soundingCount: 0 } : await gridEvidenceOf(db, outlook);
+  const candidates = [...observed, ...grid.candidates];
   const guidance = Object.keys(office.guidanceThresholds).length ? office.guidanceThresholds : defaultGuidanceThresholds;
   // Geometry checks and point-in-area tests run in the worker pool, off the event loop.
   const report = await runGeometryTask({ kind: 'evidence-report', input: { outlook, candidates, ladder: office.riskLadder, guidance: guidance as GuidanceThresholds, region: office.region, source } });
   if (!report.ok) return report;
   const areas = report.value;
-  return ok({ areas, soundingCount: candidates.filter((s) => !s.modified && (!source || s.source === source)).length });
+  const soundingCount = observed.filter((s) => !s.modified && (!source || s.source === source)).length + grid.soundingCount;
+  return ok({ areas, soundingCount, runs: grid.runs, sourcesByArea: evidenceSources(areas, grid.runs) });
 }
 
 /** The outlook's areas as an RFC 7946 FeatureCollection. */

@@ -1,5 +1,8 @@
 import { renderMapPng, renderMapSvg, type MapImageInput } from '../exports/map-image';
 import { buildEvidenceReport, type AreaEvidenceReport, type EvidenceReportInput } from './evidence-report';
+import { contourField, type FieldContours, type GridField } from '../../shared/model-fields/contour-field';
+import { fieldDefinitions } from '../../shared/model-fields/field-bands';
+import type { KeyFigureKey } from '../../shared/sounding/key-figures';
 import { matchSubscribers, type MatchSubscribersInput, type MatchSubscribersOutput } from './match-subscribers';
 
 /**
@@ -9,12 +12,14 @@ import { matchSubscribers, type MatchSubscribersInput, type MatchSubscribersOutp
 export type GeometryTask =
   | { kind: 'evidence-report'; input: EvidenceReportInput }
   | { kind: 'match-subscribers'; input: MatchSubscribersInput }
-  | { kind: 'render-map'; input: MapImageInput; format: 'svg' | 'png' };
+  | { kind: 'render-map'; input: MapImageInput; format: 'svg' | 'png' }
+  | { kind: 'field-contours'; input: { field: GridField; figure: KeyFigureKey } };
 
 export interface GeometryTaskResults {
   'evidence-report': AreaEvidenceReport[];
   'match-subscribers': MatchSubscribersOutput;
   'render-map': string;
+  'field-contours': FieldContours;
 }
 
 /** A task as sent to a worker; `drill` is a test-only instruction to make the worker die first. */
@@ -33,5 +38,7 @@ export function runGeometryTask(task: GeometryEnvelope): GeometryTaskResults[Geo
       return matchSubscribers(task.input);
     case 'render-map':
       return task.format === 'svg' ? renderMapSvg(task.input) : renderMapPng(task.input).toString('base64');
+    case 'field-contours':
+      return contourField(task.input.field, fieldDefinitions[task.input.figure]);
   }
 }

@@ -108,6 +108,10 @@ const matrix: MatrixRow[] = [
   { method: 'get', route: '/api/public/issuances/:issuanceNumber/verification', url: '/api/public/issuances/1999-0001/verification', expect: anyone(404) },
   { method: 'get', route: '/api/verification', url: '/api/verification', expect: readers(200) },
   { method: 'get', route: '/api/verification/export.csv', url: '/api/verification/export.csv', expect: readers(200) },
+  { method: 'get', route: '/api/model-fields', url: '/api/model-fields', expect: readers(200) },
+  { method: 'get', route: '/api/model-runs/:runId/field', url: `/api/model-runs/${missingId}/field?figure=mlCape`, expect: readers(404) },
+  { method: 'get', route: '/api/outlooks/:outlookId/evidence-runs', url: `/api/outlooks/${missingId}/evidence-runs`, expect: readers(404) },
+  { method: 'patch', route: '/api/outlooks/:outlookId/evidence-runs', url: `/api/outlooks/${missingId}/evidence-runs`, body: {}, expect: authors(400) },
   { method: 'post', route: '/api/mail-outbox/:messageId/resend', url: `/api/mail-outbox/${missingId}/resend`, body: {}, expect: staffOnly(409) },
 ];
 

@@ -10,3 +10,4 @@ export * from './distribution';
 export * from './webhooks';
 export * from './verification';
 export * from './model-runs';
+export * from './evidence-runs';
