@@ -1,17 +1,15 @@
-import Flatbush from 'flatbush';
 import { and, asc, desc, eq, gte, inArray, lte } from 'drizzle-orm';
-import { bbox } from '@turf/turf';
-import { MAX_EVIDENCE_RUNS, type EvidenceRunSelection, type EvidenceSourceCount, type ModelRunSummary, type UpdateEvidenceRunsInput } from '../../shared/contracts/model-fields';
-import type { AreaGeometry } from '../../shared/contracts/outlooks';
-import type { SoundingKeyFigures } from '../../shared/contracts/soundings';
-import type { EvidenceSounding } from '../../shared/evidence/evidence';
-import { emptyKeyFigures, keyFigureKeys, type KeyFigureKey } from '../../shared/sounding/key-figures';
+import { MAX_EVIDENCE_RUNS, type EvidenceRunSelection, type ModelRunSummary, type UpdateEvidenceRunsInput } from '../../shared/contracts/model-fields';
+import { keyFigureKeys, type KeyFigureKey } from '../../shared/sounding/key-figures';
 import { isEditableState } from '../../shared/workflow/transitions';
 import { appError, type AppError, type FieldIssue } from '../../shared/errors';
 import { err, ok, type Result } from '../../shared/result';
 import type { Actor } from '../auth/require-role';
 import type { Database, DatabaseOrTransaction } from '../db/client';
 import { gridSoundings, modelRuns, outlookEvidenceRuns, outlooks } from '../db/schema';
+import { packRunFigures, runFiguresFromRows, type PackedRunFigures, type RunFigures } from '../workers/grid-evidence-report';
+
+export { evidenceSources, gridCandidates, runFiguresFromRows, type RunFigures } from '../workers/grid-evidence-report';
 
 /**
  * Grid soundings as evidence. A run's key figures are read once (only the figure columns, never
@@ -23,18 +21,6 @@ import { gridSoundings, modelRuns, outlookEvidenceRuns, outlooks } from '../db/s
 
 /** Runs whose figures stay in memory (about 5 MB for a 40,000-point run). */
 export const MAX_CACHED_RUNS = 8;
-
-export interface RunFigures {
-  run: ModelRunSummary;
-  count: number;
-  pointIndex: Int32Array;
-  latitude: Float64Array;
-  longitude: Float64Array;
-  flagCount: Uint16Array;
-  /** NaN where the figure is missing. */
-  figures: Record<KeyFigureKey, Float32Array>;
-  index: Flatbush;
-}
 
 const cache = new Map<string, RunFigures>();
 
@@ -78,31 +64,6 @@ export async function readRunFigures(db: DatabaseOrTransaction, run: ModelRunSum
   return runFiguresFromRows(run, rows);
 }
 
-type FigureRow = { pointIndex: number; latitude: number; longitude: number; flagCount: number } & Record<KeyFigureKey, number | null>;
-
-/** Typed arrays and a spatial index from rows of one run (also used by the bench and tests). */
-export function runFiguresFromRows(run: ModelRunSummary, rows: readonly FigureRow[]): RunFigures {
-  const count = rows.length;
-  const pointIndex = new Int32Array(count);
-  const latitude = new Float64Array(count);
-  const longitude = new Float64Array(count);
-  const flagCount = new Uint16Array(count);
-  // eslint-disable-next-line @typescript-eslint/no-unsafe-type-assertion -- built from keyFigureKeys, one array per key.
-  const figures = Object.fromEntries(keyFigureKeys.map((key) => [key, new Float32Array(count)])) as Record<KeyFigureKey, Float32Array>;
-  const index = new Flatbush(Math.max(1, count));
-  rows.forEach((row, i) => {
-    pointIndex[i] = row.pointIndex;
-    latitude[i] = row.latitude;
-    longitude[i] = row.longitude;
-    flagCount[i] = row.flagCount;
-    for (const key of keyFigureKeys) figures[key][i] = row[key] ?? NaN;
-    index.add(row.longitude, row.latitude, row.longitude, row.latitude);
-  });
-  if (count === 0) index.add(0, 0, 0, 0); // Flatbush needs one item; the empty run has no points to find.
-  index.finish();
-  return { run, count, pointIndex, latitude, longitude, flagCount, figures, index };
-}
-
 /**
  * The figures of the given ready runs, from the cache when it has them. Cached runs that are
  * gone from the database (deleted by retention or by hand) are dropped first.
@@ -128,66 +89,6 @@ export async function runFigures(db: DatabaseOrTransaction, runs: readonly Model
     const oldest = cache.keys().next().value;
     if (oldest === undefined) break;
     cache.delete(oldest);
-  }
-  return result;
-}
-
-const gridSoundingId = (runId: string, pointIndex: number) => `${runId}:${pointIndex}`;
-
-/**
- * Evidence soundings of the grid points that may lie inside any of the areas: those inside an
- * area's bounding box, found through each run's spatial index. The evidence report then tests
- * each against the polygon itself, so the answer matches testing every grid point.
- */
-export function gridCandidates(runs: readonly RunFigures[], geometries: readonly AreaGeometry[]): EvidenceSounding[] {
-  const boxes = geometries.map((g) => bbox(g));
-  const candidates: EvidenceSounding[] = [];
-  for (const figures of runs) {
-    const picked = new Uint8Array(figures.count);
-    for (const [west, south, east, north] of boxes) {
-      if (figures.count === 0) break;
-      for (const i of figures.index.search(west, south, east, north)) picked[i] = 1;
-    }
-    for (let i = 0; i < figures.count; i++) if (picked[i]) candidates.push(gridEvidenceSounding(figures, i));
-  }
-  return candidates;
-}
-
-function gridEvidenceSounding(figures: RunFigures, i: number): EvidenceSounding {
-  const values: SoundingKeyFigures = emptyKeyFigures();
-  values.flagCount = figures.flagCount[i] ?? 0;
-  for (const key of keyFigureKeys) {
-    const v = figures.figures[key][i];
-    values[key] = v === undefined || Number.isNaN(v) ? null : v;
-  }
-  const pointIndex = figures.pointIndex[i] ?? 0;
-  return {
-    id: gridSoundingId(figures.run.id, pointIndex),
-    stationId: `${figures.run.model} #${pointIndex}`,
-    latitude: figures.latitude[i] ?? 0,
-    longitude: figures.longitude[i] ?? 0,
-    validTime: figures.run.validTime,
-    source: 'model',
-    modified: false,
-    runId: figures.run.id,
-    figures: values,
-  };
-}
-
-/** Per area: how many of the soundings inside came from each run (null: observed or uploaded), in run order. */
-export function evidenceSources(areas: readonly { areaId: string; evidence: { soundingIds: readonly string[] } }[], runs: readonly ModelRunSummary[]): Record<string, EvidenceSourceCount[]> {
-  const order = new Map(runs.map((r, i) => [r.id, i]));
-  const result: Record<string, EvidenceSourceCount[]> = {};
-  for (const area of areas) {
-    const counts = new Map<string | null, number>();
-    for (const id of area.evidence.soundingIds) {
-      const colon = id.indexOf(':');
-      const runId = colon > 0 ? id.slice(0, colon) : null;
-      counts.set(runId, (counts.get(runId) ?? 0) + 1);
-    }
-    result[area.areaId] = [...counts.entries()]
-      .map(([runId, count]) => ({ runId, count }))
-      .sort((a, b) => (a.runId === null ? -1 : b.runId === null ? 1 : (order.get(a.runId) ?? 0) - (order.get(b.runId) ?? 0)));
   }
   return result;
 }
@@ -228,10 +129,13 @@ export async function evidenceRunsOf(db: DatabaseOrTransaction, outlook: Outlook
   return { mode: 'default', version, runs: available.slice(0, MAX_EVIDENCE_RUNS), available };
 }
 
-/** Grid evidence of an outlook: the feeding runs and the candidate grid soundings for its areas. */
-export async function gridEvidenceOf(db: DatabaseOrTransaction, outlook: OutlookPeriod & { areas: readonly { geometry: AreaGeometry }[] }): Promise<{ runs: ModelRunSummary[]; candidates: EvidenceSounding[]; soundingCount: number }> {
+/**
+ * Grid evidence of an outlook: the feeding runs, their figures packed for the worker pool
+ * (see grid-evidence-report.ts) and how many grid soundings are valid in the period.
+ */
+export async function gridEvidenceOf(db: DatabaseOrTransaction, outlook: OutlookPeriod): Promise<{ runs: ModelRunSummary[]; packed: PackedRunFigures[]; soundingCount: number }> {
   const { runs } = await evidenceRunsOf(db, outlook);
-  if (runs.length === 0) return { runs, candidates: [], soundingCount: 0 };
+  if (runs.length === 0) return { runs, packed: [], soundingCount: 0 };
   const figures = await runFigures(db, runs);
   const from = Date.parse(outlook.validFrom);
   const until = Date.parse(outlook.validUntil);
@@ -239,7 +143,7 @@ export async function gridEvidenceOf(db: DatabaseOrTransaction, outlook: Outlook
     const t = Date.parse(f.run.validTime);
     return t >= from && t <= until ? sum + f.count : sum;
   }, 0);
-  return { runs, candidates: gridCandidates(figures, outlook.areas.map((a) => a.geometry)), soundingCount };
+  return { runs, packed: figures.map(packRunFigures), soundingCount };
 }
 
 const outlookNotFound = () => appError('NOT_FOUND', 'That outlook does not exist.');

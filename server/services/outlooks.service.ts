@@ -18,7 +18,7 @@ import { auditEvents, outlookRevisions, outlooks, riskAreas, soundings, users } 
 import { findOffice } from './office.service';
 import { keyFigures } from './soundings.service';
 import { runGeometryTask } from '../workers/geometry-pool';
-import { evidenceSources, gridEvidenceOf } from './grid-evidence.service';
+import { gridEvidenceOf } from './grid-evidence.service';
 
 type OutlookRow = typeof outlooks.$inferSelect;
 type AreaRow = typeof riskAreas.$inferSelect;
@@ -333,17 +333,16 @@ export async function getOutlookEvidence(db: Database, outlookId: string, source
   const outlook = await loadOutlook(db, outlookId);
   if (!outlook) return err(notFound());
   const office = await requireOffice(db);
-  const observed = await evidenceSoundings(db, new Date(outlook.validFrom), new Date(outlook.validUntil));
-  // Grid soundings of the runs feeding this outlook (grid-evidence.service.ts).
-  const grid = source === 'observed' ? { runs: [], candidates: [], soundingCount: 0 } : await gridEvidenceOf(db, outlook);
-  const candidates = [...observed, ...grid.candidates];
+  const candidates = await evidenceSoundings(db, new Date(outlook.validFrom), new Date(outlook.validUntil));
+  // Grid soundings of the runs feeding this outlook travel packed (grid-evidence.service.ts).
+  const grid = source === 'observed' ? { runs: [], packed: [], soundingCount: 0 } : await gridEvidenceOf(db, outlook);
   const guidance = Object.keys(office.guidanceThresholds).length ? office.guidanceThresholds : defaultGuidanceThresholds;
   // Geometry checks and point-in-area tests run in the worker pool, off the event loop.
-  const report = await runGeometryTask({ kind: 'evidence-report', input: { outlook, candidates, ladder: office.riskLadder, guidance: guidance as GuidanceThresholds, region: office.region, source } });
+  const report = await runGeometryTask({ kind: 'grid-evidence-report', input: { outlook, candidates, ladder: office.riskLadder, guidance: guidance as GuidanceThresholds, region: office.region, source, runs: grid.packed } });
   if (!report.ok) return report;
-  const areas = report.value;
-  const soundingCount = observed.filter((s) => !s.modified && (!source || s.source === source)).length + grid.soundingCount;
-  return ok({ areas, soundingCount, runs: grid.runs, sourcesByArea: evidenceSources(areas, grid.runs) });
+  const { areas, sourcesByArea } = report.value;
+  const soundingCount = candidates.filter((s) => !s.modified && (!source || s.source === source)).length + grid.soundingCount;
+  return ok({ areas, soundingCount, runs: grid.runs, sourcesByArea });
 }
 
 /** The outlook's areas as an RFC 7946 FeatureCollection. */

@@ -1,4 +1,4 @@
-import { bbox, booleanPointInPolygon, point } from '@turf/turf';
+import { bbox, booleanPointInPolygon } from '@turf/turf';
 import type { AreaGeometry } from '../contracts/outlooks';
 import type { SoundingKeyFigures } from '../contracts/soundings';
 
@@ -61,7 +61,7 @@ export interface AreaEvidence {
  * Quantile of sorted values by linear interpolation between closest ranks (Hyndman and Fan
  * 1996, definition 7; the default of R and numpy — common practice).
  */
-export function quantile(sorted: readonly number[], q: number): number {
+export function quantile(sorted: ArrayLike<number>, q: number): number {
   if (sorted.length === 0) throw new Error('quantile of no values');
   const position = (sorted.length - 1) * q;
   const lower = Math.floor(position);
@@ -72,14 +72,20 @@ export function quantile(sorted: readonly number[], q: number): number {
 }
 
 /** Equal-width histogram with `bins` bins spanning min..max (one bin when all values are equal). */
-export function histogram(sorted: readonly number[], bins = 8): HistogramBin[] {
+export function histogram(sorted: ArrayLike<number>, bins = 8): HistogramBin[] {
   const min = sorted[0];
   const max = sorted[sorted.length - 1];
   if (min === undefined || max === undefined) return [];
-  if (max === min) return [{ from: min, to: max, count: sorted.length }];
+  return binValues(sorted, min, max, bins);
+}
+
+/** Equal-width bins of values in any order whose smallest and largest are min and max. */
+function binValues(values: ArrayLike<number>, min: number, max: number, bins: number): HistogramBin[] {
+  if (max === min) return [{ from: min, to: max, count: values.length }];
   const width = (max - min) / bins;
   const result = Array.from({ length: bins }, (_, i) => ({ from: min + i * width, to: min + (i + 1) * width, count: 0 }));
-  for (const value of sorted) {
+  for (let i = 0; i < values.length; i++) {
+    const value = values[i] ?? min;
     const index = Math.min(bins - 1, Math.floor((value - min) / width));
     const bin = result[index];
     if (bin) bin.count++;
@@ -87,17 +93,66 @@ export function histogram(sorted: readonly number[], bins = 8): HistogramBin[] {
   return result;
 }
 
-export function summarise(values: number[]): ParameterStats | undefined {
+/**
+ * Puts the k-th smallest value at index k, smaller ones before and larger ones after
+ * (Hoare's quickselect, median-of-three pivot): linear time on average, where a full sort is
+ * n log n; the statistics of areas over whole model grids need only a few ranks.
+ */
+function selectKth(values: Float64Array, k: number): number {
+  let left = 0;
+  let right = values.length - 1;
+  while (right > left) {
+    const middle = (left + right) >> 1;
+    const a = values[left] ?? 0;
+    const b = values[middle] ?? 0;
+    const c = values[right] ?? 0;
+    const pivot = a < b ? (b < c ? b : a < c ? c : a) : a < c ? a : b < c ? c : b;
+    let i = left;
+    let j = right;
+    while (i <= j) {
+      while ((values[i] ?? 0) < pivot) i++;
+      while ((values[j] ?? 0) > pivot) j--;
+      if (i <= j) {
+        const t = values[i] ?? 0;
+        values[i] = values[j] ?? 0;
+        values[j] = t;
+        i++;
+        j--;
+      }
+    }
+    if (k <= j) right = j;
+    else if (k >= i) left = i;
+    else break;
+  }
+  return values[k] ?? 0;
+}
+
+/** quantile() on values in any order (reorders them); the same definition, without sorting. */
+function quantileUnsorted(values: Float64Array, q: number): number {
+  const position = (values.length - 1) * q;
+  const lower = Math.floor(position);
+  const a = selectKth(values, lower);
+  if (position === lower) return a;
+  let b = Infinity;
+  for (let i = lower + 1; i < values.length; i++) b = Math.min(b, values[i] ?? Infinity);
+  return a + (b - a) * (position - lower);
+}
+
+export function summarise(values: ArrayLike<number>): ParameterStats | undefined {
+  return summariseInPlace(Float64Array.from(values));
+}
+
+/** summarise() of a buffer it may reorder. */
+function summariseInPlace(values: Float64Array): ParameterStats | undefined {
   if (values.length === 0) return undefined;
-  const sorted = [...values].sort((a, b) => a - b);
-  return {
-    count: sorted.length,
-    min: sorted[0] ?? 0,
-    median: quantile(sorted, 0.5),
-    p90: quantile(sorted, 0.9),
-    max: sorted[sorted.length - 1] ?? 0,
-    histogram: histogram(sorted),
-  };
+  let min = Infinity;
+  let max = -Infinity;
+  for (let i = 0; i < values.length; i++) {
+    const v = values[i] ?? 0;
+    if (v < min) min = v;
+    if (v > max) max = v;
+  }
+  return { count: values.length, min, median: quantileUnsorted(values, 0.5), p90: quantileUnsorted(values, 0.9), max, histogram: binValues(values, min, max, 8) };
 }
 
 /**
@@ -107,7 +162,7 @@ export function summarise(values: number[]): ParameterStats | undefined {
 export function soundingsInside<T extends Pick<EvidenceSounding, 'latitude' | 'longitude'>>(geometry: AreaGeometry, soundings: readonly T[]): T[] {
   const [west, south, east, north] = bbox(geometry);
   return soundings.filter(
-    (s) => s.longitude >= west && s.longitude <= east && s.latitude >= south && s.latitude <= north && booleanPointInPolygon(point([s.longitude, s.latitude]), geometry),
+    (s) => s.longitude >= west && s.longitude <= east && s.latitude >= south && s.latitude <= north && booleanPointInPolygon([s.longitude, s.latitude], geometry),
   );
 }
 
@@ -115,9 +170,14 @@ export function soundingsInside<T extends Pick<EvidenceSounding, 'latitude' | 'l
 export function areaEvidence(areaId: string, geometry: AreaGeometry, soundings: readonly EvidenceSounding[]): AreaEvidence {
   const inside = soundingsInside(geometry, soundings);
   const stats: AreaEvidence['stats'] = {};
+  const values = new Float64Array(inside.length);
   for (const { key } of evidenceParameters) {
-    const values = inside.map((s) => s.figures[key]).filter((v): v is number => v !== null && Number.isFinite(v));
-    const summary = summarise(values);
+    let count = 0;
+    for (const s of inside) {
+      const v = s.figures[key];
+      if (v !== null && Number.isFinite(v)) values[count++] = v;
+    }
+    const summary = summariseInPlace(values.subarray(0, count));
     if (summary) stats[key] = summary;
   }
   const flaggedCount = inside.filter((s) => s.figures.flagCount > 0).length;
