@@ -2,7 +2,7 @@ import { booleanPointInPolygon, point } from '@turf/turf';
 import { eq } from 'drizzle-orm';
 import type TestAgent from 'supertest/lib/agent';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { modelRuns } from '../../server/db/schema';
+import { issuances, modelRuns } from '../../server/db/schema';
 import type { Stormdraft } from '../../server/start';
 import { fieldDefinitions } from '../../shared/model-fields/field-bands';
 import { quantile } from '../../shared/evidence/evidence';
@@ -134,6 +134,25 @@ describe('evidence over grid soundings', () => {
     expect(res.body.runs).toEqual([expect.objectContaining({ id: runId, model: 'TESTNEST', cycleTime: '2031-06-01T12:00:00.000Z', forecastHour: 6 })]);
     expect(res.body.sourcesByArea[report.areaId]).toEqual([{ runId, count: inside.length }]);
     expect(res.body.soundingCount).toBe(nx * ny);
+  });
+
+  it('When the outlook is published, then the frozen evidence counts the grid soundings as the panel does', async () => {
+    const draft = await draftOn2031();
+    await forecaster.put(`/api/outlooks/${draft.id}`).send({ version: draft.version, headline: 'x', discussion: '', hazardNotes: {}, validFrom: draft.validFrom, validUntil: draft.validUntil, areas: [{ levelKey: 'level1', hazards: [], geometry: area }] });
+    // Only the dome run feeds it, so later runs of this file cannot change the count.
+    expect((await forecaster.patch(`/api/outlooks/${draft.id}/evidence-runs`).send({ version: 0, runIds: [runId] })).status).toBe(200);
+    const panel = await forecaster.get(`/api/outlooks/${draft.id}/evidence`);
+    const act = async (agent: TestAgent, action: string) => {
+      const current = await lead.get(`/api/outlooks/${draft.id}`);
+      return agent.post(`/api/outlooks/${draft.id}/${action}`).send({ version: current.body.version });
+    };
+    expect((await act(forecaster, 'submit')).status).toBe(200);
+    expect((await act(lead, 'approve')).status).toBe(200);
+    const published = await act(lead, 'publish');
+    expect(published.status).toBe(200);
+    const [issued] = await sd.ctx.db.select().from(issuances).where(eq(issuances.number, published.body.issuanceNumber));
+    expect(issued?.snapshot.evidence?.[0]?.count).toBe(panel.body.areas[0].evidence.count);
+    expect(issued?.snapshot.evidence?.[0]?.count).toBeGreaterThan(5);
   });
 
   it('When the run is deleted, then the evidence forgets it (no stale cache)', async () => {
