@@ -82,9 +82,38 @@ export function gridCandidates(runs: readonly RunFigures[], geometries: readonly
       if (figures.count === 0) break;
       for (const i of figures.index.search(west, south, east, north)) picked[i] = 1;
     }
-    for (let i = 0; i < figures.count; i++) if (picked[i]) candidates.push(gridEvidenceSounding(figures, i));
+    const soundings = materializedSoundings(figures);
+    for (let i = 0; i < figures.count; i++) {
+      const sounding = picked[i] ? soundings[i] : undefined;
+      if (sounding) candidates.push(sounding);
+    }
   }
   return candidates;
+}
+
+/**
+ * Runs whose evidence soundings a worker keeps made (about 16 MB each for 40,000 points). A
+ * ready run never changes, and only runs the server asks for are read, so a deleted run is
+ * simply never asked for again and drops out as newer runs come in.
+ */
+export const MAX_MATERIALIZED_RUNS = 4;
+const materialized = new Map<string, EvidenceSounding[]>();
+
+/** Every grid point of a run as an evidence sounding, made once per run and worker. */
+function materializedSoundings(figures: RunFigures): EvidenceSounding[] {
+  let soundings = materialized.get(figures.run.id);
+  if (soundings && soundings.length === figures.count) {
+    materialized.delete(figures.run.id); // re-insert: most recently used last
+  } else {
+    soundings = Array.from({ length: figures.count }, (_, i) => gridEvidenceSounding(figures, i));
+  }
+  materialized.set(figures.run.id, soundings);
+  while (materialized.size > MAX_MATERIALIZED_RUNS) {
+    const oldest = materialized.keys().next().value;
+    if (oldest === undefined) break;
+    materialized.delete(oldest);
+  }
+  return soundings;
 }
 
 const value = (column: Float32Array, i: number): number | null => {
