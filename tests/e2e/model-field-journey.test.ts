@@ -55,4 +55,28 @@ describe('browser journey: a forecaster draws a model field under the sounding m
     expect(fills).toEqual(fieldDefinitions.mlCape.colours.slice(0, 7));
     await expectAccessible(page, 'model field');
   });
+
+  it('When the author ticks the run for an outlook, then the evidence panel names it beside the statistics', async () => {
+    const headers = { Origin: journey.baseUrl };
+    const created = await page.request.post(`${journey.baseUrl}/api/outlooks`, { headers, data: { day: 1, issuanceTime: '2027-04-18T15:00:00Z', headline: 'Grid evidence journey' } });
+    expect(created.status()).toBe(201);
+    const outlook = (await created.json()) as { id: string; version: number; validFrom: string; validUntil: string };
+    const [office] = await journey.sd.ctx.db.select({ region: offices.region }).from(offices).limit(1);
+    const { west, south, east, north } = office?.region ?? { west: 0, south: 0, east: 1, north: 1 };
+    const mid = { x: (west + east) / 2, y: (south + north) / 2, dx: (east - west) / 8, dy: (north - south) / 8 };
+    const geometry = { type: 'Polygon', coordinates: [[[mid.x - mid.dx, mid.y - mid.dy], [mid.x + mid.dx, mid.y - mid.dy], [mid.x + mid.dx, mid.y + mid.dy], [mid.x - mid.dx, mid.y + mid.dy], [mid.x - mid.dx, mid.y - mid.dy]]] };
+    const saved = await page.request.put(`${journey.baseUrl}/api/outlooks/${outlook.id}`, { headers, data: { version: outlook.version, headline: 'Grid evidence journey', discussion: '', hazardNotes: {}, validFrom: outlook.validFrom, validUntil: outlook.validUntil, areas: [{ levelKey: 'level2', hazards: [], geometry, label: 'Dome' }] } });
+    expect(saved.status()).toBe(200);
+
+    await page.goto(`${journey.baseUrl}/outlooks/${outlook.id}`);
+    await page.getByRole('tab', { name: 'All areas' }).click();
+    const runs = page.getByRole('group', { name: 'Model runs in the evidence' });
+    const tick = runs.getByRole('checkbox', { name: /VALLEY3 2027-04-18 12Z \+6 h/ });
+    await tick.check();
+    await expect.poll(async () => (await runs.textContent()) ?? '').toContain('Picked by the author');
+    await page.getByRole('button', { name: /Dome/ }).first().click();
+    const sources = page.getByTestId('evidence-sources');
+    await expect.poll(async () => (await sources.textContent()) ?? '').toMatch(/Statistics from .*VALLEY3 2027-04-18 12Z \+6 h \(\d+\)/);
+    await expectAccessible(page, 'evidence from a model run');
+  });
 });

@@ -12,14 +12,17 @@ export function EvidenceRunPicker({ outlookId, editable }: { outlookId: string; 
   const selection = useEvidenceRuns(outlookId);
   const update = useUpdateEvidenceRuns(outlookId);
   const [problem, setProblem] = useState<string | null>(null);
+  // The pick being stored, shown at once so a tick does not wait for the server.
+  const [pending, setPending] = useState<string[] | null>(null);
   if (selection.isError) return <p className="text-[13px] text-danger">The model runs could not be loaded: {selection.error.message}</p>;
   if (!selection.data) return <p className="text-[13px] text-ink-muted">Loading model runs…</p>;
   const { mode, runs, available, version } = selection.data;
-  const chosen = new Set(mode === 'chosen' ? runs.map((r) => r.id) : []);
+  const chosen = new Set(pending ?? (mode === 'chosen' ? runs.map((r) => r.id) : []));
   const toggle = (runId: string, on: boolean) => {
     const next = on ? [...chosen, runId] : [...chosen].filter((id) => id !== runId);
     setProblem(null);
-    update.mutate({ version, runIds: next }, { onError: (error) => setProblem(error.message) });
+    setPending(next);
+    update.mutate({ version, runIds: next }, { onError: (error) => setProblem(error.message), onSettled: () => setPending(null) });
   };
   return (
     <fieldset className="space-y-1.5 text-[13px]" aria-busy={update.isPending || undefined}>
