@@ -102,6 +102,14 @@ CREATE TABLE "intake_sources" (
 	"created_at" timestamp with time zone DEFAULT now() NOT NULL
 );
 --> statement-breakpoint
+CREATE TABLE "outlook_evidence_runs" (
+	"outlook_id" uuid PRIMARY KEY NOT NULL,
+	"run_ids" uuid[] DEFAULT '{}' NOT NULL,
+	"version" integer DEFAULT 0 NOT NULL,
+	"updated_by" text,
+	"updated_at" timestamp with time zone DEFAULT now() NOT NULL
+);
+--> statement-breakpoint
 ALTER TABLE "offices" ADD COLUMN "support_guidance" jsonb;--> statement-breakpoint
 ALTER TABLE "grid_soundings" ADD CONSTRAINT "grid_soundings_run_id_model_runs_id_fk" FOREIGN KEY ("run_id") REFERENCES "public"."model_runs"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "model_run_settings" ADD CONSTRAINT "model_run_settings_office_id_offices_id_fk" FOREIGN KEY ("office_id") REFERENCES "public"."offices"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
@@ -109,6 +117,8 @@ ALTER TABLE "model_runs" ADD CONSTRAINT "model_runs_office_id_offices_id_fk" FOR
 ALTER TABLE "intake_files" ADD CONSTRAINT "intake_files_office_id_offices_id_fk" FOREIGN KEY ("office_id") REFERENCES "public"."offices"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "intake_files" ADD CONSTRAINT "intake_files_source_id_intake_sources_id_fk" FOREIGN KEY ("source_id") REFERENCES "public"."intake_sources"("id") ON DELETE set null ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "intake_sources" ADD CONSTRAINT "intake_sources_office_id_offices_id_fk" FOREIGN KEY ("office_id") REFERENCES "public"."offices"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
+ALTER TABLE "outlook_evidence_runs" ADD CONSTRAINT "outlook_evidence_runs_outlook_id_outlooks_id_fk" FOREIGN KEY ("outlook_id") REFERENCES "public"."outlooks"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
+ALTER TABLE "outlook_evidence_runs" ADD CONSTRAINT "outlook_evidence_runs_updated_by_users_id_fk" FOREIGN KEY ("updated_by") REFERENCES "public"."users"("id") ON DELETE set null ON UPDATE no action;--> statement-breakpoint
 CREATE UNIQUE INDEX "model_runs_office_run_idx" ON "model_runs" USING btree ("office_id","model","cycle_time","forecast_hour");--> statement-breakpoint
 CREATE INDEX "model_runs_office_id_valid_time_index" ON "model_runs" USING btree ("office_id","valid_time");--> statement-breakpoint
 CREATE UNIQUE INDEX "intake_files_office_hash_idx" ON "intake_files" USING btree ("office_id","content_hash") WHERE state in ('received', 'processing', 'done');--> statement-breakpoint

@@ -5,6 +5,7 @@ import { issuancesRoutes } from './issuances.routes';
 import { mailMessagesRoutes } from './mail-messages.routes';
 import { meRoutes } from './me.routes';
 import { modelRunsRoutes } from './model-runs.routes';
+import { modelFieldsRoutes } from './model-fields.routes';
 import { officeRoutes } from './office.routes';
 import { ogcRoutes } from './ogc.routes';
 import { outlooksRoutes } from './outlooks.routes';
@@ -17,4 +18,4 @@ import { webhooksRoutes } from './webhooks.routes';
 import { workflowRoutes } from './workflow.routes';
 
 /** Every API route of the app (better-auth's own routes under /api/auth are separate). */
-export const apiRoutes: RouteDefinition[] = [...healthRoutes, ...meRoutes, ...officeRoutes, ...usersRoutes, ...mailMessagesRoutes, ...soundingsRoutes, ...outlooksRoutes, ...workflowRoutes, ...issuancesRoutes, ...subscriptionsRoutes, ...capRoutes, ...ogcRoutes, ...webhooksRoutes, ...verificationRoutes, ...modelRunsRoutes, ...intakeRoutes];
+export const apiRoutes: RouteDefinition[] = [...healthRoutes, ...meRoutes, ...officeRoutes, ...usersRoutes, ...mailMessagesRoutes, ...soundingsRoutes, ...outlooksRoutes, ...workflowRoutes, ...issuancesRoutes, ...subscriptionsRoutes, ...capRoutes, ...ogcRoutes, ...webhooksRoutes, ...verificationRoutes, ...modelRunsRoutes, ...modelFieldsRoutes, ...intakeRoutes];

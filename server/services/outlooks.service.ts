@@ -21,6 +21,7 @@ import type { EvidenceCandidates } from '../../shared/contracts/evidence-candida
 import { MAX_LIVE_EVIDENCE_CANDIDATES, toEvidenceCandidate } from '../../shared/evidence/evidence-candidates';
 import { keyFigureKeys } from '../../shared/sounding/key-figures';
 import { runGeometryTask } from '../workers/geometry-pool';
+import { gridEvidenceOf } from './grid-evidence.service';
 
 type OutlookRow = typeof outlooks.$inferSelect;
 type AreaRow = typeof riskAreas.$inferSelect;
@@ -352,11 +353,14 @@ export async function getOutlookEvidence(db: Database, outlookId: string, source
   const published = outlook.state === 'published' ? await publishedGuidance(db, outlookId) : undefined;
   const guidance = published?.guidance ?? officeGuidance(office);
   const ladder = published?.riskLadder ?? office.riskLadder;
+  // Grid soundings of the runs feeding this outlook travel packed (grid-evidence.service.ts).
+  const grid = source === 'observed' ? { runs: [], packed: [], soundingCount: 0 } : await gridEvidenceOf(db, outlook);
   // Geometry checks and point-in-area tests run in the worker pool, off the event loop.
-  const report = await runGeometryTask({ kind: 'evidence-report', input: { outlook, candidates, ladder, guidance, region: office.region, source } });
+  const report = await runGeometryTask({ kind: 'grid-evidence-report', input: { outlook, candidates, ladder, guidance, region: office.region, source, runs: grid.packed } });
   if (!report.ok) return report;
-  const areas = report.value;
-  return ok({ areas, soundingCount: candidates.filter((s) => !s.modified && (!source || s.source === source)).length });
+  const { areas, sourcesByArea } = report.value;
+  const soundingCount = candidates.filter((s) => !s.modified && (!source || s.source === source)).length + grid.soundingCount;
+  return ok({ areas, soundingCount, runs: grid.runs, sourcesByArea });
 }
 
 /**

@@ -13,6 +13,7 @@ import type { Config } from '../config';
 import { enqueueDistribution, notifyDistributionQueued } from './distribution.service';
 import { findOffice, officeGuidance } from './office.service';
 import { evidenceSoundings, getOutlook, reviewEditorIds } from './outlooks.service';
+import { gridEvidenceOf } from './grid-evidence.service';
 import { runGeometryTask } from '../workers/geometry-pool';
 import { queueWebhookEvents } from './webhooks.service';
 
@@ -98,12 +99,14 @@ async function publishedEvidence(db: Database, office: OfficeRow, outlookId: str
   const o = outlook.value;
   const guidance = officeGuidance(office);
   const candidates = await evidenceSoundings(db, new Date(o.validFrom), new Date(o.validUntil));
-  const report = await runGeometryTask({ kind: 'evidence-report', input: { outlook: o, candidates, ladder: office.riskLadder, guidance, region: office.region } });
+  // The grid soundings of the runs feeding the outlook count as they do in the evidence panel.
+  const grid = await gridEvidenceOf(db, o);
+  const report = await runGeometryTask({ kind: 'grid-evidence-report', input: { outlook: o, candidates, ladder: office.riskLadder, guidance, region: office.region, runs: grid.packed } });
   if (!report.ok) return report;
   return ok({
     version: o.version,
     guidance,
-    evidence: report.value.map((r) => ({
+    evidence: report.value.areas.map((r) => ({
       areaId: r.areaId,
       levelKey: r.levelKey,
       count: r.evidence.count,

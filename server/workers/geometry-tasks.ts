@@ -1,5 +1,9 @@
 import { renderMapPng, renderMapSvg, type MapImageInput } from '../exports/map-image';
 import { buildEvidenceReport, type AreaEvidenceReport, type EvidenceReportInput } from './evidence-report';
+import { contourField, type FieldContours, type GridField } from '../../shared/model-fields/contour-field';
+import { fieldDefinitions } from '../../shared/model-fields/field-bands';
+import type { KeyFigureKey } from '../../shared/sounding/key-figures';
+import { buildGridEvidenceReport, type GridEvidenceReport, type GridEvidenceReportInput } from './grid-evidence-report';
 import { matchSubscribers, type MatchSubscribersInput, type MatchSubscribersOutput } from './match-subscribers';
 
 /**
@@ -9,12 +13,16 @@ import { matchSubscribers, type MatchSubscribersInput, type MatchSubscribersOutp
 export type GeometryTask =
   | { kind: 'evidence-report'; input: EvidenceReportInput }
   | { kind: 'match-subscribers'; input: MatchSubscribersInput }
-  | { kind: 'render-map'; input: MapImageInput; format: 'svg' | 'png' };
+  | { kind: 'render-map'; input: MapImageInput; format: 'svg' | 'png' }
+  | { kind: 'grid-evidence-report'; input: GridEvidenceReportInput }
+  | { kind: 'field-contours'; input: { field: GridField; figure: KeyFigureKey } };
 
 export interface GeometryTaskResults {
   'evidence-report': AreaEvidenceReport[];
   'match-subscribers': MatchSubscribersOutput;
   'render-map': string;
+  'field-contours': FieldContours;
+  'grid-evidence-report': GridEvidenceReport;
 }
 
 /** A task as sent to a worker; `drill` is a test-only instruction to make the worker die first. */
@@ -33,5 +41,9 @@ export function runGeometryTask(task: GeometryEnvelope): GeometryTaskResults[Geo
       return matchSubscribers(task.input);
     case 'render-map':
       return task.format === 'svg' ? renderMapSvg(task.input) : renderMapPng(task.input).toString('base64');
+    case 'grid-evidence-report':
+      return buildGridEvidenceReport(task.input);
+    case 'field-contours':
+      return contourField(task.input.field, fieldDefinitions[task.input.figure]);
   }
 }

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { calendarDateSchema, isoTimeSchema, versionSchema } from './primitives';
 import { countVertices, MAX_VERTICES_PER_OUTLOOK, tooManyVerticesMessage } from '../geometry/limits';
 import { hazardKinds, riskAreaInputSchema, riskAreaSchema, supportCheckSchema } from './risk-areas';
+import { evidenceSourceCountSchema, modelRunSummarySchema } from './model-fields';
 
 export * from './risk-areas';
 
@@ -150,7 +151,14 @@ export const areaEvidenceReportSchema = z.object({
 export type AreaEvidenceReport = z.infer<typeof areaEvidenceReportSchema>;
 
 /** GET /api/outlooks/:outlookId/evidence */
-export const outlookEvidenceSchema = z.object({ soundingCount: z.number(), areas: z.array(areaEvidenceReportSchema) });
+export const outlookEvidenceSchema = z.object({
+  soundingCount: z.number(),
+  areas: z.array(areaEvidenceReportSchema),
+  /** The model runs whose grid soundings fed this evidence. */
+  runs: z.array(modelRunSummarySchema).default([]),
+  /** Per area id: soundings inside by run (runId null: observed or uploaded soundings). */
+  sourcesByArea: z.record(z.string(), z.array(evidenceSourceCountSchema)).default({}),
+});
 export type OutlookEvidence = z.infer<typeof outlookEvidenceSchema>;
 
 export const areaImportResultSchema = z.object({ areas: z.array(riskAreaInputSchema) });

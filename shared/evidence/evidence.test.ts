@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import type { SoundingKeyFigures } from '../contracts/soundings';
 import type { AreaGeometry } from '../contracts/outlooks';
 import { emptyKeyFigures } from '../sounding/key-figures';
-import { areaEvidence, histogram, quantile, soundingsInPeriod, soundingsInside, type EvidenceSounding } from './evidence';
+import { areaEvidence, histogram, quantile, soundingsInPeriod, soundingsInside, summarise, type EvidenceSounding } from './evidence';
 
 const noFigures: SoundingKeyFigures = emptyKeyFigures();
 const at = (id: string, longitude: number, latitude: number, mlCape: number | null, validTime = '2027-04-18T18:00:00Z'): EvidenceSounding => ({
@@ -71,5 +71,18 @@ describe('areaEvidence: flagged soundings (issue 10)', () => {
     expect(evidence.count).toBe(3);
     expect(evidence.flaggedCount).toBe(2);
     expect(evidence.stats.mlCape?.count).toBe(3);
+  });
+});
+
+describe('summarise over grid-sized sets', () => {
+  it('when values come in any order with ties, then min, median, p90, max and bins equal those of the sorted values', () => {
+    let seed = 3;
+    const random = () => (seed = (seed * 16807) % 2147483647) / 2147483647;
+    for (const size of [1, 2, 3, 10, 101, 5000]) {
+      const values = Array.from({ length: size }, () => Math.round(random() * 40) * 25);
+      const sorted = [...values].sort((a, b) => a - b);
+      const summary = summarise(values);
+      expect(summary).toEqual({ count: size, min: sorted[0], median: quantile(sorted, 0.5), p90: quantile(sorted, 0.9), max: sorted[size - 1], histogram: histogram(sorted) });
+    }
   });
 });

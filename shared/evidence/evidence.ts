@@ -1,4 +1,4 @@
-import { bbox, booleanPointInPolygon, point } from '@turf/turf';
+import { bbox, booleanPointInPolygon } from '@turf/turf';
 import type { AreaGeometry } from '../contracts/outlooks';
 import type { SoundingKeyFigures } from '../contracts/soundings';
 
@@ -93,11 +93,16 @@ export function histogram(sorted: ArrayLike<number>, bins = 8): HistogramBin[] {
   const min = sorted[0];
   const max = sorted[sorted.length - 1];
   if (min === undefined || max === undefined) return [];
-  if (max === min) return [{ from: min, to: max, count: sorted.length }];
+  return binValues(sorted, min, max, bins);
+}
+
+/** Equal-width bins of values in any order whose smallest and largest are min and max. */
+function binValues(values: ArrayLike<number>, min: number, max: number, bins: number): HistogramBin[] {
+  if (max === min) return [{ from: min, to: max, count: values.length }];
   const width = (max - min) / bins;
   const result = Array.from({ length: bins }, (_, i) => ({ from: min + i * width, to: min + (i + 1) * width, count: 0 }));
-  for (let i = 0; i < sorted.length; i++) {
-    const value = sorted[i] ?? min;
+  for (let i = 0; i < values.length; i++) {
+    const value = values[i] ?? min;
     const index = Math.min(bins - 1, Math.floor((value - min) / width));
     const bin = result[index];
     if (bin) bin.count++;
@@ -105,23 +110,66 @@ export function histogram(sorted: ArrayLike<number>, bins = 8): HistogramBin[] {
   return result;
 }
 
-export function summarise(values: ArrayLike<number>): ParameterStats | undefined {
-  if (values.length === 0) return undefined;
-  // A typed array sorts numerically without a comparator call per pair (several times faster;
-  // the live preview summarises on every animation frame of a drag).
-  return summariseSorted(new Float64Array(values).sort());
+/**
+ * Puts the k-th smallest value at index k, smaller ones before and larger ones after
+ * (Hoare's quickselect, median-of-three pivot): linear time on average, where a full sort is
+ * n log n; the statistics of areas over whole model grids need only a few ranks.
+ */
+function selectKth(values: Float64Array, k: number): number {
+  let left = 0;
+  let right = values.length - 1;
+  while (right > left) {
+    const middle = (left + right) >> 1;
+    const a = values[left] ?? 0;
+    const b = values[middle] ?? 0;
+    const c = values[right] ?? 0;
+    const pivot = a < b ? (b < c ? b : a < c ? c : a) : a < c ? a : b < c ? c : b;
+    let i = left;
+    let j = right;
+    while (i <= j) {
+      while ((values[i] ?? 0) < pivot) i++;
+      while ((values[j] ?? 0) > pivot) j--;
+      if (i <= j) {
+        const t = values[i] ?? 0;
+        values[i] = values[j] ?? 0;
+        values[j] = t;
+        i++;
+        j--;
+      }
+    }
+    if (k <= j) right = j;
+    else if (k >= i) left = i;
+    else break;
+  }
+  return values[k] ?? 0;
 }
 
-/** The statistics of values already sorted ascending (at least one). */
-function summariseSorted(sorted: Float64Array): ParameterStats {
-  return {
-    count: sorted.length,
-    min: sorted[0] ?? 0,
-    median: quantile(sorted, 0.5),
-    p90: quantile(sorted, 0.9),
-    max: sorted[sorted.length - 1] ?? 0,
-    histogram: histogram(sorted),
-  };
+/** quantile() on values in any order (reorders them); the same definition, without sorting. */
+function quantileUnsorted(values: Float64Array, q: number): number {
+  const position = (values.length - 1) * q;
+  const lower = Math.floor(position);
+  const a = selectKth(values, lower);
+  if (position === lower) return a;
+  let b = Infinity;
+  for (let i = lower + 1; i < values.length; i++) b = Math.min(b, values[i] ?? Infinity);
+  return a + (b - a) * (position - lower);
+}
+
+export function summarise(values: ArrayLike<number>): ParameterStats | undefined {
+  return summariseInPlace(Float64Array.from(values));
+}
+
+/** summarise() of a buffer it may reorder. */
+function summariseInPlace(values: Float64Array): ParameterStats | undefined {
+  if (values.length === 0) return undefined;
+  let min = Infinity;
+  let max = -Infinity;
+  for (let i = 0; i < values.length; i++) {
+    const v = values[i] ?? 0;
+    if (v < min) min = v;
+    if (v > max) max = v;
+  }
+  return { count: values.length, min, median: quantileUnsorted(values, 0.5), p90: quantileUnsorted(values, 0.9), max, histogram: binValues(values, min, max, 8) };
 }
 
 /**
@@ -131,9 +179,43 @@ function summariseSorted(sorted: Float64Array): ParameterStats {
 export function soundingsInside<T extends Pick<EvidenceSounding, 'latitude' | 'longitude'>>(geometry: AreaGeometry, soundings: readonly T[]): T[] {
   const [west, south, east, north] = bbox(geometry);
   return soundings.filter(
-    (s) => s.longitude >= west && s.longitude <= east && s.latitude >= south && s.latitude <= north && booleanPointInPolygon(point([s.longitude, s.latitude]), geometry),
+    (s) => s.longitude >= west && s.longitude <= east && s.latitude >= south && s.latitude <= north && booleanPointInPolygon([s.longitude, s.latitude], geometry),
   );
 }
+
+/**
+ * One reader per summarised parameter: a named property read stays fast on tens of thousands of
+ * soundings, where a read by a variable key is slow once it has seen many keys.
+ */
+const figureReaders: Record<(typeof evidenceParameters)[number]['key'], (figures: SoundingKeyFigures) => number | null> = {
+  mlCape: (f) => f.mlCape,
+  muCape: (f) => f.muCape,
+  mlCin: (f) => f.mlCin,
+  mlLclHeightM: (f) => f.mlLclHeightM,
+  precipitableWaterMm: (f) => f.precipitableWaterMm,
+  bulkShear0to6kmMs: (f) => f.bulkShear0to6kmMs,
+  srh0to1km: (f) => f.srh0to1km,
+  stp: (f) => f.stp,
+  scp: (f) => f.scp,
+  surfaceDewpointC: (f) => f.surfaceDewpointC,
+  surfaceMixingRatioGkg: (f) => f.surfaceMixingRatioGkg,
+  srh0to500m: (f) => f.srh0to500m,
+  criticalAngleDeg: (f) => f.criticalAngleDeg,
+  mlLclLfcGapM: (f) => f.mlLclLfcGapM,
+  lapseRate0to3kmCKm: (f) => f.lapseRate0to3kmCKm,
+  lapseRate3to6kmCKm: (f) => f.lapseRate3to6kmCKm,
+  lapseRate850to500CKm: (f) => f.lapseRate850to500CKm,
+  lapseRate700to500CKm: (f) => f.lapseRate700to500CKm,
+  muCapeHailZone: (f) => f.muCapeHailZone,
+  freezingLevelM: (f) => f.freezingLevelM,
+  effectiveBulkShearMs: (f) => f.effectiveBulkShearMs,
+  bulkShear0to8kmMs: (f) => f.bulkShear0to8kmMs,
+  dcape: (f) => f.dcape,
+  meanWind0to6kmMs: (f) => f.meanWind0to6kmMs,
+  corfidiUpwindMs: (f) => f.corfidiUpwindMs,
+  corfidiDownwindMs: (f) => f.corfidiDownwindMs,
+  warmCloudDepthM: (f) => f.warmCloudDepthM,
+};
 
 /** The evidence of one area: which soundings lie inside and the statistics of each parameter. */
 export function areaEvidence(areaId: string, geometry: AreaGeometry, soundings: readonly EvidenceSounding[]): AreaEvidence {
@@ -143,15 +225,16 @@ export function areaEvidence(areaId: string, geometry: AreaGeometry, soundings: 
 /** The statistics of each parameter over soundings already known to lie inside an area. */
 export function evidenceOfSoundings(areaId: string, inside: readonly EvidenceSounding[]): AreaEvidence {
   const stats: AreaEvidence['stats'] = {};
-  // One scratch buffer for every parameter: runs on every animation frame of a drag.
-  const buffer = new Float64Array(inside.length);
+  const values = new Float64Array(inside.length);
   for (const { key } of evidenceParameters) {
     let count = 0;
-    for (const sounding of inside) {
-      const value = sounding.figures[key];
-      if (value !== null && Number.isFinite(value)) buffer[count++] = value;
+    const read = figureReaders[key];
+    for (const s of inside) {
+      const v = read(s.figures);
+      if (v !== null && Number.isFinite(v)) values[count++] = v;
     }
-    if (count > 0) stats[key] = summariseSorted(buffer.slice(0, count).sort());
+    const summary = summariseInPlace(values.subarray(0, count));
+    if (summary) stats[key] = summary;
   }
   const flaggedCount = inside.filter((s) => s.figures.flagCount > 0).length;
   return { areaId, count: inside.length, flaggedCount, soundingIds: inside.map((s) => s.id), stats };

@@ -122,6 +122,10 @@ const matrix: MatrixRow[] = [
   { method: 'patch', route: '/api/intake-sources/:sourceId', url: `/api/intake-sources/${missingId}`, body: {}, expect: staffOnly(400) },
   { method: 'delete', route: '/api/intake-sources/:sourceId', url: `/api/intake-sources/${missingId}`, expect: staffOnly(404) },
   { method: 'post', route: '/api/intake-sources/:sourceId/pull', url: `/api/intake-sources/${missingId}/pull`, body: {}, expect: staffOnly(404) },
+  { method: 'get', route: '/api/model-fields', url: '/api/model-fields', expect: readers(200) },
+  { method: 'get', route: '/api/model-runs/:runId/field', url: `/api/model-runs/${missingId}/field?figure=mlCape`, expect: readers(404) },
+  { method: 'get', route: '/api/outlooks/:outlookId/evidence-runs', url: `/api/outlooks/${missingId}/evidence-runs`, expect: readers(404) },
+  { method: 'patch', route: '/api/outlooks/:outlookId/evidence-runs', url: `/api/outlooks/${missingId}/evidence-runs`, body: {}, expect: authors(400) },
   { method: 'post', route: '/api/mail-outbox/:messageId/resend', url: `/api/mail-outbox/${missingId}/resend`, body: {}, expect: staffOnly(409) },
 ];
 

@@ -11,3 +11,4 @@ export * from './webhooks';
 export * from './verification';
 export * from './model-runs';
 export * from './intake';
+export * from './evidence-runs';

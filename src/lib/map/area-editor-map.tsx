@@ -8,6 +8,7 @@ import { CircleMarker, MapContainer, Pane, Popup, TileLayer, Tooltip, useMap } f
 import { insetOutline, labelAnchor } from './inset-outline';
 import { AREA_FILL_OPACITY, AREA_OUTLINE } from './area-outline';
 import { BoundaryLines, FitBounds, useOfflineBoundaries } from './base-map';
+import { FieldBandsLayer, type FieldBands } from './field-bands-layer';
 import type { MapRegion, PointProperties } from './point-map';
 import { escapeHtml } from '../../../shared/text/escape-html';
 import { judgementSvg, type JudgementKind } from './judgement-symbol';
@@ -66,6 +67,8 @@ interface AreaEditorMapProps {
   tileUrl?: string | undefined;
   tileAttribution?: string | undefined;
   className?: string;
+  /** A model field drawn as filled bands under the drawing; `fieldKey` names run and figure. */
+  field?: { bands: FieldBands; fieldKey: string } | null | undefined;
 }
 
 const PRECISION = 6;
@@ -400,7 +403,7 @@ function JudgementLayer({ points }: { points: readonly JudgedPoint[] }) {
  * comes back as GeoJSON (RFC 7946 positions, 6 decimals). No Leaflet object leaves this module.
  */
 export function AreaEditorMap(props: AreaEditorMapProps) {
-  const { label, region, areas, selectedId, points, renderPopup, layers, mode, tileUrl, tileAttribution, className } = props;
+  const { label, region, areas, selectedId, points, renderPopup, layers, mode, tileUrl, tileAttribution, className, field } = props;
   const { boundaries, problem: boundaryProblem } = useOfflineBoundaries();
   const latest = useRef<LatestProps>({ mode, onSelect: props.onSelect, onCreate: props.onCreate, onChange: props.onChange, onLiveChange: props.onLiveChange, onModeChange: props.onModeChange });
   useLayoutEffect(() => {
@@ -423,6 +426,7 @@ export function AreaEditorMap(props: AreaEditorMapProps) {
       >
         <FitBounds bounds={region} />
         {tileUrl ? <TileLayer url={tileUrl} attribution={tileAttribution ?? ''} /> : null}
+        {field ? <FieldBandsLayer field={field.bands} fieldKey={field.fieldKey} /> : null}
         {boundaries ? (
           <Pane name="boundaries" style={{ zIndex: 350, pointerEvents: 'none' }}>
             <BoundaryLines boundaries={boundaries} counties={layers.counties} />

@@ -3,6 +3,7 @@ import type { FeatureCollection, Point } from 'geojson';
 import type { ReactNode } from 'react';
 import { CircleMarker, MapContainer, Pane, Popup, TileLayer, Tooltip } from 'react-leaflet';
 import { BoundaryLines, FitBounds, useOfflineBoundaries } from './base-map';
+import { FieldBandsLayer, type FieldBands } from './field-bands-layer';
 
 /** A rectangle in degrees (WGS 84), e.g. the office region. */
 export interface MapRegion {
@@ -32,6 +33,8 @@ interface PointMapProps {
   tileUrl?: string | undefined;
   tileAttribution?: string | undefined;
   className?: string;
+  /** A model field drawn as filled bands under everything else; `fieldKey` names run and figure. */
+  field?: { bands: FieldBands; fieldKey: string } | null | undefined;
 }
 
 const NO_VALUE_FILL = '#ffffff';
@@ -40,7 +43,7 @@ const NO_VALUE_FILL = '#ffffff';
  * A Leaflet map of coloured points over the offline US state and county boundaries. Callers pass
  * plain GeoJSON and a popup renderer; no Leaflet object leaves this module.
  */
-export function PointMap({ label, region, points, renderPopup, tileUrl, tileAttribution, className }: PointMapProps) {
+export function PointMap({ label, region, points, renderPopup, tileUrl, tileAttribution, className, field }: PointMapProps) {
   const { boundaries, problem: boundaryProblem } = useOfflineBoundaries();
 
   return (
@@ -57,6 +60,7 @@ export function PointMap({ label, region, points, renderPopup, tileUrl, tileAttr
       >
         <FitBounds bounds={region} />
         {tileUrl ? <TileLayer url={tileUrl} attribution={tileAttribution ?? ''} /> : null}
+        {field ? <FieldBandsLayer field={field.bands} fieldKey={field.fieldKey} /> : null}
         {boundaries ? (
           <Pane name="boundaries" style={{ zIndex: 350 }}>
             <BoundaryLines boundaries={boundaries} />

@@ -40,14 +40,18 @@ interface EvidencePanelProps {
   preview?: boolean;
   units: UnitFormatters;
   stationOf: (soundingId: string) => string;
+  /** Where the soundings inside came from, e.g. a model run and its count (the statistics cover them all). */
+  sources?: { label: string; count: number }[];
 }
 
 /** The evidence for one area: count, min/median/p90/max per parameter with histograms, support check, sounding links. */
-export function EvidencePanel({ report, stale, preview = false, units, stationOf }: EvidencePanelProps) {
+export function EvidencePanel({ report, stale, preview = false, units, stationOf, sources = [] }: EvidencePanelProps) {
   if (!report) {
     return <p className="text-[13px] text-ink-muted">Evidence appears once this area is saved (a couple of seconds after your last change).</p>;
   }
   const { evidence, support } = report;
+  // Grid soundings (id `${runId}:${pointIndex}`) are counted per run below, not linked one by one.
+  const linked = evidence.soundingIds.filter((id) => !id.includes(':'));
   return (
     <div className="space-y-3" aria-busy={stale || undefined} data-evidence={preview ? 'preview' : stale ? 'stale' : 'record'}>
       {preview ? (
@@ -82,6 +86,11 @@ export function EvidencePanel({ report, stale, preview = false, units, stationOf
           ))}
         </ul>
       </div>
+      {sources.length > 0 ? (
+        <p className="text-[12px] text-ink-muted" data-testid="evidence-sources">
+          Statistics from {sources.map((s) => `${s.label} (${s.count})`).join(', ')}
+        </p>
+      ) : null}
       {evidence.count > 0 ? (
         <table className="w-full text-[12px]">
           <caption className="sr-only">Parameters of the soundings inside the area</caption>
@@ -129,11 +138,11 @@ export function EvidencePanel({ report, stale, preview = false, units, stationOf
           </tbody>
         </table>
       ) : null}
-      {evidence.soundingIds.length > 0 ? (
+      {linked.length > 0 ? (
         <div>
           <h3 className="text-[13px] font-semibold">Soundings inside</h3>
           <ul className="mt-1 flex flex-wrap gap-1 text-[12px]">
-            {evidence.soundingIds.map((id) => (
+            {linked.map((id) => (
               <li key={id}>
                 <Link to={`/soundings/${id}`} className="rounded bg-sunken px-1.5 py-0.5 text-accent hover:underline">
                   {stationOf(id)}

@@ -47,6 +47,11 @@ import { outlookStateLabels } from '../../../../shared/workflow/states';
 import { isEditableState } from '../../../../shared/workflow/transitions';
 import { isPointParameter, pointColour, pointParameters, type PointParameter } from '../utils/sounding-colours';
 import { formatPeriod, fromUtcInputValue, toUtcInputValue } from '../utils/valid-period';
+import { EvidenceRunPicker } from '../../../components/model-fields/evidence-run-picker';
+import { FieldControls } from '../../../components/model-fields/field-controls';
+import { evidenceSourceLabels } from '../../../components/model-fields/field-display';
+import { FieldLegend } from '../../../components/model-fields/field-legend';
+import { useFieldLayer } from '../../../components/model-fields/use-field-layer';
 
 /** Always loads the current version: another author may have saved since this tab last looked. */
 export const workspaceLoader =
@@ -80,6 +85,7 @@ function Workspace({ initial, office, mayAuthor }: { initial: Outlook; office: O
   const { document, change } = editor;
   const readOnly = !editable;
   const units = useUnits();
+  const fieldLayer = useFieldLayer();
   const location = useLocation();
   const justCreated = location.state === 'created';
   const [mode, setMode] = useState<EditorMode>('select');
@@ -297,6 +303,7 @@ function Workspace({ initial, office, mayAuthor }: { initial: Outlook; office: O
               points={points}
               layers={layers}
               mode={mode}
+              field={fieldLayer.mapField}
               onSelect={(id) => {
                 setSelectedId(id);
                 if (id !== null) setTab('area');
@@ -349,10 +356,13 @@ function Workspace({ initial, office, mayAuthor }: { initial: Outlook; office: O
               }}
             />
             {judgements ? <JudgementLegend counts={judgementCounts(judgements)} preview={view.kind === 'preview'} /> : null}
+            <FieldControls layer={fieldLayer} />
             <p className="pb-2 text-ink-muted">
               {soundings.data ? `${soundings.data.soundings.length} soundings valid in the period` : soundings.isError ? 'Soundings could not be loaded.' : 'Loading soundings…'}
             </p>
           </div>
+          {fieldLayer.field ? <FieldLegend field={fieldLayer.field} units={units.units} /> : null}
+          {fieldLayer.error ? <p className="text-[13px] text-danger">The model field could not be drawn: {fieldLayer.error.message}</p> : null}
         </div>
 
         <aside aria-label="Evidence panel" className="rounded-lg border border-line bg-panel">
@@ -383,7 +393,7 @@ function Workspace({ initial, office, mayAuthor }: { initial: Outlook; office: O
                       <h2 className="text-sm font-semibold">Evidence</h2>
                       <SelectField label="Source" hideLabel className="w-44" value={source} options={sourceOptions} onChange={(event) => isEvidenceSource(event.target.value) && setSource(event.target.value)} />
                     </div>
-                    <EvidencePanel report={shownReport} stale={view.kind === 'stale'} preview={view.kind === 'preview'} units={units} stationOf={(id) => stations.get(id) ?? liveEvidence.positions.get(id)?.stationId ?? 'Sounding'} />
+                    <EvidencePanel report={shownReport} stale={view.kind === 'stale'} preview={view.kind === 'preview'} units={units} stationOf={(id) => stations.get(id) ?? liveEvidence.positions.get(id)?.stationId ?? 'Sounding'} sources={evidenceSourceLabels(evidence.data, selected.id)} />
                   </section>
                 </>
               ) : (
@@ -407,6 +417,7 @@ function Workspace({ initial, office, mayAuthor }: { initial: Outlook; office: O
                   }}
                 />
                 <AreaImportExport outlookId={initial.id} readOnly={readOnly} onImported={onImported} />
+                <EvidenceRunPicker outlookId={initial.id} editable={editable} />
               </>
             ) : null}
             {tab === 'history' ? <RevisionList outlookId={initial.id} /> : null}

@@ -18,6 +18,9 @@ import { colourFor, colourScales } from '../utils/map-colours';
 import { figureDefinitions, isMapFigureKey, mapFigureKeys, type MapFigureKey } from '../utils/sounding-figures';
 import { canWriteSoundings } from '../utils/sounding-permissions';
 import { formatValidTimeShort } from '../utils/valid-time';
+import { FieldControls } from '../../../components/model-fields/field-controls';
+import { FieldLegend } from '../../../components/model-fields/field-legend';
+import { useFieldLayer } from '../../../components/model-fields/use-field-layer';
 
 const MAX_ROWS = 500;
 
@@ -38,6 +41,7 @@ export function SoundingMapPage() {
   const mayWrite = me.data !== undefined && me.data !== null && canWriteSoundings(me.data.user.role);
   const units = useUnits();
   const [parameter, setParameter] = useState<MapFigureKey>('mlCape');
+  const fieldLayer = useFieldLayer();
   const [chosenTime, setChosenTime] = useState<string | null>(null);
   const recent = useSoundings(recentFilters);
   const validTimes = useMemo(() => distinctValidTimes(recent.data?.soundings ?? []), [recent.data]);
@@ -72,7 +76,7 @@ export function SoundingMapPage() {
     <>
       <PageHeader
         title="Sounding map"
-        description="Soundings at one valid time, coloured by the parameter you choose. Click a point for its key figures and the diagram."
+        description="Soundings at one valid time, coloured by the parameter you choose, over a model field if you pick one. Click a point for its key figures and the diagram."
         actions={
           <ButtonLink to="/soundings" variant="secondary">
             Sounding library
@@ -97,6 +101,7 @@ export function SoundingMapPage() {
           options={validTimes.length === 0 ? [{ value: '', label: 'No soundings yet' }] : validTimes.map((time) => ({ value: time, label: formatValidTimeShort(time) }))}
           onChange={(event) => setChosenTime(event.target.value)}
         />
+        <FieldControls layer={fieldLayer} />
         {atTime.data && validTime !== null ? (
           <p className="pb-2 text-[13px] text-ink-muted" role="status">
             {soundings.length} {soundings.length === 1 ? 'sounding' : 'soundings'} at this time
@@ -125,12 +130,21 @@ export function SoundingMapPage() {
             points={points}
             tileUrl={office.data?.baseMap.tileUrl ?? undefined}
             tileAttribution={office.data?.baseMap.attribution ?? undefined}
+            field={fieldLayer.mapField}
             renderPopup={(properties) => {
               const sounding = byId.get(properties.id);
               return sounding ? <SoundingPopup sounding={sounding} units={units} /> : null;
             }}
           />
-          <FigureLegend figure={figureDefinitions[parameter]} scale={colourScales[parameter]} units={units} />
+          <div className="space-y-3">
+            <FigureLegend figure={figureDefinitions[parameter]} scale={colourScales[parameter]} units={units} />
+            {fieldLayer.field ? <FieldLegend field={fieldLayer.field} units={units.units} /> : null}
+            {fieldLayer.error ? (
+              <Notice tone="error" title="We could not draw the model field">
+                {fieldLayer.error.message}
+              </Notice>
+            ) : null}
+          </div>
         </div>
       )}
     </>
