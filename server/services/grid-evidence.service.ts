@@ -1,5 +1,5 @@
 import { and, asc, desc, eq, gte, inArray, lte } from 'drizzle-orm';
-import { MAX_EVIDENCE_RUNS, type EvidenceRunSelection, type ModelRunSummary, type UpdateEvidenceRunsInput } from '../../shared/contracts/model-fields';
+import { MAX_EVIDENCE_RUNS, type EvidenceRunSelection, type RunBrief, type UpdateEvidenceRunsInput } from '../../shared/contracts/model-fields';
 import { keyFigureKeys, type KeyFigureKey } from '../../shared/sounding/key-figures';
 import { isEditableState } from '../../shared/workflow/transitions';
 import { appError, type AppError, type FieldIssue } from '../../shared/errors';
@@ -36,7 +36,7 @@ export function clearRunFiguresCache(): void {
 
 type RunRow = typeof modelRuns.$inferSelect;
 
-export function toRunSummary(row: RunRow): ModelRunSummary {
+export function toRunSummary(row: RunRow): RunBrief {
   return {
     id: row.id,
     model: row.model,
@@ -55,7 +55,7 @@ export function toRunSummary(row: RunRow): ModelRunSummary {
 const figureColumns = Object.fromEntries(keyFigureKeys.map((key) => [key, gridSoundings[key]])) as { [K in KeyFigureKey]: (typeof gridSoundings)[K] };
 
 /** Reads a run's figures into typed arrays and indexes its points. */
-export async function readRunFigures(db: DatabaseOrTransaction, run: ModelRunSummary): Promise<RunFigures> {
+export async function readRunFigures(db: DatabaseOrTransaction, run: RunBrief): Promise<RunFigures> {
   const rows = await db
     .select({ pointIndex: gridSoundings.pointIndex, latitude: gridSoundings.latitude, longitude: gridSoundings.longitude, flagCount: gridSoundings.flagCount, ...figureColumns })
     .from(gridSoundings)
@@ -68,7 +68,7 @@ export async function readRunFigures(db: DatabaseOrTransaction, run: ModelRunSum
  * The figures of the given ready runs, from the cache when it has them. Cached runs that are
  * gone from the database (deleted by retention or by hand) are dropped first.
  */
-export async function runFigures(db: DatabaseOrTransaction, runs: readonly ModelRunSummary[]): Promise<RunFigures[]> {
+export async function runFigures(db: DatabaseOrTransaction, runs: readonly RunBrief[]): Promise<RunFigures[]> {
   const cachedIds = [...cache.keys()];
   if (cachedIds.length) {
     const alive = new Set((await db.select({ id: modelRuns.id }).from(modelRuns).where(inArray(modelRuns.id, cachedIds))).map((r) => r.id));
@@ -96,7 +96,7 @@ export async function runFigures(db: DatabaseOrTransaction, runs: readonly Model
 // ——— Which runs feed an outlook's evidence ———
 
 /** Ready runs valid within the period, newest cycle first (then by valid time); at most 50. */
-async function runsValidIn(db: DatabaseOrTransaction, validFrom: Date, validUntil: Date): Promise<ModelRunSummary[]> {
+async function runsValidIn(db: DatabaseOrTransaction, validFrom: Date, validUntil: Date): Promise<RunBrief[]> {
   const rows = await db
     .select()
     .from(modelRuns)
@@ -117,7 +117,7 @@ interface OutlookPeriod {
  * ready are skipped), or by default the ready runs valid in the outlook period, newest cycle
  * first, at most MAX_EVIDENCE_RUNS.
  */
-export async function evidenceRunsOf(db: DatabaseOrTransaction, outlook: OutlookPeriod): Promise<{ mode: 'chosen' | 'default'; version: number; runs: ModelRunSummary[]; available: ModelRunSummary[] }> {
+export async function evidenceRunsOf(db: DatabaseOrTransaction, outlook: OutlookPeriod): Promise<{ mode: 'chosen' | 'default'; version: number; runs: RunBrief[]; available: RunBrief[] }> {
   const [stored] = await db.select().from(outlookEvidenceRuns).where(eq(outlookEvidenceRuns.outlookId, outlook.id));
   const available = await runsValidIn(db, new Date(outlook.validFrom), new Date(outlook.validUntil));
   const version = stored?.version ?? 0;
@@ -133,7 +133,7 @@ export async function evidenceRunsOf(db: DatabaseOrTransaction, outlook: Outlook
  * Grid evidence of an outlook: the feeding runs, their figures packed for the worker pool
  * (see grid-evidence-report.ts) and how many grid soundings are valid in the period.
  */
-export async function gridEvidenceOf(db: DatabaseOrTransaction, outlook: OutlookPeriod): Promise<{ runs: ModelRunSummary[]; packed: PackedRunFigures[]; soundingCount: number }> {
+export async function gridEvidenceOf(db: DatabaseOrTransaction, outlook: OutlookPeriod): Promise<{ runs: RunBrief[]; packed: PackedRunFigures[]; soundingCount: number }> {
   const { runs } = await evidenceRunsOf(db, outlook);
   if (runs.length === 0) return { runs, packed: [], soundingCount: 0 };
   const figures = await runFigures(db, runs);

@@ -1,6 +1,6 @@
 import Flatbush from 'flatbush';
 import { bbox } from '@turf/turf';
-import type { EvidenceSourceCount, ModelRunSummary } from '../../shared/contracts/model-fields';
+import type { EvidenceSourceCount, RunBrief } from '../../shared/contracts/model-fields';
 import type { AreaGeometry } from '../../shared/contracts/outlooks';
 import type { SoundingKeyFigures } from '../../shared/contracts/soundings';
 import type { EvidenceSounding } from '../../shared/evidence/evidence';
@@ -16,7 +16,7 @@ import { buildEvidenceReport, type AreaEvidenceReport, type EvidenceReportInput 
  */
 
 export interface RunFigures {
-  run: ModelRunSummary;
+  run: RunBrief;
   count: number;
   pointIndex: Int32Array;
   latitude: Float64Array;
@@ -44,7 +44,7 @@ type FigureRow = { pointIndex: number; latitude: number; longitude: number; flag
 
 /** Typed arrays and a spatial index from rows of one run (also used by the bench and tests). */
 /** Typed arrays and a spatial index from rows of one run (also used by the bench and tests). */
-export function runFiguresFromRows(run: ModelRunSummary, rows: readonly FigureRow[]): RunFigures {
+export function runFiguresFromRows(run: RunBrief, rows: readonly FigureRow[]): RunFigures {
   const count = rows.length;
   const pointIndex = new Int32Array(count);
   const latitude = new Float64Array(count);
@@ -172,7 +172,7 @@ function gridEvidenceSounding(figures: RunFigures, i: number): EvidenceSounding 
 }
 
 /** Per area: how many of the soundings inside came from each run (null: observed or uploaded), in run order. */
-export function evidenceSources(areas: readonly { areaId: string; evidence: { soundingIds: readonly string[] } }[], runs: readonly ModelRunSummary[]): Record<string, EvidenceSourceCount[]> {
+export function evidenceSources(areas: readonly { areaId: string; evidence: { soundingIds: readonly string[] } }[], runs: readonly RunBrief[]): Record<string, EvidenceSourceCount[]> {
   const result: Record<string, EvidenceSourceCount[]> = {};
   for (const area of areas) {
     // Grid sounding ids are `${runId}:${pointIndex}`; comparing prefixes allocates nothing.

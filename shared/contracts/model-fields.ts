@@ -1,26 +1,17 @@
 import { z } from 'zod';
 import { keyFigureKeys } from '../sounding/key-figures';
+import { modelRunSummarySchema } from './model-runs';
 import { versionSchema } from './primitives';
 
 /** Runs an author may pick for one outlook's evidence (and the default takes at most as many). */
 export const MAX_EVIDENCE_RUNS = 4;
 
-/** A model run as pickers, legends and the evidence panel name it. */
-export const modelRunSummarySchema = z.object({
-  id: z.string(),
-  model: z.string(),
-  cycleTime: z.string(),
-  forecastHour: z.number(),
-  validTime: z.string(),
-  gridKind: z.string(),
-  nx: z.number(),
-  ny: z.number(),
-  soundingCount: z.number(),
-});
-export type ModelRunSummary = z.infer<typeof modelRunSummarySchema>;
+/** A model run as pickers, legends and the evidence panel name it (a part of the runs API's summary). */
+export const runBriefSchema = modelRunSummarySchema.pick({ id: true, model: true, cycleTime: true, forecastHour: true, validTime: true, gridKind: true, nx: true, ny: true, soundingCount: true });
+export type RunBrief = z.infer<typeof runBriefSchema>;
 
 /** GET /api/model-fields: the ready runs whose fields can be drawn, newest valid time first. */
-export const fieldRunListSchema = z.object({ runs: z.array(modelRunSummarySchema) });
+export const fieldRunListSchema = z.object({ runs: z.array(runBriefSchema) });
 export type FieldRunList = z.infer<typeof fieldRunListSchema>;
 
 export const fieldQuerySchema = z.object({
@@ -36,7 +27,7 @@ const bandSchema = z.object({ index: z.number(), from: z.number(), to: z.number(
 
 /** GET /api/model-runs/:runId/field?figure=… */
 export const modelFieldSchema = z.object({
-  run: modelRunSummarySchema,
+  run: runBriefSchema,
   figure: z.string(),
   label: z.string(),
   /** SI unit of the breaks ('' when dimensionless); the client shows display units where they apply. */
@@ -69,9 +60,9 @@ export const evidenceRunSelectionSchema = z.object({
   /** 'chosen': the author's pick; 'default': the newest ready runs valid in the outlook period. */
   mode: z.enum(['chosen', 'default']),
   /** The runs that feed the evidence now. */
-  runs: z.array(modelRunSummarySchema),
+  runs: z.array(runBriefSchema),
   /** Ready runs valid in the outlook period that may be picked. */
-  available: z.array(modelRunSummarySchema),
+  available: z.array(runBriefSchema),
 });
 export type EvidenceRunSelection = z.infer<typeof evidenceRunSelectionSchema>;
 

@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { calendarDateSchema, isoTimeSchema, versionSchema } from './primitives';
 import { countVertices, MAX_VERTICES_PER_OUTLOOK, tooManyVerticesMessage } from '../geometry/limits';
 import { hazardKinds, riskAreaInputSchema, riskAreaSchema, supportCheckSchema } from './risk-areas';
-import { evidenceSourceCountSchema, modelRunSummarySchema } from './model-fields';
+import { evidenceSourceCountSchema, runBriefSchema } from './model-fields';
 
 export * from './risk-areas';
 
@@ -155,7 +155,7 @@ export const outlookEvidenceSchema = z.object({
   soundingCount: z.number(),
   areas: z.array(areaEvidenceReportSchema),
   /** The model runs whose grid soundings fed this evidence. */
-  runs: z.array(modelRunSummarySchema).default([]),
+  runs: z.array(runBriefSchema).default([]),
   /** Per area id: soundings inside by run (runId null: observed or uploaded soundings). */
   sourcesByArea: z.record(z.string(), z.array(evidenceSourceCountSchema)).default({}),
 });

@@ -1,4 +1,4 @@
-import type { ModelRunSummary } from '../../../shared/contracts/model-fields';
+import type { RunBrief } from '../../../shared/contracts/model-fields';
 import type { FieldQuantity } from '../../../shared/model-fields/field-bands';
 import type { Units } from '../../../shared/contracts/users';
 import { formatNumber, heightUnitLabel, metresPerSecondToKnots, metresPerSecondToMph, metresToFeet, speedUnitLabel, temperatureUnitLabel } from '../../utils/units';
@@ -28,12 +28,12 @@ export function bandLabel(from: number, to: number | null, sense: 'above' | 'bel
 }
 
 /** How a run is named everywhere: model, cycle and forecast hour, e.g. "TESTNEST 2031-06-01 12Z +6 h". */
-export function runName(run: Pick<ModelRunSummary, 'model' | 'cycleTime' | 'forecastHour'>): string {
+export function runName(run: Pick<RunBrief, 'model' | 'cycleTime' | 'forecastHour'>): string {
   return `${run.model} ${run.cycleTime.slice(0, 10)} ${run.cycleTime.slice(11, 13)}Z +${run.forecastHour} h`;
 }
 
 /** Per area, where its soundings came from, named for the evidence panel: each run, then observed and uploaded ones. */
-export function evidenceSourceLabels(evidence: { runs: ModelRunSummary[]; sourcesByArea: Record<string, { runId: string | null; count: number }[]> } | undefined, areaId: string): { label: string; count: number }[] {
+export function evidenceSourceLabels(evidence: { runs: RunBrief[]; sourcesByArea: Record<string, { runId: string | null; count: number }[]> } | undefined, areaId: string): { label: string; count: number }[] {
   if (!evidence) return [];
   const runs = new Map(evidence.runs.map((r) => [r.id, r]));
   return (evidence.sourcesByArea[areaId] ?? []).map(({ runId, count }) => {
