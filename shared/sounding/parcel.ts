@@ -129,7 +129,7 @@ function ascend(profile: Profile, start: ParcelStart, options: ParcelOptions): P
   const temperatureLcl = lclTemperature(startTemperature, startDewpoint);
   const logPressureLcl = startLogPressure + Math.log(temperatureLcl / startTemperature) / K;
   const pressureLcl = Math.exp(logPressureLcl);
-  const path = table ? new PseudoAdiabatPath(table, pressureLcl, temperatureLcl) : undefined;
+  const path = table ? new PseudoAdiabatPath(table, pressureLcl, temperatureLcl, table.thetaW(temperatureLcl, logPressureLcl)) : undefined;
   let referencePressure = pressureLcl;
   let referenceTemperature = temperatureLcl;
 
@@ -489,7 +489,7 @@ function effectiveDecision(profile: Profile, levelIndex: number): boolean {
   const exner = levelExner(profile);
 
   const startPressure = p[levelIndex] as number;
-  const startLogPressure = Math.log(startPressure);
+  const startLogPressure = lnps[levelIndex] as number;
   const startTemperature = profile.temperatureK[levelIndex] as number;
   const w0 = Math.max(profile.mixingRatio[levelIndex] as number, MIN_MIXING_RATIO);
   const theta = startTemperature * Math.exp(K * (LOG_1000 - startLogPressure));
@@ -498,11 +498,13 @@ function effectiveDecision(profile: Profile, levelIndex: number): boolean {
   const temperatureLcl = lclTemperature(startTemperature, startDewpoint);
   const logPressureLcl = startLogPressure + Math.log(temperatureLcl / startTemperature) / K;
   const pressureLcl = Math.exp(logPressureLcl);
-  if (effectivePath && effectivePath.table === table) effectivePath.reset(pressureLcl, temperatureLcl);
-  else effectivePath = new PseudoAdiabatPath(table, pressureLcl, temperatureLcl);
+  const thetaW = table.thetaW(temperatureLcl, logPressureLcl);
+  if (effectivePath && effectivePath.table === table) effectivePath.reset(pressureLcl, temperatureLcl, thetaW);
+  else effectivePath = new PseudoAdiabatPath(table, pressureLcl, temperatureLcl, thetaW);
   const path = effectivePath;
 
-  const layer = layerIndexAtPressure(profile, startPressure);
+  // The layer holding the start (what layerIndexAtPressure finds for a level's own pressure).
+  const layer = levelIndex < count - 1 ? levelIndex : count - 2;
   if (layer < 0) return false;
   const lowerLog = lnps[layer] as number;
   const upperLog = lnps[layer + 1] as number;
