@@ -102,8 +102,40 @@ function readCell(cells: string[], column: Column | undefined): number | null | 
   if (!column) return null;
   const cell = cells[column.index] as string;
   if (isMissing(cell)) return null;
-  const value = Number(cell);
+  const value = decimalValue(cell);
   return Number.isFinite(value) ? column.convert(value) : undefined;
+}
+
+/** Exact powers of ten (every one up to 10²² is a double). */
+const POWERS_OF_TEN = Array.from({ length: 16 }, (_, k) => 10 ** k);
+
+/**
+ * Number(cell), with a fast path for plain decimals ("-12.345"): with at most 15 digits the
+ * digits form an exact integer m and 10^k is exact, so the one division m / 10^k is correctly
+ * rounded, the same double Number gives (Clinger 1990). Anything else goes to Number.
+ */
+export function decimalValue(cell: string): number {
+  const length = cell.length;
+  let i = cell.charCodeAt(0) === 45 ? 1 : 0; // "-"
+  const digitsStart = i;
+  let mantissa = 0;
+  let digits = 0;
+  let decimals = -1;
+  for (; i < length; i++) {
+    const c = cell.charCodeAt(i);
+    if (c >= 48 && c <= 57) {
+      mantissa = mantissa * 10 + (c - 48);
+      digits++;
+      if (decimals >= 0) decimals++;
+    } else if (c === 46 && decimals < 0 && i > digitsStart) {
+      decimals = 0;
+    } else {
+      return Number(cell);
+    }
+  }
+  if (digits === 0 || digits > 15 || decimals === 0) return Number(cell);
+  const value = decimals > 0 ? mantissa / (POWERS_OF_TEN[decimals] as number) : mantissa;
+  return digitsStart === 1 ? -value : value;
 }
 
 /**
@@ -161,8 +193,13 @@ export function parseSoundingCsv(text: string, fileName = 'sounding.csv'): Resul
       const text = lines[i] as string;
       const raw = text.trim();
       if (raw === '') continue;
-      if (raw.startsWith('#')) readMetadataLine(raw, i + 1);
-      else readRow(text.split(',').map((cell) => cell.trim()), i + 1);
+      if (raw.startsWith('#')) {
+        readMetadataLine(raw, i + 1);
+        continue;
+      }
+      const cells = text.split(',');
+      for (let c = 0; c < cells.length; c++) cells[c] = (cells[c] as string).trim();
+      readRow(cells, i + 1);
     }
   } else {
     // Line starts, so each row the tokenizer returns can be named by its 1-based line.
