@@ -10,6 +10,7 @@ import {
   levelTableCoordinates,
   levelThermodynamics,
   levelThetaW,
+  levelThetaWInTable,
   valueAtHeight,
   valueAtPressure,
   type LevelThermodynamics,
@@ -87,7 +88,7 @@ function scratch(length: number): Float64Array {
  * from the level's θ_w already known (outside the table: RK4 from its LCL down to it), K.
  */
 function levelWetBulb(profile: Profile, known: LevelThermodynamics, k: number): number {
-  const thetaW = known.thetaW[k] as number;
+  const thetaW = levelThetaWInTable(profile, known, k);
   const logPressure = profile.logPressure[k] as number;
   const inTable = Number.isNaN(thetaW) ? NaN : pseudoAdiabatTable().temperatureInTable(thetaW, logPressure);
   if (!Number.isNaN(inTable)) return inTable;

@@ -311,8 +311,9 @@ class BuoyancyAreas {
     const za = this.prevZ;
     const ba = this.prevB;
     if (!this.aboveLcl) {
-      this.negative += negativeArea(za, ba, z, buoyancy);
-      this.positive += positiveArea(za, ba, z, buoyancy);
+      const positivePart = positiveArea(za, ba, z, buoyancy);
+      this.negative += 0.5 * (ba + buoyancy) * (z - za) - positivePart;
+      this.positive += positivePart;
     } else if (ba > 0 && buoyancy > 0) {
       this.addPositive(za, ba, z, buoyancy);
     } else if (ba <= 0 && buoyancy <= 0) {
@@ -416,7 +417,7 @@ export function finiteOrNull(value: number): number | null {
   return Number.isFinite(value) ? value : null;
 }
 
-/** Area of the positive part of a linear segment of buoyancy, J kg⁻¹. */
+/** Area of the positive part of a linear segment of buoyancy, J kg⁻¹ (its negative part is the whole trapezoid minus this). */
 function positiveArea(za: number, ba: number, zb: number, bb: number): number {
   if (ba >= 0 && bb >= 0) return 0.5 * (ba + bb) * (zb - za);
   if (ba <= 0 && bb <= 0) return 0;
@@ -424,10 +425,6 @@ function positiveArea(za: number, ba: number, zb: number, bb: number): number {
   return ba > 0 ? 0.5 * ba * (zx - za) : 0.5 * bb * (zb - zx);
 }
 
-/** Area of the negative part of a linear segment of buoyancy (≤ 0), J kg⁻¹. */
-function negativeArea(za: number, ba: number, zb: number, bb: number): number {
-  return 0.5 * (ba + bb) * (zb - za) - positiveArea(za, ba, zb, bb);
-}
 
 
 /**
@@ -563,8 +560,9 @@ function effectiveDecision(profile: Profile, levelIndex: number): boolean {
       const za = prevZ;
       const ba = prevB;
       if (!aboveLcl) {
-        negative += negativeArea(za, ba, zPoint, b);
-        positive += positiveArea(za, ba, zPoint, b);
+        const positivePart = positiveArea(za, ba, zPoint, b);
+        negative += 0.5 * (ba + b) * (zPoint - za) - positivePart;
+        positive += positivePart;
       } else if (ba > 0 && b > 0) {
         positive += 0.5 * (ba + b) * (zPoint - za);
       } else if (ba <= 0 && b <= 0) {
