@@ -110,9 +110,9 @@ function windProfile(profile: Profile): WindProfile {
 }
 
 /**
- * Index range of the wind points strictly inside (bottom, top): [first, end). With sorted
- * heights it is the one run of such points; otherwise the whole profile (callers then skip
- * the points outside, as before).
+ * Index of the first wind point above `bottom` when the heights are sorted (the points inside
+ * a layer then follow in one run, and callers stop at its top); 0 otherwise (callers then
+ * skip every point outside the layer).
  */
 function pointsInside(winds: WindProfile, bottom: number): number {
   if (!winds.sorted) return 0;
