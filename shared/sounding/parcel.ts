@@ -465,6 +465,12 @@ export function meetsEffectiveInflowCriteria(profile: Profile, levelIndex: numbe
   return effectiveDecision(profile, levelIndex);
 }
 
+/**
+ * Work of the effective-layer checks since the process started: parcels lifted and levels
+ * they passed (lets tests check that the search stays linear in the number of levels).
+ */
+export const effectiveWork = { parcels: 0, levels: 0 };
+
 /** The path object every effective-layer check reuses (the engine is synchronous). */
 let effectivePath: PseudoAdiabatPath | undefined;
 
@@ -476,6 +482,7 @@ let effectivePath: PseudoAdiabatPath | undefined;
  * against the full ascent's decision.
  */
 function effectiveDecision(profile: Profile, levelIndex: number): boolean {
+  effectiveWork.parcels++;
   const table = pseudoAdiabatTable();
   const p = profile.pressureHpa;
   const lnps = profile.logPressure;
@@ -532,6 +539,7 @@ function effectiveDecision(profile: Profile, levelIndex: number): boolean {
     const lnpk = lnps[k] as number;
     const zk = z[k] as number;
     const envVirtual = tve[k] as number;
+    effectiveWork.levels++;
     for (let point = aboveLcl ? 1 : 0; point < 2; point++) {
       let zPoint: number;
       let logPoint: number;
