@@ -10,6 +10,7 @@ import {
   levelTableCoordinates,
   levelThermodynamics,
   levelThetaW,
+  levelThetaWInTable,
   valueAtHeight,
   valueAtPressure,
   type LevelThermodynamics,
@@ -87,7 +88,7 @@ function scratch(length: number): Float64Array {
  * from the level's θ_w already known (outside the table: RK4 from its LCL down to it), K.
  */
 function levelWetBulb(profile: Profile, known: LevelThermodynamics, k: number): number {
-  const thetaW = known.thetaW[k] as number;
+  const thetaW = levelThetaWInTable(profile, known, k);
   const logPressure = profile.logPressure[k] as number;
   const inTable = Number.isNaN(thetaW) ? NaN : pseudoAdiabatTable().temperatureInTable(thetaW, logPressure);
   if (!Number.isNaN(inTable)) return inTable;
@@ -148,9 +149,17 @@ export function downdraftCape(profile: Profile): { dcape: number; pressure: numb
   }
   const surface = profile.pressureHpa[0] as number;
   const half = DOWNDRAFT_LAYER_DEPTH_HPA / 2;
-  const integralAt = (pressure: number): number => {
-    const i = layerIndexAtPressure(profile, pressure);
-    if (i < 0 || i >= top) return NaN;
+  // The layer holding a pressure, as layerIndexAtPressure finds it, by a cursor: the search
+  // asks for ever lower pressures, so each cursor only moves up.
+  const n = profile.count;
+  const lowestPressure = profile.pressureHpa[n - 1] as number;
+  const cursors = [0, 0];
+  const integralAt = (pressure: number, cursor: 0 | 1): number => {
+    if (!(pressure <= surface && pressure >= lowestPressure)) return NaN;
+    let i = cursors[cursor] as number;
+    while (i < top && i + 1 <= n - 2 && (profile.pressureHpa[i + 1] as number) >= pressure) i++;
+    cursors[cursor] = i;
+    if (i >= top) return NaN;
     const p0 = profile.pressureHpa[i] as number;
     const p1 = profile.pressureHpa[i + 1] as number;
     const fraction = (p0 - pressure) / (p0 - p1);
@@ -164,7 +173,7 @@ export function downdraftCape(profile: Profile): { dcape: number; pressure: numb
     const centre = profile.pressureHpa[k] as number;
     if (centre < surface - DOWNDRAFT_SEARCH_DEPTH_HPA) break;
     const bottom = Math.min(surface, centre + half);
-    const meanE = (integralAt(bottom - DOWNDRAFT_LAYER_DEPTH_HPA) - integralAt(bottom)) / DOWNDRAFT_LAYER_DEPTH_HPA;
+    const meanE = (integralAt(bottom - DOWNDRAFT_LAYER_DEPTH_HPA, 1) - integralAt(bottom, 0)) / DOWNDRAFT_LAYER_DEPTH_HPA;
     if (!Number.isFinite(meanE)) break;
     if (meanE < lowest) {
       lowest = meanE;

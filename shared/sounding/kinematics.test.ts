@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { analyzeKinematics } from './kinematics';
-import { liftParcelOnProfile, levelStart, mostUnstableLevelIndex } from './parcel';
+import { analyzeKinematics, effectiveInflowLayer } from './kinematics';
+import { effectiveWork, liftParcelOnProfile, levelStart, mostUnstableLevelIndex } from './parcel';
 import { buildProfile } from './profile';
+import { buildSounding } from './testing/random-sounding';
 import { weismanKlempSounding } from './testing/weisman-klemp';
 import type { SoundingLevel } from './types';
 
@@ -71,4 +72,28 @@ describe('effective inflow layer (Thompson2007)', () => {
     expect(k.effectiveInflowLayer?.topHeight).toBeGreaterThan(0);
     expect(k.effectiveSrh).toBeGreaterThan(0);
   });
+
+  it('lifts a bounded number of parcels however dense the sounding (work linear in levels)', () => {
+    // The same warm-season profile at 250, 1000 and 4000 levels: a moist, conditionally
+    // unstable lower troposphere, so the layer is several candidates deep.
+    for (const count of [250, 1000, 4000]) {
+      const levels = buildSounding({
+        surfacePressureHpa: 1000,
+        surfaceTemperatureC: 28,
+        surfaceDewpointDepressionK: 3,
+        lapseRatesKPerKm: Array.from({ length: count - 1 }, (_, i) => (i < 0.8 * count ? 7.5 : -1)),
+        dewpointDepressionsK: Array.from({ length: count - 1 }, (_, i) => Math.min(30, 3 + (i * 40) / count)),
+        windSpeedsMs: Array.from({ length: count }, () => 10),
+      });
+      const profile = buildProfile(levels);
+      const before = { ...effectiveWork };
+      const layer = effectiveInflowLayer(profile);
+      expect(layer?.bottomHeight).toBe(0);
+      // A parcel from every level of the lowest 300 hPa would be hundreds of parcels here.
+      expect(effectiveWork.parcels - before.parcels).toBeLessThanOrEqual(130);
+      // Each parcel stops at its decision: the levels passed stay a small multiple of the count.
+      expect(effectiveWork.levels - before.levels).toBeLessThanOrEqual(15 * count);
+    }
+  });
 });
+

@@ -52,6 +52,8 @@ export interface KinematicsAnalysis {
 /** Winds of the levels that report one, by height above ground (the first `n` entries). */
 interface WindProfile {
   n: number;
+  /** Heights strictly increasing (then the points inside a layer are one run of indices). */
+  sorted: boolean;
   height: Float64Array;
   u: Float64Array;
   v: Float64Array;
@@ -82,7 +84,7 @@ function windProfile(profile: Profile): WindProfile {
   const n = reported + (substitute ? 1 : 0);
   if (windScratch.length < 4 * n) windScratch = new Float64Array(Math.max(4 * n, 2 * windScratch.length));
   const buffer = windScratch;
-  const winds: WindProfile = { n, height: buffer.subarray(0, n), u: buffer.subarray(n, 2 * n), v: buffer.subarray(2 * n, 3 * n), density: buffer.subarray(3 * n, 4 * n) };
+  const winds: WindProfile = { n, sorted: false, height: buffer.subarray(0, n), u: buffer.subarray(n, 2 * n), v: buffer.subarray(2 * n, 3 * n), density: buffer.subarray(3 * n, 4 * n) };
   let i = 0;
   if (substitute) {
     winds.height[0] = 0;
@@ -101,7 +103,28 @@ function windProfile(profile: Profile): WindProfile {
     winds.density[i] = ((profile.pressureHpa[k] as number) * 100) / (RD * (profile.virtualTemperatureK[k] as number));
     i++;
   }
+  let sorted = true;
+  for (let j = 1; j < n && sorted; j++) sorted = (winds.height[j] as number) > (winds.height[j - 1] as number);
+  winds.sorted = sorted;
   return winds;
+}
+
+/**
+ * Index of the first wind point above `bottom` when the heights are sorted (the points inside
+ * a layer then follow in one run, and callers stop at its top); 0 otherwise (callers then
+ * skip every point outside the layer).
+ */
+function pointsInside(winds: WindProfile, bottom: number): number {
+  if (!winds.sorted) return 0;
+  const h = winds.height;
+  let low = 0;
+  let high = winds.n;
+  while (low < high) {
+    const middle = (low + high) >> 1;
+    if ((h[middle] as number) > bottom) high = middle;
+    else low = middle + 1;
+  }
+  return low;
 }
 
 /** Interpolate a wind-profile array at a height (linear); NaN outside the reported winds. */
@@ -150,14 +173,18 @@ function meanWind(winds: WindProfile, bottom: number, top: number, densityWeight
   let aW = densityWeighted ? at(winds, winds.density, bottom) : 1;
   // The points inside the layer, then its top (i = n); written without a closure so the
   // running sums stay unboxed.
-  for (let i = 0; i <= winds.n; i++) {
+  for (let i = pointsInside(winds, bottom); i <= winds.n; i++) {
     let height: number;
     let u: number;
     let v: number;
     let w: number;
     if (i < winds.n) {
       height = winds.height[i] as number;
-      if (!(height > bottom && height < top)) continue;
+      if (!(height > bottom && height < top)) {
+        // Sorted: past the top, only the top point is left.
+        if (winds.sorted && height >= top) i = winds.n - 1;
+        continue;
+      }
       u = winds.u[i] as number;
       v = winds.v[i] as number;
       w = densityWeighted ? (winds.density[i] as number) : 1;
@@ -219,9 +246,12 @@ function stormRelativeHelicity(winds: WindProfile, bottom: number, top: number, 
   let sum = 0;
   let aU = bottomU;
   let aV = at(winds, winds.v, bottom);
-  for (let i = 0; i < winds.n; i++) {
+  for (let i = pointsInside(winds, bottom); i < winds.n; i++) {
     const h = winds.height[i] as number;
-    if (!(h > bottom && h < top)) continue;
+    if (!(h > bottom && h < top)) {
+      if (winds.sorted && h >= top) break;
+      continue;
+    }
     const bU = winds.u[i] as number;
     const bV = winds.v[i] as number;
     sum += (bU - storm.u) * (aV - storm.v) - (aU - storm.u) * (bV - storm.v);

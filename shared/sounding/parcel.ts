@@ -129,7 +129,7 @@ function ascend(profile: Profile, start: ParcelStart, options: ParcelOptions): P
   const temperatureLcl = lclTemperature(startTemperature, startDewpoint);
   const logPressureLcl = startLogPressure + Math.log(temperatureLcl / startTemperature) / K;
   const pressureLcl = Math.exp(logPressureLcl);
-  const path = table ? new PseudoAdiabatPath(table, pressureLcl, temperatureLcl) : undefined;
+  const path = table ? new PseudoAdiabatPath(table, pressureLcl, temperatureLcl, table.thetaW(temperatureLcl, logPressureLcl)) : undefined;
   let referencePressure = pressureLcl;
   let referenceTemperature = temperatureLcl;
 
@@ -311,8 +311,9 @@ class BuoyancyAreas {
     const za = this.prevZ;
     const ba = this.prevB;
     if (!this.aboveLcl) {
-      this.negative += negativeArea(za, ba, z, buoyancy);
-      this.positive += positiveArea(za, ba, z, buoyancy);
+      const positivePart = positiveArea(za, ba, z, buoyancy);
+      this.negative += 0.5 * (ba + buoyancy) * (z - za) - positivePart;
+      this.positive += positivePart;
     } else if (ba > 0 && buoyancy > 0) {
       this.addPositive(za, ba, z, buoyancy);
     } else if (ba <= 0 && buoyancy <= 0) {
@@ -416,7 +417,7 @@ export function finiteOrNull(value: number): number | null {
   return Number.isFinite(value) ? value : null;
 }
 
-/** Area of the positive part of a linear segment of buoyancy, J kg⁻¹. */
+/** Area of the positive part of a linear segment of buoyancy, J kg⁻¹ (its negative part is the whole trapezoid minus this). */
 function positiveArea(za: number, ba: number, zb: number, bb: number): number {
   if (ba >= 0 && bb >= 0) return 0.5 * (ba + bb) * (zb - za);
   if (ba <= 0 && bb <= 0) return 0;
@@ -424,10 +425,6 @@ function positiveArea(za: number, ba: number, zb: number, bb: number): number {
   return ba > 0 ? 0.5 * ba * (zx - za) : 0.5 * bb * (zb - zx);
 }
 
-/** Area of the negative part of a linear segment of buoyancy (≤ 0), J kg⁻¹. */
-function negativeArea(za: number, ba: number, zb: number, bb: number): number {
-  return 0.5 * (ba + bb) * (zb - za) - positiveArea(za, ba, zb, bb);
-}
 
 
 /**
@@ -468,6 +465,12 @@ export function meetsEffectiveInflowCriteria(profile: Profile, levelIndex: numbe
   return effectiveDecision(profile, levelIndex);
 }
 
+/**
+ * Work of the effective-layer checks since the process started: parcels lifted and levels
+ * they passed (lets tests check that the search stays linear in the number of levels).
+ */
+export const effectiveWork = { parcels: 0, levels: 0 };
+
 /** The path object every effective-layer check reuses (the engine is synchronous). */
 let effectivePath: PseudoAdiabatPath | undefined;
 
@@ -479,6 +482,7 @@ let effectivePath: PseudoAdiabatPath | undefined;
  * against the full ascent's decision.
  */
 function effectiveDecision(profile: Profile, levelIndex: number): boolean {
+  effectiveWork.parcels++;
   const table = pseudoAdiabatTable();
   const p = profile.pressureHpa;
   const lnps = profile.logPressure;
@@ -489,7 +493,7 @@ function effectiveDecision(profile: Profile, levelIndex: number): boolean {
   const exner = levelExner(profile);
 
   const startPressure = p[levelIndex] as number;
-  const startLogPressure = Math.log(startPressure);
+  const startLogPressure = lnps[levelIndex] as number;
   const startTemperature = profile.temperatureK[levelIndex] as number;
   const w0 = Math.max(profile.mixingRatio[levelIndex] as number, MIN_MIXING_RATIO);
   const theta = startTemperature * Math.exp(K * (LOG_1000 - startLogPressure));
@@ -498,11 +502,13 @@ function effectiveDecision(profile: Profile, levelIndex: number): boolean {
   const temperatureLcl = lclTemperature(startTemperature, startDewpoint);
   const logPressureLcl = startLogPressure + Math.log(temperatureLcl / startTemperature) / K;
   const pressureLcl = Math.exp(logPressureLcl);
-  if (effectivePath && effectivePath.table === table) effectivePath.reset(pressureLcl, temperatureLcl);
-  else effectivePath = new PseudoAdiabatPath(table, pressureLcl, temperatureLcl);
+  const thetaW = table.thetaW(temperatureLcl, logPressureLcl);
+  if (effectivePath && effectivePath.table === table) effectivePath.reset(pressureLcl, temperatureLcl, thetaW);
+  else effectivePath = new PseudoAdiabatPath(table, pressureLcl, temperatureLcl, thetaW);
   const path = effectivePath;
 
-  const layer = layerIndexAtPressure(profile, startPressure);
+  // The layer holding the start (what layerIndexAtPressure finds for a level's own pressure).
+  const layer = levelIndex < count - 1 ? levelIndex : count - 2;
   if (layer < 0) return false;
   const lowerLog = lnps[layer] as number;
   const upperLog = lnps[layer + 1] as number;
@@ -533,6 +539,7 @@ function effectiveDecision(profile: Profile, levelIndex: number): boolean {
     const lnpk = lnps[k] as number;
     const zk = z[k] as number;
     const envVirtual = tve[k] as number;
+    effectiveWork.levels++;
     for (let point = aboveLcl ? 1 : 0; point < 2; point++) {
       let zPoint: number;
       let logPoint: number;
@@ -561,8 +568,9 @@ function effectiveDecision(profile: Profile, levelIndex: number): boolean {
       const za = prevZ;
       const ba = prevB;
       if (!aboveLcl) {
-        negative += negativeArea(za, ba, zPoint, b);
-        positive += positiveArea(za, ba, zPoint, b);
+        const positivePart = positiveArea(za, ba, zPoint, b);
+        negative += 0.5 * (ba + b) * (zPoint - za) - positivePart;
+        positive += positivePart;
       } else if (ba > 0 && b > 0) {
         positive += 0.5 * (ba + b) * (zPoint - za);
       } else if (ba <= 0 && b <= 0) {

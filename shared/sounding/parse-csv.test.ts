@@ -1,6 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { parseSoundingCsv } from './parse-csv';
+import fc from 'fast-check';
+import { decimalValue, parseSoundingCsv } from './parse-csv';
 import { BASE_HEADER, BASE_ROWS, buildCsv, rowLine } from './testing/csv';
 import type { ParsedSounding, SoundingIssue } from './types';
 
@@ -377,6 +378,20 @@ describe('parseSoundingCsv: one test per class of bad input', () => {
     expect(sounding.levels).toHaveLength(BASE_ROWS.length);
     const broken = buildCsv({ rows: BASE_ROWS.map((row, i) => (i === 3 ? row.replace('850', '"850') : row)) });
     expect(issues(broken).some((issue) => issue.line === rowLine(3))).toBe(true);
+  });
+
+  it('reads every cell as Number() does (the fast decimal path gives the same double)', () => {
+    fc.assert(
+      fc.property(fc.double({ noNaN: true, min: -1e6, max: 1e6 }), fc.integer({ min: 0, max: 12 }), (value, digits) => {
+        for (const text of [value.toFixed(digits), String(value), value.toFixed(digits).replace(/^(-?)/, '$100')]) {
+          expect(Object.is(decimalValue(text), Number(text))).toBe(true);
+        }
+      }),
+      { numRuns: 2000 },
+    );
+    for (const text of ['', '-', '.', '1.', '.5', '-.5', '+3', '1e3', '1.2.3', '12a', '-0', '0.000000000000001', '123456789012345.6', 'Infinity']) {
+      expect(Object.is(decimalValue(text), Number(text))).toBe(true);
+    }
   });
 
   it('LF, CRLF and lone-CR files, with or without quotes, give the same levels and line numbers', () => {

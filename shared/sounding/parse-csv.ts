@@ -102,8 +102,47 @@ function readCell(cells: string[], column: Column | undefined): number | null | 
   if (!column) return null;
   const cell = cells[column.index] as string;
   if (isMissing(cell)) return null;
-  const value = Number(cell);
+  const value = decimalValue(cell);
   return Number.isFinite(value) ? column.convert(value) : undefined;
+}
+
+/** A line's cells (comma-separated, each trimmed). */
+function splitCells(text: string): string[] {
+  const cells = text.split(',');
+  for (let c = 0; c < cells.length; c++) cells[c] = (cells[c] as string).trim();
+  return cells;
+}
+
+/** Exact powers of ten (every one up to 10²² is a double). */
+const POWERS_OF_TEN = Array.from({ length: 16 }, (_, k) => 10 ** k);
+
+/**
+ * Number(cell), with a fast path for plain decimals ("-12.345"): with at most 15 digits the
+ * digits form an exact integer m and 10^k is exact, so the one division m / 10^k is correctly
+ * rounded, the same double Number gives (Clinger 1990). Anything else goes to Number.
+ */
+export function decimalValue(cell: string): number {
+  const length = cell.length;
+  let i = cell.charCodeAt(0) === 45 ? 1 : 0; // "-"
+  const digitsStart = i;
+  let mantissa = 0;
+  let digits = 0;
+  let decimals = -1;
+  for (; i < length; i++) {
+    const c = cell.charCodeAt(i);
+    if (c >= 48 && c <= 57) {
+      mantissa = mantissa * 10 + (c - 48);
+      digits++;
+      if (decimals >= 0) decimals++;
+    } else if (c === 46 && decimals < 0 && i > digitsStart) {
+      decimals = 0;
+    } else {
+      return Number(cell);
+    }
+  }
+  if (digits === 0 || digits > 15 || decimals === 0) return Number(cell);
+  const value = decimals > 0 ? mantissa / (POWERS_OF_TEN[decimals] as number) : mantissa;
+  return digitsStart === 1 ? -value : value;
 }
 
 /**
@@ -130,7 +169,10 @@ export function parseSoundingCsv(text: string, fileName = 'sounding.csv'): Resul
   const metadataKeys: Partial<Record<keyof RawMetadata, string>> = {};
   let headerLine = -1;
   let headerCells: string[] = [];
-  const rows: { line: number; cells: string[] }[] = [];
+  // Rows after the header: their line numbers, and their cells (or, from the plain split, the
+  // line's text, split only when read, so no cell array outlives its row).
+  const rowLineNumbers: number[] = [];
+  const rowContents: (string | string[])[] = [];
 
   const readMetadataLine = (raw: string, line: number): void => {
     const match = /^#\s*([A-Za-z_]+)\s*:\s*(.*)$/.exec(raw);
@@ -143,12 +185,13 @@ export function parseSoundingCsv(text: string, fileName = 'sounding.csv'): Resul
     metadataLines[known.field] = line;
     metadataKeys[known.field] = key;
   };
-  const readRow = (cells: string[], line: number): void => {
+  const readRow = (cells: string | string[], line: number): void => {
     if (headerLine < 0) {
       headerLine = line;
-      headerCells = cells;
+      headerCells = typeof cells === 'string' ? splitCells(cells) : cells;
     } else {
-      rows.push({ line, cells });
+      rowLineNumbers.push(line);
+      rowContents.push(cells);
     }
   };
 
@@ -161,8 +204,11 @@ export function parseSoundingCsv(text: string, fileName = 'sounding.csv'): Resul
       const text = lines[i] as string;
       const raw = text.trim();
       if (raw === '') continue;
-      if (raw.startsWith('#')) readMetadataLine(raw, i + 1);
-      else readRow(text.split(',').map((cell) => cell.trim()), i + 1);
+      if (raw.startsWith('#')) {
+        readMetadataLine(raw, i + 1);
+        continue;
+      }
+      readRow(text, i + 1);
     }
   } else {
     // Line starts, so each row the tokenizer returns can be named by its 1-based line.
@@ -256,27 +302,29 @@ export function parseSoundingCsv(text: string, fileName = 'sounding.csv'): Resul
 
   const rawLevels: RawLevel[] = [];
   const rowLines: number[] = [];
-  for (const row of rows) {
-    if (row.cells.length !== headerCells.length) {
-      issues.error('FIELD_COUNT', `${fileName}, line ${row.line}: ${row.cells.length} cells, but the header has ${headerCells.length}.`, { line: row.line });
+  for (let r = 0; r < rowContents.length; r++) {
+    const content = rowContents[r] as string | string[];
+    const cells = typeof content === 'string' ? splitCells(content) : content;
+    const line = rowLineNumbers[r] as number;
+    if (cells.length !== headerCells.length) {
+      issues.error('FIELD_COUNT', `${fileName}, line ${line}: ${cells.length} cells, but the header has ${headerCells.length}.`, { line: line });
       continue;
     }
-    const cells = row.cells;
     const before = issues.issues.length;
-    const pressureHpa = readReported(cells, columns, 'pressure', row.line, fileName, issues);
-    const heightM = readReported(cells, columns, 'height', row.line, fileName, issues);
-    const temperatureC = readReported(cells, columns, 'temperature', row.line, fileName, issues);
-    const dewpointC = readReported(cells, columns, 'dewpoint', row.line, fileName, issues);
-    const relativeHumidityPercent = readReported(cells, columns, 'relativeHumidity', row.line, fileName, issues);
+    const pressureHpa = readReported(cells, columns, 'pressure', line, fileName, issues);
+    const heightM = readReported(cells, columns, 'height', line, fileName, issues);
+    const temperatureC = readReported(cells, columns, 'temperature', line, fileName, issues);
+    const dewpointC = readReported(cells, columns, 'dewpoint', line, fileName, issues);
+    const relativeHumidityPercent = readReported(cells, columns, 'relativeHumidity', line, fileName, issues);
     let uMs: number | null = null;
     let vMs: number | null = null;
     if (hasDirectionSpeed) {
-      const direction = readReported(cells, columns, 'windDirection', row.line, fileName, issues);
-      const speed = readReported(cells, columns, 'windSpeed', row.line, fileName, issues);
+      const direction = readReported(cells, columns, 'windDirection', line, fileName, issues);
+      const speed = readReported(cells, columns, 'windSpeed', line, fileName, issues);
       if (direction !== null && speed !== null) {
         if (direction < 0 || direction > 360 || speed < 0 || speed > MAX_WIND_SPEED_MS) {
           const column = direction < 0 || direction > 360 ? columns.windDirection : columns.windSpeed;
-          issues.error('WIND_OUT_OF_RANGE', `${fileName}, line ${row.line}, column ${column?.header}: wind direction must be 0–360° and speed between 0 and ${MAX_WIND_SPEED_MS} m/s (${Math.round(MAX_WIND_SPEED_MS / 0.514444)} kt).`, { line: row.line, column: column?.header });
+          issues.error('WIND_OUT_OF_RANGE', `${fileName}, line ${line}, column ${column?.header}: wind direction must be 0–360° and speed between 0 and ${MAX_WIND_SPEED_MS} m/s (${Math.round(MAX_WIND_SPEED_MS / 0.514444)} kt).`, { line: line, column: column?.header });
         } else {
           const components = windComponents(direction, speed);
           uMs = components.u;
@@ -284,25 +332,27 @@ export function parseSoundingCsv(text: string, fileName = 'sounding.csv'): Resul
         }
       } else if (direction !== null || speed !== null) {
         const column = direction === null ? columns.windDirection : columns.windSpeed;
-        issues.warning('WIND_INCOMPLETE', `${fileName}, line ${row.line}, column ${column?.header}: wind ${direction === null ? 'direction' : 'speed'} is missing; the wind of this level is treated as missing.`, { line: row.line, column: column?.header });
+        issues.warning('WIND_INCOMPLETE', `${fileName}, line ${line}, column ${column?.header}: wind ${direction === null ? 'direction' : 'speed'} is missing; the wind of this level is treated as missing.`, { line: line, column: column?.header });
       }
     } else if (columns.u && columns.v) {
-      uMs = readReported(cells, columns, 'u', row.line, fileName, issues);
-      vMs = readReported(cells, columns, 'v', row.line, fileName, issues);
-      for (const [value, column] of [[uMs, columns.u], [vMs, columns.v]] as const) {
+      uMs = readReported(cells, columns, 'u', line, fileName, issues);
+      vMs = readReported(cells, columns, 'v', line, fileName, issues);
+      const componentTooFast = (value: number | null, column: Column): void => {
         if (value !== null && Math.abs(value) > MAX_WIND_SPEED_MS) {
-          issues.error('WIND_OUT_OF_RANGE', `${fileName}, line ${row.line}, column ${column.header}: a wind component must be between −${MAX_WIND_SPEED_MS} and ${MAX_WIND_SPEED_MS} m/s.`, { line: row.line, column: column.header });
+          issues.error('WIND_OUT_OF_RANGE', `${fileName}, line ${line}, column ${column.header}: a wind component must be between −${MAX_WIND_SPEED_MS} and ${MAX_WIND_SPEED_MS} m/s.`, { line: line, column: column.header });
         }
-      }
+      };
+      componentTooFast(uMs, columns.u);
+      componentTooFast(vMs, columns.v);
       if ((uMs === null) !== (vMs === null)) {
-        issues.warning('WIND_INCOMPLETE', `${fileName}, line ${row.line}: only one wind component is given; the wind of this level is treated as missing.`, { line: row.line });
+        issues.warning('WIND_INCOMPLETE', `${fileName}, line ${line}: only one wind component is given; the wind of this level is treated as missing.`, { line: line });
         uMs = null;
         vMs = null;
       }
     }
     if (issues.issues.length > before && issues.hasErrors) continue;
     rawLevels.push({ pressureHpa, heightM, temperatureC, dewpointC, relativeHumidityPercent, uMs, vMs });
-    rowLines.push(row.line);
+    rowLines.push(line);
   }
   if (issues.hasErrors) return err(issues.issues);
 

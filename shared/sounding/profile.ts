@@ -107,8 +107,7 @@ export interface LevelThermodynamics {
   thetaE: Float64Array;
   /**
    * Wet-bulb potential temperature, K: the label of the pseudo-adiabat through the level's
-   * LCL; NaN where that point lies outside the pseudo-adiabat table (see {@link levelThetaW},
-   * which integrates those only when asked).
+   * LCL; NaN until asked for with {@link levelThetaW} or {@link levelThetaWInTable}.
    */
   thetaW: Float64Array;
 }
@@ -135,7 +134,6 @@ export function levelThermodynamicsTop(profile: Profile): number {
 export function levelThermodynamics(profile: Profile): LevelThermodynamics {
   if (profile.thermodynamics) return profile.thermodynamics;
   const count = levelThermodynamicsTop(profile) + 1;
-  const table = pseudoAdiabatTable();
   const n = profile.count;
   const lclTemperatureK = profile.spare.subarray(3 * n, 3 * n + count);
   const thetaE = profile.spare.subarray(4 * n, 4 * n + count);
@@ -146,9 +144,9 @@ export function levelThermodynamics(profile: Profile): LevelThermodynamics {
     const lclT = lclTemperature(temperature, profile.dewpointK[k] as number);
     lclTemperatureK[k] = lclT;
     thetaE[k] = equivalentPotentialTemperatureFromMixingRatio(pk, temperature, profile.mixingRatio[k] as number, lclT);
-    // θ_w is the label of the pseudo-adiabat through the level's LCL (Bolton1980 eq. 15).
-    thetaW[k] = table.thetaWInTable(lclT, levelLclLogPressure(profile, k, lclT));
   }
+  // θ_w only on demand (levelThetaW): few levels need it.
+  thetaW.fill(NaN);
   profile.thermodynamics = { count, lclTemperatureK, thetaE, thetaW };
   return profile.thermodynamics;
 }
@@ -163,10 +161,25 @@ export function levelLclLogPressure(profile: Profile, k: number, lclTemperatureK
  * level's LCL lies outside it, by RK4 from the LCL to 1000 hPa, once, kept for later calls.
  */
 export function levelThetaW(profile: Profile, known: LevelThermodynamics, k: number): number {
-  let value = known.thetaW[k] as number;
+  let value = levelThetaWInTable(profile, known, k);
   if (Number.isNaN(value)) {
     const lclT = known.lclTemperatureK[k] as number;
     value = moistAdiabatTemperature(Math.exp(levelLclLogPressure(profile, k, lclT)), lclT, 1000, OUTSIDE_TABLE_STEP_HPA);
+    known.thetaW[k] = value;
+  }
+  return value;
+}
+
+/**
+ * θ_w of level k (k below {@link LevelThermodynamics.count}) from the table, kept for later
+ * calls, K; NaN when the level's LCL lies outside the table.
+ */
+export function levelThetaWInTable(profile: Profile, known: LevelThermodynamics, k: number): number {
+  let value = known.thetaW[k] as number;
+  if (Number.isNaN(value)) {
+    // θ_w is the label of the pseudo-adiabat through the level's LCL (Bolton1980 eq. 15).
+    const lclT = known.lclTemperatureK[k] as number;
+    value = pseudoAdiabatTable().thetaWInTable(lclT, levelLclLogPressure(profile, k, lclT));
     known.thetaW[k] = value;
   }
   return value;
