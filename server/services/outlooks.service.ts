@@ -21,7 +21,8 @@ import type { EvidenceCandidates } from '../../shared/contracts/evidence-candida
 import { MAX_LIVE_EVIDENCE_CANDIDATES, toEvidenceCandidate } from '../../shared/evidence/evidence-candidates';
 import { keyFigureKeys } from '../../shared/sounding/key-figures';
 import { runGeometryTask } from '../workers/geometry-pool';
-import { gridEvidenceOf } from './grid-evidence.service';
+import { evidenceRunsOf, gridEvidenceOf, runFigures } from './grid-evidence.service';
+import { materializedSoundings } from '../workers/grid-evidence-report';
 
 type OutlookRow = typeof outlooks.$inferSelect;
 type AreaRow = typeof riskAreas.$inferSelect;
@@ -371,8 +372,13 @@ export async function getOutlookEvidence(db: Database, outlookId: string, source
 export async function getEvidenceCandidates(db: Database, outlookId: string): Promise<Result<EvidenceCandidates, AppError>> {
   const [row] = await db.select({ validFrom: outlooks.validFrom, validUntil: outlooks.validUntil }).from(outlooks).where(eq(outlooks.id, outlookId));
   if (!row) return err(notFound());
-  const candidates = (await evidenceSoundings(db, row.validFrom, row.validUntil)).filter((s) => !s.modified);
-  const truncated = candidates.length > MAX_LIVE_EVIDENCE_CANDIDATES;
+  const uploaded = (await evidenceSoundings(db, row.validFrom, row.validUntil)).filter((s) => !s.modified);
+  // The grid soundings of the runs feeding the outlook count in the preview as in the report.
+  const { runs } = await evidenceRunsOf(db, { id: outlookId, validFrom: row.validFrom.toISOString(), validUntil: row.validUntil.toISOString() });
+  const figures = await runFigures(db, runs);
+  const gridCount = figures.reduce((sum, f) => sum + f.count, 0);
+  const truncated = uploaded.length + gridCount > MAX_LIVE_EVIDENCE_CANDIDATES;
+  const candidates = truncated ? [] : [...uploaded, ...figures.flatMap((f) => materializedSoundings(f))];
   return ok({
     validFrom: row.validFrom.toISOString(),
     validUntil: row.validUntil.toISOString(),

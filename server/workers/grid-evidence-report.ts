@@ -99,8 +99,8 @@ export function gridCandidates(runs: readonly RunFigures[], geometries: readonly
 export const MAX_MATERIALIZED_RUNS = 4;
 const materialized = new Map<string, EvidenceSounding[]>();
 
-/** Every grid point of a run as an evidence sounding, made once per run and worker. */
-function materializedSoundings(figures: RunFigures): EvidenceSounding[] {
+/** Every grid point of a run as an evidence sounding, made once per run and worker (or process). */
+export function materializedSoundings(figures: RunFigures): EvidenceSounding[] {
   let soundings = materialized.get(figures.run.id);
   if (soundings && soundings.length === figures.count) {
     materialized.delete(figures.run.id); // re-insert: most recently used last

@@ -3,6 +3,9 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type TestAgent from 'supertest/lib/agent';
+import { evidenceCandidatesSchema } from '../../shared/contracts/evidence-candidates';
+import { areaReport as evidenceAreaReport, evidencePool } from '../../shared/evidence/area-report';
+import { evidenceSoundingsFromCandidates } from '../../shared/evidence/evidence-candidates';
 import { intakeFileListSchema, type IntakeFile } from '../../shared/contracts/intake';
 import { modelFieldSchema } from '../../shared/contracts/model-fields';
 import { modelRunSummarySchema } from '../../shared/contracts/model-runs';
@@ -96,5 +99,18 @@ describe('a GRIB2 run dropped into the intake folder', () => {
     expect(areaReport?.evidence.count).toBe(points);
     expect(report.sourcesByArea[areaReport?.areaId ?? '']).toEqual([{ runId, count: points }]);
     expect(areaReport?.support.reasons.join(' ')).toMatch(/of \d+ soundings/);
+
+    // The workspace's live preview gets the same grid soundings and, with the shared code, the same answer.
+    const candidates = await forecaster.get(`/api/outlooks/${draft.id}/evidence-candidates`);
+    expect(candidates.status).toBe(200);
+    const parsedCandidates = evidenceCandidatesSchema.parse(candidates.body);
+    expect(parsedCandidates.soundings.filter((c) => c.runId === runId)).toHaveLength(points);
+    const office = await forecaster.get('/api/office');
+    const pool = evidencePool(evidenceSoundingsFromCandidates(parsedCandidates), { validFrom: draft.validFrom, validUntil: draft.validUntil });
+    const savedArea = (saved.body as { areas: { id: string; levelKey: string; hazards: []; geometry: never }[] }).areas[0];
+    if (!savedArea) throw new Error('the saved outlook has no area');
+    const live = evidenceAreaReport(savedArea, pool, office.body.riskLadder, office.body.guidance);
+    expect(live.evidence.count).toBe(areaReport?.evidence.count);
+    expect(live.support).toEqual(areaReport?.support);
   });
 });

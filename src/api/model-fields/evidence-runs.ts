@@ -20,7 +20,11 @@ export function useUpdateEvidenceRuns(outlookId: string) {
     mutationFn: (input: UpdateEvidenceRunsInput) => apiClient.patch(`/api/outlooks/${encodeURIComponent(outlookId)}/evidence-runs`, input, evidenceRunSelectionSchema),
     onSuccess: (selection) => {
       queryClient.setQueryData(evidenceRunsQuery(outlookId).queryKey, selection);
-      return queryClient.invalidateQueries({ queryKey: [...outlooksKeys.all, 'evidence', outlookId] });
+      // The report and the live preview's candidates both follow the runs picked.
+      return Promise.all([
+        queryClient.invalidateQueries({ queryKey: [...outlooksKeys.all, 'evidence', outlookId] }),
+        queryClient.invalidateQueries({ queryKey: [...outlooksKeys.all, 'evidence-candidates', outlookId] }),
+      ]);
     },
     onError: () => queryClient.invalidateQueries({ queryKey: evidenceRunsQuery(outlookId).queryKey }),
   });
