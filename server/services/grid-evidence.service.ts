@@ -1,3 +1,4 @@
+import { toModelRunSummary } from './model-runs.service';
 import { and, asc, desc, eq, gte, inArray, lte } from 'drizzle-orm';
 import { MAX_EVIDENCE_RUNS, type EvidenceRunSelection, type RunBrief, type UpdateEvidenceRunsInput } from '../../shared/contracts/model-fields';
 import { keyFigureKeys, type KeyFigureKey } from '../../shared/sounding/key-figures';
@@ -37,17 +38,8 @@ export function clearRunFiguresCache(): void {
 type RunRow = typeof modelRuns.$inferSelect;
 
 export function toRunSummary(row: RunRow): RunBrief {
-  return {
-    id: row.id,
-    model: row.model,
-    cycleTime: row.cycleTime.toISOString(),
-    forecastHour: row.forecastHour,
-    validTime: row.validTime.toISOString(),
-    gridKind: row.gridKind,
-    nx: row.nx,
-    ny: row.ny,
-    soundingCount: row.soundingCount,
-  };
+  const { id, model, cycleTime, forecastHour, validTime, gridKind, nx, ny, soundingCount } = toModelRunSummary(row);
+  return { id, model, cycleTime, forecastHour, validTime, gridKind, nx, ny, soundingCount };
 }
 
 /** The figure columns of grid_soundings, selected by name: the levels are never read here. */

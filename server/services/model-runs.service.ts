@@ -24,7 +24,8 @@ const DELETE_SLICE = 2000;
 
 type RunRow = typeof modelRuns.$inferSelect;
 
-function toSummary(row: RunRow): ModelRunSummary {
+/** A run row as the runs API shows it. */
+export function toModelRunSummary(row: RunRow): ModelRunSummary {
   const state = modelRunStateSchema.safeParse(row.state);
   return {
     id: row.id,
@@ -55,7 +56,7 @@ export async function listModelRuns(db: DatabaseOrTransaction, query: { model?: 
     .where(and(eq(modelRuns.officeId, office.id), query.model ? eq(modelRuns.model, query.model) : undefined))
     .orderBy(desc(modelRuns.validTime), asc(modelRuns.model), desc(modelRuns.cycleTime))
     .limit(1000);
-  return ok(rows.map(toSummary));
+  return ok(rows.map(toModelRunSummary));
 }
 
 /** Delete a run's grid soundings a slice at a time (the run row stays). */
