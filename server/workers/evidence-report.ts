@@ -1,6 +1,6 @@
 import type { Region, RiskLadder, SupportGuidance } from '../../shared/contracts/office';
 import type { Outlook } from '../../shared/contracts/outlooks';
-import { areaReport, evidencePool, type AreaReport } from '../../shared/evidence/area-report';
+import { areaReport, evidencePool, type AreaReport, type EvidencePool } from '../../shared/evidence/area-report';
 import type { EvidenceSounding } from '../../shared/evidence/evidence';
 import { checkAreas, type AreaCheck } from '../../shared/geometry/area-checks';
 
@@ -15,6 +15,8 @@ export interface EvidenceReportInput {
   guidance: SupportGuidance;
   region: Region;
   source?: 'observed' | 'model' | undefined;
+  /** Pools already made for this period (e.g. a model run's grid soundings), read beside the candidates. */
+  pools?: readonly EvidencePool[];
 }
 
 /**
@@ -22,8 +24,8 @@ export interface EvidenceReportInput {
  * its period (shared/evidence/area-report.ts, the same code the workspace's live preview runs),
  * with the geometry checks of the areas. Pure: runs in the geometry worker pool.
  */
-export function buildEvidenceReport({ outlook, candidates, ladder, guidance, region, source }: EvidenceReportInput): AreaEvidenceReport[] {
-  const pool = evidencePool(candidates, { validFrom: outlook.validFrom, validUntil: outlook.validUntil, source });
+export function buildEvidenceReport({ outlook, candidates, ladder, guidance, region, source, pools = [] }: EvidenceReportInput): AreaEvidenceReport[] {
+  const pool = [evidencePool(candidates, { validFrom: outlook.validFrom, validUntil: outlook.validUntil, source }), ...pools];
   const checks = checkAreas(
     outlook.areas,
     ladder.map((l) => l.key),

@@ -5,6 +5,7 @@ import type { AreaGeometry } from '../../shared/contracts/outlooks';
 import type { SoundingKeyFigures } from '../../shared/contracts/soundings';
 import type { EvidenceSounding } from '../../shared/evidence/evidence';
 import { keyFigureKeys, type KeyFigureKey } from '../../shared/sounding/key-figures';
+import { evidencePool, type EvidencePool } from '../../shared/evidence/area-report';
 import { buildEvidenceReport, type AreaEvidenceReport, type EvidenceReportInput } from './evidence-report';
 
 /**
@@ -42,7 +43,6 @@ export function unpackRunFigures(packed: PackedRunFigures): RunFigures {
 
 type FigureRow = { pointIndex: number; latitude: number; longitude: number; flagCount: number } & Record<KeyFigureKey, number | null>;
 
-/** Typed arrays and a spatial index from rows of one run (also used by the bench and tests). */
 /** Typed arrays and a spatial index from rows of one run (also used by the bench and tests). */
 export function runFiguresFromRows(run: RunBrief, rows: readonly FigureRow[]): RunFigures {
   const count = rows.length;
@@ -206,7 +206,32 @@ export interface GridEvidenceReport {
 export function buildGridEvidenceReport(input: GridEvidenceReportInput): GridEvidenceReport {
   const { runs, ...report } = input;
   const figures = runs.map(unpackRunFigures);
-  const grid = gridCandidates(figures, input.outlook.areas.map((a) => a.geometry));
-  const areas = buildEvidenceReport({ ...report, candidates: grid.length ? [...input.candidates, ...grid] : input.candidates });
+  const from = Date.parse(input.outlook.validFrom);
+  const until = Date.parse(input.outlook.validUntil);
+  // A run's grid soundings share its valid time: the whole run is in the period or none of it.
+  const pools = input.source === 'observed' ? [] : figures.filter((f) => inRange(Date.parse(f.run.validTime), from, until)).map(runPool);
+  const areas = buildEvidenceReport({ ...report, pools });
   return { areas, sourcesByArea: evidenceSources(areas, figures.map((f) => f.run)) };
+}
+
+const inRange = (t: number, from: number, until: number) => t >= from && t <= until;
+
+/** Evidence pools of runs (sorted, figures gathered), made once per run and worker like its soundings. */
+const runPools = new Map<string, EvidencePool>();
+
+function runPool(figures: RunFigures): EvidencePool {
+  const id = figures.run.id;
+  let pool = runPools.get(id);
+  if (pool && pool.soundings.length === figures.count) {
+    runPools.delete(id); // re-insert: most recently used last
+  } else {
+    pool = evidencePool(materializedSoundings(figures), { validFrom: figures.run.validTime, validUntil: figures.run.validTime });
+  }
+  runPools.set(id, pool);
+  while (runPools.size > MAX_MATERIALIZED_RUNS) {
+    const oldest = runPools.keys().next().value;
+    if (oldest === undefined) break;
+    runPools.delete(oldest);
+  }
+  return pool;
 }

@@ -81,6 +81,24 @@ describe('areaReport', () => {
     expect(report.evidence.soundingIds.sort()).toEqual(['x', 'y']);
     expect(report.evidence.stats.mlCape?.median).toBe(2000);
   });
+
+  it('When the soundings come in two pools (uploaded and a model run), then the answer is the one a single pool gives', () => {
+    let seed = 5;
+    const random = () => (seed = (seed * 16807) % 2147483647) / 2147483647;
+    const sounding = (i: number) =>
+      at(`s${i}`, -97 + random() * 8, 35 + random() * 6, { figures: { ...emptyKeyFigures(), mlCape: random() * 3000, muCape: random() < 0.2 ? null : random() * 4000, bulkShear0to6kmMs: random() * 30 } });
+    const soundings = Array.from({ length: 600 }, (_, i) => sounding(i));
+    const level2 = { ...area, levelKey: 'level2', hazards: [{ hazard: 'hail' as const, significant: false }] };
+    const single = areaReport(level2, evidencePool(soundings, period), defaultRiskLadder, defaultSupportGuidance);
+    const split = areaReport(level2, [evidencePool(soundings.slice(0, 250), period), evidencePool(soundings.slice(250), period)], defaultRiskLadder, defaultSupportGuidance);
+    expect(single.evidence.count).toBeGreaterThan(100);
+    expect(split.evidence.count).toBe(single.evidence.count);
+    expect(split.evidence.stats).toEqual(single.evidence.stats);
+    expect(split.support.result).toBe(single.support.result);
+    expect(split.support.reasons).toEqual(single.support.reasons);
+    expect([...split.support.backing].sort()).toEqual([...single.support.backing].sort());
+    expect(split.support.hazards.map((h) => h.reasons)).toEqual(single.support.hazards.map((h) => h.reasons));
+  });
 });
 
 describe('soundingJudgements', () => {

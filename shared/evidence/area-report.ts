@@ -1,7 +1,7 @@
 import { bbox, booleanPointInPolygon } from '@turf/turf';
 import type { RiskLadder, SupportGuidance } from '../contracts/office';
 import type { AreaGeometry, HazardKind } from '../contracts/risk-areas';
-import { evidenceOfSoundings, soundingsInPeriod, type AreaEvidence, type EvidenceSounding } from './evidence';
+import { evidenceOfSoundings, gatherFigures, pickFigures, type FigureColumns, soundingsInPeriod, type AreaEvidence, type EvidenceSounding } from './evidence';
 import { checkSupport, type SupportCheck } from './support-check';
 
 /**
@@ -39,6 +39,8 @@ export interface EvidencePool {
   readonly soundings: readonly EvidenceSounding[];
   readonly longitudes: Float64Array;
   readonly latitudes: Float64Array;
+  /** The key figures of `soundings`, gathered once for every area asked of this pool. */
+  readonly columns: FigureColumns;
 }
 
 export interface PoolFilter {
@@ -53,17 +55,38 @@ export interface PoolFilter {
  * one source, without modified (what-if) soundings, which are neither observations nor forecasts.
  */
 export function evidencePool(candidates: readonly EvidenceSounding[], { validFrom, validUntil, source }: PoolFilter): EvidencePool {
-  const soundings = soundingsInPeriod(
+  const kept = soundingsInPeriod(
     candidates.filter((s) => !s.modified),
     validFrom,
     validUntil,
     source,
-  ).sort((a, b) => a.longitude - b.longitude);
+  );
+  const unsorted = Float64Array.from(kept, (s) => s.longitude);
+  const order = longitudeOrder(unsorted);
+  const soundings = Array.from(order, (i) => kept[i] as EvidenceSounding); // i < kept.length
   return {
     soundings,
-    longitudes: Float64Array.from(soundings, (s) => s.longitude),
+    longitudes: Float64Array.from(order, (i) => unsorted[i] ?? NaN),
     latitudes: Float64Array.from(soundings, (s) => s.latitude),
+    columns: gatherFigures(soundings),
   };
+}
+
+const INDEX_BITS = 2 ** 20;
+
+/**
+ * The order of positions by longitude. Each key is the longitude in micro-degrees east of
+ * 180 °W times 2²⁰ plus the position's index (below 2⁵³, so exact), so one native numeric sort
+ * of a typed array orders them, far faster than a sort with a comparator; larger pools fall back
+ * to the comparator. Ties closer than a micro-degree (0.1 m) keep their input order.
+ */
+function longitudeOrder(longitudes: Float64Array): Uint32Array {
+  const n = longitudes.length;
+  if (n >= INDEX_BITS) return Uint32Array.from(longitudes, (_, i) => i).sort((a, b) => (longitudes[a] ?? 0) - (longitudes[b] ?? 0));
+  const keys = new Float64Array(n);
+  for (let i = 0; i < n; i++) keys[i] = Math.round(((longitudes[i] ?? 0) + 180) * 1e6) * INDEX_BITS + i;
+  keys.sort();
+  return Uint32Array.from(keys, (key) => key % INDEX_BITS);
 }
 
 /** First index whose longitude is >= `value` (binary search over the sorted longitudes). */
@@ -82,19 +105,22 @@ function lowerBound(sorted: Float64Array, value: number): number {
  * Soundings of the pool whose station lies inside the geometry, in the pool's order. A station
  * exactly on the outline counts as inside; one in a hole does not (Turf point-in-polygon).
  */
-export function soundingsInArea(pool: EvidencePool, geometry: AreaGeometry): EvidenceSounding[] {
+export function soundingsInArea(pool: EvidencePool, geometry: AreaGeometry, positions?: number[]): EvidenceSounding[] {
   const [west, south, east, north] = bbox(geometry);
   const inside: EvidenceSounding[] = [];
   const position: [number, number] = [0, 0];
-  for (let i = lowerBound(pool.longitudes, west); i < pool.longitudes.length; i++) {
+  for (let i = lowerBound(pool.longitudes, west - 1e-6); i < pool.longitudes.length; i++) {
     const longitude = pool.longitudes[i] ?? Infinity;
-    if (longitude > east) break;
+    if (longitude > east + 1e-6) break; // the order is exact to a micro-degree
     const latitude = pool.latitudes[i] ?? NaN;
     if (latitude < south || latitude > north) continue;
     position[0] = longitude;
     position[1] = latitude;
     const sounding = pool.soundings[i];
-    if (sounding && booleanPointInPolygon(position, geometry)) inside.push(sounding);
+    if (sounding && booleanPointInPolygon(position, geometry)) {
+      inside.push(sounding);
+      positions?.push(i);
+    }
   }
   return inside;
 }
@@ -104,15 +130,28 @@ export function soundingsInArea(pool: EvidencePool, geometry: AreaGeometry): Evi
  * The one place the report calls the support check: each sounding inside is judged against
  * every rule of the level and of each hazard flagged on the area.
  */
-function judge(area: ReportArea, inside: readonly EvidenceSounding[], ladder: RiskLadder, guidance: SupportGuidance): SupportCheck {
-  return checkSupport({ inside: [...inside], levelKey: area.levelKey, hazards: [...area.hazards], ladder, guidance });
+function judge(area: ReportArea, inside: EvidenceSounding[], columns: FigureColumns, ladder: RiskLadder, guidance: SupportGuidance): SupportCheck {
+  return checkSupport({ inside, levelKey: area.levelKey, hazards: [...area.hazards], ladder, guidance, columns });
 }
 
+let scratch: Float64Array | undefined;
+
 /** One area's evidence (soundings inside and the statistics of each parameter) and its support check. */
-export function areaReport(area: ReportArea, pool: EvidencePool, ladder: RiskLadder, guidance: SupportGuidance): AreaReport {
-  const inside = soundingsInArea(pool, area.geometry);
-  const evidence = evidenceOfSoundings(area.id, inside);
-  return { areaId: area.id, levelKey: area.levelKey, evidence, support: judge(area, inside, ladder, guidance) };
+export function areaReport(area: ReportArea, pool: EvidencePool | readonly EvidencePool[], ladder: RiskLadder, guidance: SupportGuidance): AreaReport {
+  const pools = Array.isArray(pool) ? (pool as readonly EvidencePool[]) : [pool as EvidencePool];
+  const inside: EvidenceSounding[] = [];
+  const picks = pools.map((p) => {
+    const positions: number[] = [];
+    for (const sounding of soundingsInArea(p, area.geometry, positions)) inside.push(sounding);
+    return { columns: p.columns, positions };
+  });
+  // The figures, copied from the pools' columns, are read by both the statistics and the support check.
+  const columns = pickFigures(picks, scratch);
+  scratch = columns.values; // reused by the next area: the columns do not outlive this call
+  // The support check reads the columns in sounding order; the statistics then reorder them.
+  const support = judge(area, inside, columns, ladder, guidance);
+  const evidence = evidenceOfSoundings(area.id, inside, columns);
+  return { areaId: area.id, levelKey: area.levelKey, evidence, support };
 }
 
 /** How a sounding inside an area stands against the area's level in its support check. */

@@ -1,6 +1,7 @@
 import { bbox, booleanPointInPolygon } from '@turf/turf';
 import type { AreaGeometry } from '../contracts/outlooks';
 import type { SoundingKeyFigures } from '../contracts/soundings';
+import { keyFigureKeys, type KeyFigureKey } from '../sounding/key-figures';
 
 /** A sounding as the evidence panel needs it: where, when, and its key figures (SI units). */
 export interface EvidenceSounding {
@@ -184,56 +185,102 @@ export function soundingsInside<T extends Pick<EvidenceSounding, 'latitude' | 'l
 }
 
 /**
- * One reader per summarised parameter: a named property read stays fast on tens of thousands of
- * soundings, where a read by a variable key is slow once it has seen many keys.
+ * The key figures of the soundings inside an area as columns: `values[column[key] + i]` is the
+ * figure of the i-th sounding, NaN when it has none. Gathered once per area in one pass over the
+ * soundings (named property reads, so each stays fast on tens of thousands of soundings) and read
+ * by both the statistics and the support check.
  */
-const figureReaders: Record<(typeof evidenceParameters)[number]['key'], (figures: SoundingKeyFigures) => number | null> = {
-  mlCape: (f) => f.mlCape,
-  muCape: (f) => f.muCape,
-  mlCin: (f) => f.mlCin,
-  mlLclHeightM: (f) => f.mlLclHeightM,
-  precipitableWaterMm: (f) => f.precipitableWaterMm,
-  bulkShear0to6kmMs: (f) => f.bulkShear0to6kmMs,
-  srh0to1km: (f) => f.srh0to1km,
-  stp: (f) => f.stp,
-  scp: (f) => f.scp,
-  surfaceDewpointC: (f) => f.surfaceDewpointC,
-  surfaceMixingRatioGkg: (f) => f.surfaceMixingRatioGkg,
-  srh0to500m: (f) => f.srh0to500m,
-  criticalAngleDeg: (f) => f.criticalAngleDeg,
-  mlLclLfcGapM: (f) => f.mlLclLfcGapM,
-  lapseRate0to3kmCKm: (f) => f.lapseRate0to3kmCKm,
-  lapseRate3to6kmCKm: (f) => f.lapseRate3to6kmCKm,
-  lapseRate850to500CKm: (f) => f.lapseRate850to500CKm,
-  lapseRate700to500CKm: (f) => f.lapseRate700to500CKm,
-  muCapeHailZone: (f) => f.muCapeHailZone,
-  freezingLevelM: (f) => f.freezingLevelM,
-  effectiveBulkShearMs: (f) => f.effectiveBulkShearMs,
-  bulkShear0to8kmMs: (f) => f.bulkShear0to8kmMs,
-  dcape: (f) => f.dcape,
-  meanWind0to6kmMs: (f) => f.meanWind0to6kmMs,
-  corfidiUpwindMs: (f) => f.corfidiUpwindMs,
-  corfidiDownwindMs: (f) => f.corfidiDownwindMs,
-  warmCloudDepthM: (f) => f.warmCloudDepthM,
-};
+export interface FigureColumns {
+  count: number;
+  /** Start of each figure's column in `values`. */
+  column: Record<KeyFigureKey, number>;
+  values: Float64Array;
+}
+
+const finite = (v: number | null | undefined): number => (v !== null && v !== undefined && Number.isFinite(v) ? v : NaN);
+
+// gatherFigures writes each figure at its place in keyFigureKeys; this list must follow that order.
+const gatheredOrder = ['mlCape', 'muCape', 'mlCin', 'mlLclHeightM', 'precipitableWaterMm', 'bulkShear0to6kmMs', 'srh0to1km', 'stp', 'scp', 'surfaceDewpointC', 'surfaceMixingRatioGkg', 'srh0to500m', 'criticalAngleDeg', 'mlLclLfcGapM', 'lapseRate0to3kmCKm', 'lapseRate3to6kmCKm', 'lapseRate850to500CKm', 'lapseRate700to500CKm', 'muCapeHailZone', 'freezingLevelM', 'effectiveBulkShearMs', 'bulkShear0to8kmMs', 'dcape', 'meanWind0to6kmMs', 'corfidiUpwindMs', 'corfidiDownwindMs', 'warmCloudDepthM'];
+if (gatheredOrder.join() !== keyFigureKeys.join()) throw new Error('gatherFigures does not follow keyFigureKeys');
+
+export function gatherFigures(inside: readonly EvidenceSounding[], reuse?: Float64Array): FigureColumns {
+  const n = inside.length;
+  const column = Object.fromEntries(keyFigureKeys.map((key, k) => [key, k * n])) as Record<KeyFigureKey, number>;
+  // `reuse`: a buffer from an earlier call whose columns are no longer read (saves garbage).
+  const values = reuse && reuse.length >= keyFigureKeys.length * n ? reuse : new Float64Array(keyFigureKeys.length * n);
+  for (let i = 0; i < n; i++) {
+    const f = (inside[i] as EvidenceSounding).figures; // i < n
+    values[0 * n + i] = finite(f.mlCape);
+    values[1 * n + i] = finite(f.muCape);
+    values[2 * n + i] = finite(f.mlCin);
+    values[3 * n + i] = finite(f.mlLclHeightM);
+    values[4 * n + i] = finite(f.precipitableWaterMm);
+    values[5 * n + i] = finite(f.bulkShear0to6kmMs);
+    values[6 * n + i] = finite(f.srh0to1km);
+    values[7 * n + i] = finite(f.stp);
+    values[8 * n + i] = finite(f.scp);
+    values[9 * n + i] = finite(f.surfaceDewpointC);
+    values[10 * n + i] = finite(f.surfaceMixingRatioGkg);
+    values[11 * n + i] = finite(f.srh0to500m);
+    values[12 * n + i] = finite(f.criticalAngleDeg);
+    values[13 * n + i] = finite(f.mlLclLfcGapM);
+    values[14 * n + i] = finite(f.lapseRate0to3kmCKm);
+    values[15 * n + i] = finite(f.lapseRate3to6kmCKm);
+    values[16 * n + i] = finite(f.lapseRate850to500CKm);
+    values[17 * n + i] = finite(f.lapseRate700to500CKm);
+    values[18 * n + i] = finite(f.muCapeHailZone);
+    values[19 * n + i] = finite(f.freezingLevelM);
+    values[20 * n + i] = finite(f.effectiveBulkShearMs);
+    values[21 * n + i] = finite(f.bulkShear0to8kmMs);
+    values[22 * n + i] = finite(f.dcape);
+    values[23 * n + i] = finite(f.meanWind0to6kmMs);
+    values[24 * n + i] = finite(f.corfidiUpwindMs);
+    values[25 * n + i] = finite(f.corfidiDownwindMs);
+    values[26 * n + i] = finite(f.warmCloudDepthM);
+  }
+  return { count: n, column, values };
+}
 
 /** The evidence of one area: which soundings lie inside and the statistics of each parameter. */
 export function areaEvidence(areaId: string, geometry: AreaGeometry, soundings: readonly EvidenceSounding[]): AreaEvidence {
   return evidenceOfSoundings(areaId, soundingsInside(geometry, soundings));
 }
 
-/** The statistics of each parameter over soundings already known to lie inside an area. */
-export function evidenceOfSoundings(areaId: string, inside: readonly EvidenceSounding[]): AreaEvidence {
-  const stats: AreaEvidence['stats'] = {};
-  const values = new Float64Array(inside.length);
-  for (const { key } of evidenceParameters) {
-    let count = 0;
-    const read = figureReaders[key];
-    for (const s of inside) {
-      const v = read(s.figures);
-      if (v !== null && Number.isFinite(v)) values[count++] = v;
+/**
+ * The columns of the soundings at `positions` of one or more larger sets' columns, one set after
+ * the other (`reuse` as in gatherFigures).
+ */
+export function pickFigures(picks: readonly { columns: FigureColumns; positions: readonly number[] }[], reuse?: Float64Array): FigureColumns {
+  const n = picks.reduce((sum, p) => sum + p.positions.length, 0);
+  const column = Object.fromEntries(keyFigureKeys.map((key, k) => [key, k * n])) as Record<KeyFigureKey, number>;
+  const values = reuse && reuse.length >= keyFigureKeys.length * n ? reuse : new Float64Array(keyFigureKeys.length * n);
+  for (const key of keyFigureKeys) {
+    let to = column[key];
+    for (const { columns, positions } of picks) {
+      const from = columns.column[key];
+      for (let j = 0; j < positions.length; j++) values[to + j] = columns.values[from + (positions[j] ?? 0)] ?? NaN;
+      to += positions.length;
     }
-    const summary = summariseInPlace(values.subarray(0, count));
+  }
+  return { count: n, column, values };
+}
+
+/**
+ * The statistics of each parameter over soundings already known to lie inside an area. Given
+ * `columns`, it reorders values inside them (the statistics need no order): read them before.
+ */
+export function evidenceOfSoundings(areaId: string, inside: readonly EvidenceSounding[], columns: FigureColumns = gatherFigures(inside)): AreaEvidence {
+  const stats: AreaEvidence['stats'] = {};
+  const { values } = columns;
+  for (const { key } of evidenceParameters) {
+    // Move the values that exist to the front of the figure's own column, then summarise them there.
+    const start = columns.column[key];
+    let count = 0;
+    for (let i = 0; i < columns.count; i++) {
+      const v = values[start + i] ?? NaN;
+      if (v === v) values[start + count++] = v; // NaN: no value
+    }
+    const summary = summariseInPlace(values.subarray(start, start + count));
     if (summary) stats[key] = summary;
   }
   const flaggedCount = inside.filter((s) => s.figures.flagCount > 0).length;
@@ -244,8 +291,15 @@ export function evidenceOfSoundings(areaId: string, inside: readonly EvidenceSou
 export function soundingsInPeriod<T extends Pick<EvidenceSounding, 'validTime' | 'source'>>(soundings: readonly T[], validFrom: string, validUntil: string, source?: 'observed' | 'model'): T[] {
   const from = Date.parse(validFrom);
   const until = Date.parse(validUntil);
+  // Grid soundings of one run share one valid time: parse each distinct time once.
+  let lastText = '';
+  let lastTime = NaN;
   return soundings.filter((s) => {
-    const t = Date.parse(s.validTime);
+    if (s.validTime !== lastText) {
+      lastText = s.validTime;
+      lastTime = Date.parse(s.validTime);
+    }
+    const t = lastTime;
     return t >= from && t <= until && (!source || s.source === source);
   });
 }

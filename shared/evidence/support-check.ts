@@ -1,6 +1,6 @@
 import type { GuidanceRule, GuidanceRuleSet, RiskLadder, SupportGuidance } from '../contracts/office';
 import type { HazardKind, RiskArea, RuleJudgement, SupportCheckResult } from '../contracts/risk-areas';
-import type { EvidenceSounding } from './evidence';
+import { gatherFigures, type EvidenceSounding, type FigureColumns } from './evidence';
 import { DEFAULT_MINIMUM_SHARE_PERCENT, describeMiss, describeRule, hazardFormLabel } from './guidance';
 
 export type SupportResult = 'supported' | 'thin' | 'exceeds' | 'none';
@@ -29,7 +29,6 @@ interface Tally {
   lackCount: number[];
 }
 
-const hasValue = (value: number | null | undefined): value is number => value !== null && value !== undefined && Number.isFinite(value);
 
 /**
  * Judges each sounding against every rule at once. A sounding that misses any rule it has a
@@ -38,22 +37,24 @@ const hasValue = (value: number | null | undefined): value is number => value !=
  * property read monomorphic), marking each sounding in a byte array: fast enough to re-run on
  * every vertex move over thousands of soundings.
  */
-function tally(inside: readonly EvidenceSounding[], rules: readonly GuidanceRule[]): Tally {
+function tally(inside: readonly EvidenceSounding[], rules: readonly GuidanceRule[], columns: FigureColumns): Tally {
   const count = inside.length;
   const ruleCount = rules.length;
   const missCount = new Array<number>(ruleCount).fill(0);
   const lackCount = new Array<number>(ruleCount).fill(0);
   // 0: backs so far, 1: lacks a value, 2: misses a rule (missing wins over lacking).
   const state = new Uint8Array(count);
+  const { values } = columns;
   for (let r = 0; r < ruleCount; r++) {
     const rule = rules[r] as GuidanceRule; // r < ruleCount
-    const figure = rule.figure;
+    const start = columns.column[rule.figure];
     const limit = rule.value;
     const isMinimum = rule.bound === 'min';
     let misses = 0;
     for (let i = 0; i < count; i++) {
-      const value = (inside[i] as EvidenceSounding).figures[figure]; // i < count
-      if (!hasValue(value)) {
+      const value = values[start + i] ?? NaN;
+      if (value !== value) {
+        // NaN: the sounding has no value for this figure
         if (state[i] === 0) state[i] = 1;
       } else if (isMinimum ? value < limit : value > limit) {
         state[i] = 2;
@@ -70,7 +71,10 @@ function tally(inside: readonly EvidenceSounding[], rules: readonly GuidanceRule
     if (state[i] === 2) failing.push(sounding.id);
     else if (state[i] === 1) {
       lacking.push(sounding.id);
-      for (let r = 0; r < ruleCount; r++) if (!hasValue(sounding.figures[(rules[r] as GuidanceRule).figure])) lackCount[r] = (lackCount[r] ?? 0) + 1;
+      for (let r = 0; r < ruleCount; r++) {
+        const start = columns.column[(rules[r] as GuidanceRule).figure]; // r < ruleCount
+        if (Number.isNaN(values[start + i] ?? NaN)) lackCount[r] = (lackCount[r] ?? 0) + 1;
+      }
     } else backing.push(sounding.id);
   }
   return { backing, failing, lacking, missCount, lackCount };
@@ -130,7 +134,7 @@ interface Judged {
 }
 
 /** One rule set's judgement of the soundings inside; `set` undefined: no rules are set for it. */
-function judge(inside: readonly EvidenceSounding[], set: GuidanceRuleSet | undefined, name: string): Judged {
+function judge(inside: readonly EvidenceSounding[], columns: FigureColumns, set: GuidanceRuleSet | undefined, name: string): Judged {
   if (inside.length === 0) {
     return { judgement: { result: 'none', reasons: ['No soundings valid in the outlook period lie inside this area.'], backing: [], failing: [], lacking: [] }, verdict: null };
   }
@@ -140,7 +144,7 @@ function judge(inside: readonly EvidenceSounding[], set: GuidanceRuleSet | undef
     const reason = `No rules are set for ${name}: ${plural(inside.length, 'sounding', 'soundings')} inside${enough ? '' : `; ${needCount} needed: thin support`}`;
     return { judgement: { result: enough ? 'supported' : 'thin', reasons: [reason], backing: inside.map((s) => s.id), failing: [], lacking: [] }, verdict: null };
   }
-  const t = tally(inside, set.rules);
+  const t = tally(inside, set.rules, columns);
   const v = verdict(t, set);
   return {
     judgement: { result: v.result, reasons: [countsSentence(t, set.rules, inside.length, name), conclusion(v, t, name)], backing: t.backing, failing: t.failing, lacking: t.lacking },
@@ -149,9 +153,9 @@ function judge(inside: readonly EvidenceSounding[], set: GuidanceRuleSet | undef
 }
 
 /** Whether a stronger rule set (the next level, the significant form) is supported too, with its reason. */
-function exceeded(inside: readonly EvidenceSounding[], base: Judged, stronger: GuidanceRuleSet | undefined, strongerName: string, baseName: string): Judged {
+function exceeded(inside: readonly EvidenceSounding[], columns: FigureColumns, base: Judged, stronger: GuidanceRuleSet | undefined, strongerName: string, baseName: string): Judged {
   if (base.judgement.result !== 'supported' || !stronger || stronger.rules.length === 0) return base;
-  const t = tally(inside, stronger.rules);
+  const t = tally(inside, stronger.rules, columns);
   if (verdict(t, stronger).result !== 'supported') return base;
   const reason = `${t.backing.length} of ${plural(inside.length, 'sounding', 'soundings')} also ${t.backing.length === 1 ? 'backs' : 'back'} ${strongerName}: the environment exceeds ${baseName}`;
   return { ...base, judgement: { ...base.judgement, result: 'exceeds', reasons: [...base.judgement.reasons, reason] } };
@@ -166,20 +170,21 @@ function exceeded(inside: readonly EvidenceSounding[], base: Judged, stronger: G
  * ordinary or significant form). Advisory: it never blocks saving or publishing. Pure and
  * allocation-light: runs on the server and in the browser while a vertex moves.
  */
-export function checkSupport(input: { inside: EvidenceSounding[]; levelKey: string; hazards: HazardFlag[]; ladder: RiskLadder; guidance: SupportGuidance }): SupportCheck {
+export function checkSupport(input: { inside: EvidenceSounding[]; levelKey: string; hazards: HazardFlag[]; ladder: RiskLadder; guidance: SupportGuidance; columns?: FigureColumns }): SupportCheck {
   const { inside, levelKey, hazards, ladder, guidance } = input;
+  const columns = input.columns ?? gatherFigures(inside);
   const index = ladder.findIndex((l) => l.key === levelKey);
   const levelName = ladder[index]?.label ?? levelKey;
   const next = index >= 0 ? ladder[index + 1] : undefined;
-  let level = judge(inside, guidance.levels[levelKey], levelName);
-  if (next) level = exceeded(inside, level, guidance.levels[next.key], next.label, levelName);
+  let level = judge(inside, columns, guidance.levels[levelKey], levelName);
+  if (next) level = exceeded(inside, columns, level, guidance.levels[next.key], next.label, levelName);
   return {
     ...level.judgement,
     hazards: hazards.map(({ hazard, significant }) => {
       const forms = guidance.hazards[hazard as HazardKind];
       const name = hazardFormLabel(hazard, significant);
-      let judged = judge(inside, significant ? forms?.significant : forms?.ordinary, name);
-      if (!significant) judged = exceeded(inside, judged, forms?.significant, hazardFormLabel(hazard, true), name);
+      let judged = judge(inside, columns, significant ? forms?.significant : forms?.ordinary, name);
+      if (!significant) judged = exceeded(inside, columns, judged, forms?.significant, hazardFormLabel(hazard, true), name);
       return { ...judged.judgement, hazard, significant };
     }),
   };

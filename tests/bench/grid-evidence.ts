@@ -22,9 +22,9 @@ export const gridEvidenceSixAreas: BenchFigure = {
   measure() {
     const figures = syntheticRun();
     const run = figures.run;
-    const core = demoOutlookAreas[demoOutlookAreas.length - 1];
-    if (!core) throw new Error('grid evidence bench: the demo outlook has no areas');
-    const areas: RiskArea[] = [...demoOutlookAreas, { ...core, levelKey: 'level4' }].map((a, i) => ({ ...a, id: `a${i}`, sortOrder: i }));
+    // The demo draft's six hand-drawn areas.
+    const areas: RiskArea[] = demoOutlookAreas.slice(0, 6).map((a, i) => ({ ...a, id: `a${i}`, sortOrder: i }));
+    if (areas.length !== 6) throw new Error('grid evidence bench: the demo outlook should have six areas');
     const outlook = { areas, validFrom: '2027-04-18T12:00:00.000Z', validUntil: '2027-04-19T11:00:00.000Z' };
     const packed = [packRunFigures(figures)];
     const once = () => buildGridEvidenceReport({ outlook, candidates: [], ladder: defaultRiskLadder, guidance: defaultSupportGuidance, region: demoOffice.region, runs: packed }).areas;
