@@ -1,2 +1,0 @@
-import { verifyOneIssuance } from './verification';
-console.log(verifyOneIssuance.name, await verifyOneIssuance.measure());
