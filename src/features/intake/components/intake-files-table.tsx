@@ -34,8 +34,8 @@ export function IntakeFilesTable({ files }: { files: IntakeFile[] }) {
             const progress = progressText(file);
             return (
               <tr key={file.id} className={clsx(file.state === 'failed' && 'bg-danger-soft/40')}>
-                <td className="px-3 py-2">
-                  <span className="font-mono text-[13px] break-all">{file.fileName}</span>
+                <td className="min-w-40 px-3 py-2">
+                  <span className="font-mono text-[13px] [overflow-wrap:anywhere]">{file.fileName}</span>
                   <span className="block text-[12px] text-ink-muted">{formatTimestampUtc(file.receivedAt)}</span>
                 </td>
                 <td className="px-3 py-2 text-[13px]">{file.sourceName}</td>
