@@ -1,4 +1,4 @@
-import { copyFile, mkdtemp, rename, rm } from 'node:fs/promises';
+import { copyFile, mkdtemp, readFile, rename, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -112,5 +112,18 @@ describe('a GRIB2 run dropped into the intake folder', () => {
     const live = evidenceAreaReport(savedArea, pool, office.body.riskLadder, office.body.guidance);
     expect(live.evidence.count).toBe(areaReport?.evidence.count);
     expect(live.support).toEqual(areaReport?.support);
+  });
+
+  it('When a truncated GRIB2 file lands, then it is listed as failed with a reason and the stored run is untouched', async () => {
+    const whole = await readFile(path.join(scratch, 'run.grib2'));
+    await writeFile(path.join(scratch, 'cut.grib2'), whole.subarray(0, Math.floor(whole.length / 3)));
+    await rename(path.join(scratch, 'cut.grib2'), path.join(folder, 'cut-off.grib2'));
+    const file = await finished('cut-off.grib2');
+    expect(file.state).toBe('failed');
+    expect(file.failure ?? '').toMatch(/truncated or damaged/);
+    expect(file.runIds).toEqual([]);
+    const runs = modelRunSummarySchema.array().parse((await forecaster.get('/api/model-runs')).body);
+    expect(runs.filter((r) => r.state === 'ready').map((r) => r.soundingCount)).toEqual([points]);
+    expect((await forecaster.get('/api/health')).status).toBe(200);
   });
 });
