@@ -9,6 +9,7 @@ import { createServer } from 'node:net';
 import type { Config } from '../../server/config';
 import { listen, type Stormdraft } from '../../server/start';
 import { startTestApp } from '../api/helpers/test-app';
+import { demoPassword } from '../../server/services/seed.service';
 
 export const chromiumPath = '/usr/bin/chromium';
 
@@ -94,4 +95,13 @@ export async function expectAccessible(page: Page, what = ''): Promise<void> {
   const where = `${new URL(page.url()).pathname}${what ? ` (${what})` : ''}`;
   const lines = results.flatMap((v) => [`- ${v.id} [${v.impact}] ${v.help}: ${v.nodes.length} element(s)`, ...v.nodes.map((n) => `    ${n}`)]);
   throw new Error(`axe-core found ${results.length} WCAG 2.1 A/AA violation(s) on ${where}:\n${lines.join('\n')}`);
+}
+
+/** Signs a demo account in through the sign-in page and waits for the page it lands on. */
+export async function signIn(page: Page, baseUrl: string, email: string, landing = '/desk'): Promise<void> {
+  await page.goto(`${baseUrl}/sign-in`);
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password', { exact: true }).fill(demoPassword);
+  await page.getByRole('button', { name: 'Sign in', exact: true }).click();
+  await page.waitForURL((url) => url.pathname === landing);
 }

@@ -1,7 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { demoPassword } from '../../server/services/seed.service';
-import { expectAccessible, startBrowserJourney, type BrowserJourney } from './browser';
+import { expectAccessible, startBrowserJourney, type BrowserJourney, signIn } from './browser';
 import { cappedCsv, cappedProfile } from './capped-sounding';
 
 /*
@@ -46,11 +45,7 @@ describe('browser journey: a capped sounding and heights in feet, from upload to
 
   beforeAll(async () => {
     page = await journey.browser.newPage();
-    await page.goto(`${journey.baseUrl}/sign-in`);
-    await page.getByLabel('E-mail').fill('forecaster@demo.stormdraft.test');
-    await page.getByLabel('Password', { exact: true }).fill(demoPassword);
-    await page.getByRole('button', { name: 'Sign in', exact: true }).click();
-    await page.waitForURL((url) => url.pathname === '/desk');
+    await signIn(page, journey.baseUrl, 'forecaster@demo.stormdraft.test');
   });
   afterAll(async () => {
     await page?.close();

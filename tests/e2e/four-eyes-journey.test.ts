@@ -1,6 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { demoPassword } from '../../server/services/seed.service';
-import { startBrowserJourney, type BrowserJourney } from './browser';
+import { startBrowserJourney, type BrowserJourney, signIn } from './browser';
 
 /**
  * The review screen's buttons come from the same shared function the server enforces
@@ -19,11 +18,7 @@ describe('four-eyes on the review screen', () => {
   it('When the lead wrote and submitted the draft, then the lead sees Return but no Approve, and the reason', async () => {
     const page = await journey.browser.newPage();
     const headers = { Origin: journey.baseUrl };
-    await page.goto(`${journey.baseUrl}/sign-in`);
-    await page.getByLabel('E-mail').fill('lead@demo.stormdraft.test');
-    await page.getByLabel('Password', { exact: true }).fill(demoPassword);
-    await page.getByRole('button', { name: 'Sign in', exact: true }).click();
-    await page.waitForURL((url) => url.pathname === '/review');
+    await signIn(page, journey.baseUrl, 'lead@demo.stormdraft.test', '/review');
 
     const created = await page.request.post(`${journey.baseUrl}/api/outlooks`, { headers, data: { day: 3, headline: 'Written by the lead' } });
     expect(created.status()).toBe(201);

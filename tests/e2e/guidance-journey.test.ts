@@ -1,6 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { demoPassword } from '../../server/services/seed.service';
-import { expectAccessible, startBrowserJourney, type BrowserJourney } from './browser';
+import { expectAccessible, startBrowserJourney, type BrowserJourney, signIn } from './browser';
 
 let journey: BrowserJourney;
 beforeAll(async () => {
@@ -13,11 +12,7 @@ afterAll(async () => {
 describe('browser journey: the admin edits the support-check guidance (issue 14)', () => {
   it('When the admin adds a maximum to Level 1 with the keyboard and saves, then the office stores it in SI units', async () => {
     const page = await journey.browser.newPage();
-    await page.goto(`${journey.baseUrl}/sign-in`);
-    await page.getByLabel('E-mail').fill('admin@demo.stormdraft.test');
-    await page.getByLabel('Password', { exact: true }).fill(demoPassword);
-    await page.getByRole('button', { name: 'Sign in', exact: true }).click();
-    await page.waitForURL((url) => url.pathname === '/admin/users');
+    await signIn(page, journey.baseUrl, 'admin@demo.stormdraft.test', '/admin/users');
     await page.goto(`${journey.baseUrl}/admin/settings`);
     const add = page.getByRole('button', { name: 'Add a rule to Level 1 · Isolated' });
     await add.waitFor();

@@ -2,8 +2,7 @@ import { copyFile, mkdtemp, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { demoPassword } from '../../server/services/seed.service';
-import { expectAccessible, startBrowserJourney, type BrowserJourney } from './browser';
+import { expectAccessible, startBrowserJourney, type BrowserJourney, signIn } from './browser';
 
 const bufrFolder = path.resolve(import.meta.dirname, '../fixtures/bufr');
 let journey: BrowserJourney;
@@ -21,11 +20,7 @@ afterAll(async () => {
 describe('intake journey', () => {
   it('a forecaster opens Intake, a BUFR file dropped in the folder appears as done with its soundings, a corrupt one as failed with its reason', async () => {
     const page = await journey.browser.newPage();
-    await page.goto(`${journey.baseUrl}/sign-in`);
-    await page.getByLabel('E-mail').fill('forecaster@demo.stormdraft.test');
-    await page.getByLabel('Password', { exact: true }).fill(demoPassword);
-    await page.getByRole('button', { name: 'Sign in', exact: true }).click();
-    await page.waitForURL((url) => url.pathname === '/desk');
+    await signIn(page, journey.baseUrl, 'forecaster@demo.stormdraft.test');
 
     await page.getByRole('link', { name: 'Intake' }).click();
     await page.waitForURL((url) => url.pathname === '/intake');

@@ -1,7 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page, Request } from 'playwright-core';
-import { demoPassword } from '../../server/services/seed.service';
-import { expectAccessible, startBrowserJourney, type BrowserJourney } from './browser';
+import { expectAccessible, startBrowserJourney, type BrowserJourney, signIn } from './browser';
 
 let journey: BrowserJourney;
 beforeAll(async () => {
@@ -12,11 +11,7 @@ afterAll(async () => {
 });
 
 async function signInAsForecaster(page: Page) {
-  await page.goto(`${journey.baseUrl}/sign-in`);
-  await page.getByLabel('E-mail').fill('forecaster@demo.stormdraft.test');
-  await page.getByLabel('Password', { exact: true }).fill(demoPassword);
-  await page.getByRole('button', { name: 'Sign in', exact: true }).click();
-  await page.waitForURL((url) => url.pathname === '/desk');
+  await signIn(page, journey.baseUrl, 'forecaster@demo.stormdraft.test');
 }
 
 const savePhase = (page: Page) => page.getByRole('status', { name: 'Save state' }).getAttribute('data-phase');

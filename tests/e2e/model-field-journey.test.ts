@@ -1,10 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { offices } from '../../server/db/schema';
-import { demoPassword } from '../../server/services/seed.service';
 import { fieldDefinitions } from '../../shared/model-fields/field-bands';
 import { insertGridRun } from '../api/helpers/grid-runs';
-import { expectAccessible, startBrowserJourney, type BrowserJourney } from './browser';
+import { expectAccessible, startBrowserJourney, type BrowserJourney, signIn } from './browser';
 
 let journey: BrowserJourney;
 beforeAll(async () => {
@@ -32,11 +31,7 @@ describe('browser journey: a forecaster draws a model field under the sounding m
   let page: Page;
   beforeAll(async () => {
     page = await journey.browser.newPage();
-    await page.goto(`${journey.baseUrl}/sign-in`);
-    await page.getByLabel('E-mail').fill('forecaster@demo.stormdraft.test');
-    await page.getByLabel('Password', { exact: true }).fill(demoPassword);
-    await page.getByRole('button', { name: 'Sign in', exact: true }).click();
-    await page.waitForURL((url) => url.pathname === '/desk');
+    await signIn(page, journey.baseUrl, 'forecaster@demo.stormdraft.test');
   });
   afterAll(async () => {
     await page?.close();

@@ -5,10 +5,9 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { offices } from '../../server/db/schema';
 import { ingestGribFile } from '../../server/ingest/grib/ingest-grib';
-import { demoPassword } from '../../server/services/seed.service';
 import { closeSoundingPool } from '../../server/workers/sounding-pool';
 import { generateGribFixture, gribPresets } from '../fixtures/grib/generate-grib';
-import { expectAccessible, startBrowserJourney, type BrowserJourney } from './browser';
+import { expectAccessible, startBrowserJourney, type BrowserJourney, signIn } from './browser';
 
 let journey: BrowserJourney;
 let dir: string;
@@ -31,11 +30,7 @@ describe('browser journey: a lead forecaster reads a model run in the library', 
   let page: Page;
   beforeAll(async () => {
     page = await journey.browser.newPage();
-    await page.goto(`${journey.baseUrl}/sign-in`);
-    await page.getByLabel('E-mail').fill('lead@demo.stormdraft.test');
-    await page.getByLabel('Password', { exact: true }).fill(demoPassword);
-    await page.getByRole('button', { name: 'Sign in', exact: true }).click();
-    await page.waitForURL((url) => url.pathname === '/review');
+    await signIn(page, journey.baseUrl, 'lead@demo.stormdraft.test', '/review');
   });
   afterAll(async () => {
     await page?.close();

@@ -1,6 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { demoPassword } from '../../server/services/seed.service';
-import { startBrowserJourney, type BrowserJourney } from './browser';
+import { startBrowserJourney, type BrowserJourney, signIn } from './browser';
 
 /**
  * Issue 12 item 3: opening revision 1 of the demo amendment showed "The server sent an answer
@@ -17,11 +16,7 @@ afterAll(async () => {
 describe('revision pages', () => {
   it('When a forecaster opens every revision of every demo outlook, then each shows its revision number, valid period and map', async () => {
     const page = await journey.browser.newPage();
-    await page.goto(`${journey.baseUrl}/sign-in`);
-    await page.getByLabel('E-mail').fill('forecaster@demo.stormdraft.test');
-    await page.getByLabel('Password', { exact: true }).fill(demoPassword);
-    await page.getByRole('button', { name: 'Sign in', exact: true }).click();
-    await page.waitForURL((url) => url.pathname === '/desk');
+    await signIn(page, journey.baseUrl, 'forecaster@demo.stormdraft.test');
 
     const list = (await (await page.request.get(`${journey.baseUrl}/api/outlooks`)).json()) as { outlooks: { id: string; headline: string; amendsIssuanceId?: string | null }[] };
     expect(list.outlooks.length).toBeGreaterThanOrEqual(3);

@@ -1,8 +1,7 @@
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { demoPassword } from '../../server/services/seed.service';
-import { expectAccessible, startBrowserJourney, type BrowserJourney } from './browser';
+import { expectAccessible, startBrowserJourney, type BrowserJourney, signIn } from './browser';
 
 const fixture = path.resolve(import.meta.dirname, '../fixtures/soundings/oax_20140616_19z.csv');
 
@@ -15,11 +14,7 @@ afterAll(async () => {
 });
 
 async function signInAsForecaster(page: Page) {
-  await page.goto(`${journey.baseUrl}/sign-in`);
-  await page.getByLabel('E-mail').fill('forecaster@demo.stormdraft.test');
-  await page.getByLabel('Password', { exact: true }).fill(demoPassword);
-  await page.getByRole('button', { name: 'Sign in', exact: true }).click();
-  await page.waitForURL((url) => url.pathname === '/desk');
+  await signIn(page, journey.baseUrl, 'forecaster@demo.stormdraft.test');
 }
 
 /** A value from the workbench's index panel, as a number (true minus sign and units stripped). */

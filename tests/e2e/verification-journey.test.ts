@@ -1,6 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { demoPassword } from '../../server/services/seed.service';
-import { startBrowserJourney, type BrowserJourney } from './browser';
+import { startBrowserJourney, type BrowserJourney, signIn } from './browser';
 
 let journey: BrowserJourney;
 beforeAll(async () => {
@@ -13,11 +12,7 @@ afterAll(async () => {
 describe('verification journey', () => {
   it('a lead opens a past issuance, sees the reports and the scores, then the Verification page plots the levels', async () => {
     const page = await journey.browser.newPage();
-    await page.goto(`${journey.baseUrl}/sign-in`);
-    await page.getByLabel('E-mail').fill('lead@demo.stormdraft.test');
-    await page.getByLabel('Password', { exact: true }).fill(demoPassword);
-    await page.getByRole('button', { name: 'Sign in', exact: true }).click();
-    await page.waitForURL((url) => url.pathname === '/review');
+    await signIn(page, journey.baseUrl, 'lead@demo.stormdraft.test', '/review');
 
     // The demo's past issuance: the one whose period has ended.
     const archive = (await (await page.request.get(`${journey.baseUrl}/api/public/issuances`)).json()) as { issuances: { number: string; validUntil: string }[] };
