@@ -23,9 +23,10 @@ beforeAll(async () => {
   anonymous = agentFor(sd.app);
   const forecaster = await signedInAgent(sd.app, 'forecaster');
   const lead = await signedInAgent(sd.app, 'lead');
-  // Day 2 issued now is in force until the end of tomorrow (office time), whatever the hour.
+  // Day 3 issued now is in force until the end of the day after tomorrow and begins more than an
+  // hour from now whatever the hour (a Day 2 begins within the hour between 11 and 12 UTC).
   first = await publishOutlook(forecaster, lead, {
-    day: 2, issuanceTime: now(), headline: 'Hail and wind in the western valleys',
+    day: 3, issuanceTime: now(), headline: 'Hail and wind in the western valleys',
     areas: [
       { levelKey: 'level1', geometry: areaAround(-94, 38, 2), hazards: [{ hazard: 'wind', significant: false }] },
       { levelKey: 'level3', geometry: areaAround(-94, 38, 0.8), hazards: [{ hazard: 'hail', significant: true }] },
@@ -74,8 +75,8 @@ describe('GET /api/public/cap/:issuanceNumber', () => {
     expect(infos.map((i) => text(i, 'severity'))).toEqual(['Severe', 'Moderate']); // level3 then level1 (docs/cap.md table)
     for (const info of infos) {
       expect(text(info, 'category')).toBe('Met');
-      expect(text(info, 'urgency')).toBe('Future'); // Day 2 begins at tomorrow's start, more than an hour away
-      expect(text(info, 'certainty')).toBe('Possible'); // Day 2 (docs/cap.md)
+      expect(text(info, 'urgency')).toBe('Future'); // Day 3 begins more than an hour away
+      expect(text(info, 'certainty')).toBe('Possible'); // Day 3 (docs/cap.md)
       expect(text(info, 'instruction')).toMatch(/planning guidance, not a warning/);
       expect(children(info, 'area')).toHaveLength(1);
     }
